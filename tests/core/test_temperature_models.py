@@ -17,6 +17,14 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import temperature_models as tm
 
 
+def approx(expected, rel=None, abs=None):
+    """pytest.approx without its default abs=1e-12, which would swallow SI quantities
+    such as 1e-8 ohm*m or 1e-31 kg and make a relative check vacuous."""
+    if rel is None:
+        return pytest.approx(expected, abs=0.0 if abs is None else abs)
+    return pytest.approx(expected, rel=rel, abs=0.0 if abs is None else abs)
+
+
 def _bg_integrand(x, n):
     # x^n / ((e^x - 1)(1 - e^-x)), as printed (Ziman 1960 eq. 9.5.15), stable form
     return x ** n * np.exp(-x) / (-np.expm1(-x)) ** 2
@@ -53,7 +61,7 @@ def test_gauss_legendre_order_checked():
 @pytest.mark.parametrize("z", [1e-4, 0.01, 0.3, 1.0, 2.5, 7.0, 15.0, 40.0, 100.0, 1e3])
 def test_bg_integral_against_quad(n, z):
     # scipy.integrate.quad at epsrel 2e-14 (its floor is 50 eps); 1e-12 relative is the accuracy the core promises.
-    assert tm.bloch_gruneisen_integral(n, z) == pytest.approx(_quad_reference(n, z), rel=1e-12)
+    assert tm.bloch_gruneisen_integral(n, z) == approx(_quad_reference(n, z), rel=1e-12)
 
 
 @pytest.mark.parametrize("n", [2.0, 3.0, 4.0, 5.0, 7.0])
@@ -61,7 +69,7 @@ def test_bg_integral_limit_is_factorial_times_zeta(n):
     # J_n(inf) = n! zeta(n) (Ziman 1960 sec. 9.5; J_5(inf) = 124.4313306...).
     # scipy.special.zeta and gamma; the tail beyond z = 1e3 is ~1e-400, so 1e-13.
     expected = special.gamma(n + 1.0) * special.zeta(n)
-    assert tm.bloch_gruneisen_integral(n, 1e3) == pytest.approx(expected, rel=1e-13)
+    assert tm.bloch_gruneisen_integral(n, 1e3) == approx(expected, rel=1e-13)
 
 
 def test_bg_integral_small_z_series():
@@ -69,7 +77,7 @@ def test_bg_integral_small_z_series():
     # at z = 0.01 the next term (~z^10) is below 1e-20 relative.
     z = 0.01
     series = z ** 4 / 4.0 - z ** 6 / 72.0 + z ** 8 / 1920.0
-    assert tm.bloch_gruneisen_integral(5.0, z) == pytest.approx(series, rel=1e-14)
+    assert tm.bloch_gruneisen_integral(5.0, z) == approx(series, rel=1e-14)
 
 
 def test_bg_low_temperature_t5_law():
@@ -78,7 +86,7 @@ def test_bg_low_temperature_t5_law():
     rho0, A, theta = 1e-10, 5e-8, 340.0
     T = 3.4
     expected = rho0 + 120.0 * special.zeta(5.0) * A * (T / theta) ** 5
-    assert tm.bloch_gruneisen_resistivity(T, rho0, A, theta) == pytest.approx(expected,
+    assert tm.bloch_gruneisen_resistivity(T, rho0, A, theta) == approx(expected,
                                                                               rel=1e-12)
 
 
@@ -89,14 +97,14 @@ def test_bg_high_temperature_slope():
     A, theta = 5e-8, 300.0
     T = 3000.0
     expected = A * ((T / theta) / 4.0 - (theta / T) / 72.0)
-    assert tm.bloch_gruneisen_resistivity(T, 0.0, A, theta) == pytest.approx(expected, rel=1e-6)
+    assert tm.bloch_gruneisen_resistivity(T, 0.0, A, theta) == approx(expected, rel=1e-6)
 
 
 def test_bg_matthiessen_phonon_part_independent_of_rho0():
     # Matthiessen's rule: the temperature-dependent part does not depend on the impurity part.
     a = tm.bloch_gruneisen_resistivity(150.0, 0.0, 4e-8, 320.0)
     b = tm.bloch_gruneisen_resistivity(150.0, 3e-9, 4e-8, 320.0)
-    assert b - a == pytest.approx(3e-9, rel=1e-9)
+    assert b - a == approx(3e-9, rel=1e-9)
 
 
 def test_bg_copper_room_temperature_ratio():
@@ -107,12 +115,12 @@ def test_bg_copper_room_temperature_ratio():
     theta = 343.0
     A = tm.bloch_gruneisen_coefficient(273.15, 1.543e-8, 0.0, theta)
     ratio = tm.bloch_gruneisen_resistivity(300.0, 0.0, A, theta) / 1.543e-8
-    assert ratio == pytest.approx(1.725 / 1.543, rel=0.01)
+    assert ratio == approx(1.725 / 1.543, rel=0.01)
 
 
 def test_bg_coefficient_inverts_resistivity():
     A = tm.bloch_gruneisen_coefficient(293.15, 1.7e-8, 1e-10, 330.0)
-    assert tm.bloch_gruneisen_resistivity(293.15, 1e-10, A, 330.0) == pytest.approx(1.7e-8,
+    assert tm.bloch_gruneisen_resistivity(293.15, 1e-10, A, 330.0) == approx(1.7e-8,
                                                                                    rel=1e-14)
 
 
@@ -130,7 +138,7 @@ def test_bg_warnings():
 
 def test_residual_resistivity_from_rrr():
     # Definition RRR = rho(273 K) / rho(4.2 K): RRR 100 from 1.543e-8 gives 1.543e-10.
-    assert tm.residual_resistivity_from_rrr(1.543e-8, 100.0) == pytest.approx(1.543e-10,
+    assert tm.residual_resistivity_from_rrr(1.543e-8, 100.0) == approx(1.543e-10,
                                                                               rel=1e-15)
     with pytest.raises(CoreError, match="ratio must be above 0") as info:
         tm.residual_resistivity_from_rrr(1.543e-8, 0.0)
@@ -146,7 +154,7 @@ def test_residual_resistivity_from_rrr():
 ])
 def test_cvd_pt100_four_decimals(t_c, printed):
     # printed to 0.1 mOhm: half a unit of the last digit
-    assert tm.callendar_van_dusen_resistance(t_c + 273.15, 100.0) == pytest.approx(printed,
+    assert tm.callendar_van_dusen_resistance(t_c + 273.15, 100.0) == approx(printed,
                                                                                    abs=5e-5)
 
 
@@ -157,16 +165,16 @@ def test_cvd_pt100_four_decimals(t_c, printed):
 ])
 def test_cvd_pt100_table(t_c, printed):
     # printed to 0.01 ohm: half a unit of the last digit
-    assert tm.callendar_van_dusen_resistance(t_c + 273.15, 100.0) == pytest.approx(printed,
+    assert tm.callendar_van_dusen_resistance(t_c + 273.15, 100.0) == approx(printed,
                                                                                    abs=0.005)
 
 
 def test_cvd_inverse_of_printed_value():
     # 138.5055 ohm (IEC 60751 Table 1) -> 100 degC; the printed rounding (5e-5 ohm) over the
     # slope 0.379 ohm/K is 1.3e-4 K.
-    assert tm.callendar_van_dusen_temperature(138.5055, 100.0) == pytest.approx(373.15,
+    assert tm.callendar_van_dusen_temperature(138.5055, 100.0) == approx(373.15,
                                                                                 abs=1.5e-4)
-    assert tm.callendar_van_dusen_temperature(18.5201, 100.0) == pytest.approx(73.15, abs=3e-4)
+    assert tm.callendar_van_dusen_temperature(18.5201, 100.0) == approx(73.15, abs=3e-4)
 
 
 @settings(max_examples=300, deadline=None)
@@ -176,7 +184,7 @@ def test_cvd_inverse_roundtrip(t_c):
     # any thermometer's resolution and well above double rounding (~1e-13 K).
     T = t_c + 273.15
     R = tm.callendar_van_dusen_resistance(T, 100.0)
-    assert tm.callendar_van_dusen_temperature(R, 100.0) == pytest.approx(T, abs=1e-9)
+    assert tm.callendar_van_dusen_temperature(R, 100.0) == approx(T, abs=1e-9)
 
 
 def test_cvd_errors_and_warnings():
@@ -197,7 +205,7 @@ RHOS = [0.21e-8, 1.05e-8, 1.54e-8, 1.72e-8, 2.39e-8]
 @pytest.mark.parametrize("T", [77.0, 100.0, 250.0, 273.15, 299.0, 400.0])
 def test_interpolate_matches_numpy(T):
     # numpy.interp implements the same piecewise-linear rule inside the table.
-    assert tm.interpolate_table(T, TEMPS, RHOS) == pytest.approx(np.interp(T, TEMPS, RHOS),
+    assert tm.interpolate_table(T, TEMPS, RHOS) == approx(np.interp(T, TEMPS, RHOS),
                                                                  rel=1e-14)
     assert not tm.is_extrapolated(T, TEMPS)
     assert tm.table_warnings(T, TEMPS) == []
@@ -205,7 +213,7 @@ def test_interpolate_matches_numpy(T):
 
 def test_extrapolation_extends_end_segment_and_warns():
     slope = (RHOS[4] - RHOS[3]) / (TEMPS[4] - TEMPS[3])
-    assert tm.interpolate_table(500.0, TEMPS, RHOS) == pytest.approx(RHOS[4] + 100.0 * slope,
+    assert tm.interpolate_table(500.0, TEMPS, RHOS) == approx(RHOS[4] + 100.0 * slope,
                                                                      rel=1e-14)
     assert tm.is_extrapolated(500.0, TEMPS)
     assert tm.table_warnings(500.0, TEMPS) == [
