@@ -1,0 +1,5 @@
+import sys
+
+from conductor_atlas.cli import main
+
+sys.exit(main())

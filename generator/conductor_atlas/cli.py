@@ -1,0 +1,83 @@
+"""The command line: ``conductor-atlas build | check | serve``.
+
+User mistakes (bad data, a busy output folder, a bad option) print one clear message per
+problem and exit 1, with no traceback.
+"""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from pathlib import Path
+
+from conductor_atlas import __version__
+from conductor_atlas.errors import AtlasError, DataError
+
+
+def build_parser() -> argparse.ArgumentParser:
+    parser = argparse.ArgumentParser(prog="conductor-atlas",
+                                     description="Build the Conductor Atlas reference site from sourced data.")
+    parser.add_argument("--version", action="version", version=f"conductor-atlas {__version__}")
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND")
+    sub.required = True
+
+    p_build = sub.add_parser("build", help="validate the data and build the site")
+    p_build.add_argument("--data", action="append", type=Path, default=[], metavar="DIR",
+                         help="an extra folder of material files (repeatable)")
+    p_build.add_argument("--out", type=Path, default=Path("site"), metavar="DIR",
+                         help="output folder (default: site)")
+
+    p_check = sub.add_parser("check", help="validate the data only")
+    p_check.add_argument("--data", action="append", type=Path, default=[], metavar="DIR",
+                         help="an extra folder of material files (repeatable)")
+
+    p_serve = sub.add_parser("serve", help="serve the built site on http://127.0.0.1")
+    p_serve.add_argument("--dir", type=Path, default=Path("site"), metavar="DIR", help="site folder (default: site)")
+    p_serve.add_argument("--port", type=int, default=8000, help="port (default: 8000)")
+    return parser
+
+
+def cmd_build(args: argparse.Namespace) -> int:
+    from conductor_atlas.build import build
+    report = build(args.out, args.data)
+    print(f"Built {report.materials} materials into {report.out} "
+          f"({report.files} files, {report.bytes / 1024:.0f} KiB) in {report.seconds:.2f} s")
+    return 0
+
+
+def cmd_check(args: argparse.Namespace) -> int:
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.load import load_dataset
+    dataset = load_dataset(data_folders(args.data))
+    values = sum(len(m.properties) for m in dataset.materials)
+    print(f"Data OK: {len(dataset.materials)} materials, {values} values, {len(dataset.sources)} sources")
+    return 0
+
+
+def cmd_serve(args: argparse.Namespace) -> int:
+    from conductor_atlas.serve import serve
+    serve(args.dir, args.port)
+    return 0
+
+
+COMMANDS = {"build": cmd_build, "check": cmd_check, "serve": cmd_serve}
+
+
+def main(argv: list[str] | None = None) -> int:
+    args = build_parser().parse_args(argv)
+    try:
+        return COMMANDS[args.command](args)
+    except DataError as exc:
+        for line in exc.problems:
+            print(f"conductor-atlas: {line}", file=sys.stderr)
+        print(f"conductor-atlas: {len(exc.problems)} problem(s) found; nothing was built", file=sys.stderr)
+        return 1
+    except AtlasError as exc:
+        print(f"conductor-atlas: error: {exc}", file=sys.stderr)
+        return 1
+    except KeyboardInterrupt:
+        return 130
+
+
+if __name__ == "__main__":
+    sys.exit(main())

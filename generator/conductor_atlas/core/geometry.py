@@ -1,0 +1,167 @@
+"""Conductor cross-sections: AWG (ASTM B258), metric nominal sizes (IEC 60228), round wire,
+rectangular bar, and the text forms people type for a size.
+
+Size text accepted by ``parse_size``:
+    "35 mm2", "35 mm²", "250 kcmil"    an area
+    "12 AWG", "AWG 12", "4/0 AWG"      an AWG gauge (solid round wire, ASTM B258 nominal diameter)
+    "d 2.5 mm", "ø2.5 mm", "dia 2.5 mm"  a round wire by diameter
+    "40 x 5 mm", "40x5 mm"             a rectangular bar, width x thickness (one unit for both)
+"""
+
+import math
+import re
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.units import parse_quantity, normalise_text
+
+INCH = 0.0254  # m, exact by definition (1959 international yard and pound agreement)
+
+# IEC 60228:2004 Table 1/2 nominal cross-sectional areas, mm² (the standard specifies a maximum
+# resistance per size, not an exact area; the nominal area is a label).
+IEC60228_SIZES_MM2 = [
+    0.5, 0.75, 1.0, 1.5, 2.5, 4.0, 6.0, 10.0, 16.0, 25.0, 35.0, 50.0, 70.0, 95.0, 120.0,
+    150.0, 185.0, 240.0, 300.0, 400.0, 500.0, 630.0, 800.0, 1000.0, 1200.0, 1400.0, 1600.0,
+    1800.0, 2000.0, 2500.0,
+]
+
+AWG_NAMES = ["4/0", "3/0", "2/0", "1/0"]
+
+
+def awg_number(name):
+    """AWG gauge text -> gauge number n ("4/0" -> -3, "1/0" -> 0, "0000" -> -3, "12" -> 12)."""
+    text = name.strip()
+    for i in range(len(AWG_NAMES)):
+        if text == AWG_NAMES[i]:
+            return i - 3
+    if re.match(r"^0+$", text) is not None:
+        return 1 - len(text)
+    if re.match(r"^[0-9]+$", text) is None:
+        raise CoreError("“" + name + "” is not an AWG gauge (use 4/0 … 56)", "size")
+    n = 0
+    for ch in text:
+        n = n * 10 + "0123456789".find(ch)
+    return n
+
+
+def awg_name(n):
+    """Gauge number -> text (-3 -> "4/0", 12 -> "12")."""
+    if n <= 0:
+        return AWG_NAMES[n + 3]
+    return str(n)
+
+
+def awg_diameter_exact(n):
+    """Diameter of AWG gauge n from the defining geometric series, [m].
+
+    d_n = 0.005 in * 92**((36 - n) / 39)   (ASTM B258-18, section 4; 4/0 is n = -3)
+    """
+    return 0.005 * INCH * math.pow(92.0, (36.0 - n) / 39.0)
+
+
+def awg_diameter(n):
+    """ASTM B258 nominal diameter of AWG gauge n, [m].
+
+    The exact series value rounded to the nearest 0.1 mil (0.0001 in), as the standard's table
+    gives it for gauges 4/0 to 56 (e.g. 4/0: 0.4600 in, 10: 0.1019 in, 30: 0.0100 in).
+    """
+    if n < -3 or n > 56:
+        raise CoreError("AWG gauges run from 4/0 to 56; found " + awg_name(n), "size")
+    mils = awg_diameter_exact(n) / (INCH / 1000.0)
+    rounded_mils = math.floor(mils * 10.0 + 0.5) / 10.0
+    return rounded_mils * INCH / 1000.0
+
+
+def awg_area(n):
+    """Cross-section of a solid round AWG wire from its nominal diameter, [m²]: A = π d² / 4."""
+    d = awg_diameter(n)
+    return math.pi * d * d / 4.0
+
+
+def round_area(diameter):
+    """Area of a round conductor, A = π d² / 4 [m²]; diameter [m]."""
+    return math.pi * diameter * diameter / 4.0
+
+
+def diameter_from_area(area):
+    """Diameter of the round conductor of a given area, d = sqrt(4 A / π) [m]; area [m²]."""
+    return math.sqrt(4.0 * area / math.pi)
+
+
+def size_record(shape, area, label, diameter, width, thickness):
+    """A conductor size as a plain dict (crosses into JS as an object)."""
+    return {
+        "shape": shape,
+        "area": area,
+        "label": label,
+        "diameter": diameter,
+        "width": width,
+        "thickness": thickness,
+    }
+
+
+def parse_size(text, field="size"):
+    """Parse a conductor size (see module docstring) into a size record with SI values.
+
+    Raises CoreError naming ``field`` for anything it cannot read or that is not positive.
+    """
+    if text is None or len(str(text).strip()) == 0:
+        raise CoreError("is empty: enter a size (e.g. 2.5 mm², 12 AWG, d 1.6 mm, 40 x 5 mm)", field)
+    raw = normalise_text(str(text))
+    compact = raw.strip()
+    awg = re.match(r"^(?:awg|ga)\s*#?\s*([0-9/]+)$", compact, re.IGNORECASE)
+    if awg is None:
+        awg = re.match(r"^#?\s*([0-9/]+)\s*(?:awg|ga)$", compact, re.IGNORECASE)
+    if awg is not None:
+        n = awg_number(awg.group(1))
+        d = awg_diameter(n)
+        return size_record("round", awg_area(n), awg_name(n) + " AWG", d, 0.0, 0.0)
+    diameter = re.match(r"^(?:d|dia|diameter|ø|⌀|Ø)\s*=?\s*(.+)$", compact, re.IGNORECASE)
+    if diameter is not None:
+        d = parse_quantity(diameter.group(1), "length", field)
+        if not (d > 0):
+            raise CoreError("diameter must be greater than zero", field)
+        return size_record("round", round_area(d), "ø " + diameter.group(1).strip(), d, 0.0, 0.0)
+    bar = re.match(r"^([0-9.,eE+-]+)\s*[x×*]\s*([0-9.,eE+-]+)\s*(.*)$", compact)
+    if bar is not None:
+        unit = bar.group(3).strip()
+        if len(unit) == 0:
+            raise CoreError("needs a unit for the bar, e.g. 40 x 5 mm", field)
+        w = parse_quantity(bar.group(1) + " " + unit, "length", field)
+        t = parse_quantity(bar.group(2) + " " + unit, "length", field)
+        if not (w > 0 and t > 0):
+            raise CoreError("bar width and thickness must be greater than zero", field)
+        wide = w
+        thin = t
+        if t > w:
+            wide = t
+            thin = w
+        return size_record("bar", w * t, compact, 0.0, wide, thin)
+    area = parse_quantity(compact, "area", field)
+    if not (area > 0):
+        raise CoreError("cross-section must be greater than zero", field)
+    return size_record("area", area, compact, diameter_from_area(area), 0.0, 0.0)
+
+
+def next_metric_size(area):
+    """Smallest IEC 60228 nominal size (mm², as a float) whose nominal area is >= area [m²].
+
+    Returns -1.0 when the area exceeds the largest listed size.
+    """
+    needed = area * 1e6
+    for size in IEC60228_SIZES_MM2:
+        if size >= needed * (1.0 - 1e-12):
+            return size
+    return -1.0
+
+
+def next_awg(area):
+    """Largest AWG gauge number (thinnest wire) whose nominal area is >= area [m²].
+
+    Returns -99 when even 4/0 is too small (use kcmil sizes or parallel conductors).
+    """
+    n = 56
+    while n >= -3:
+        if awg_area(n) >= area * (1.0 - 1e-12):
+            return n
+        n -= 1
+    return -99

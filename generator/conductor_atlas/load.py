@@ -1,0 +1,378 @@
+"""Stage 1: read data/*.toml, parse every quantity with pint, validate, return a DataSet.
+
+Reads files only; writes nothing. Every problem found in any file is collected as
+"file: field: expected ..., found ..." and raised together once, as a DataError.
+"""
+
+from __future__ import annotations
+
+import math
+import re
+import tomllib
+from pathlib import Path
+from types import MappingProxyType
+
+import pint
+
+from conductor_atlas.errors import DataError
+from conductor_atlas.model import DataSet, Material, ResistivityTable, Source, Value
+from conductor_atlas.schema import (CLASSES, MAX_FILE_BYTES, PROPERTIES, RECORD_KEYS, SCHEMA_VERSION,
+                                    TABLE_KEYS, TOP_LEVEL_KEYS)
+
+UREG = pint.UnitRegistry()
+NUMBER_UNIT = re.compile(r"^\s*([+-]?(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(.*)$")
+ID_PATTERN = re.compile(r"^[a-z0-9]+(?:-[a-z0-9]+)*$")
+SOURCE_KINDS = {"standard", "handbook", "paper", "textbook", "datasheet", "practice", "demo"}
+# Pure non-magnetic metals must have ρ rising with T; magnetic ones may show kinks near Curie.
+MAGNETIC = {"relative_permeability", "curie_temperature"}
+
+
+class Problems:
+    """Collects "where: message" lines for one run."""
+
+    def __init__(self) -> None:
+        self.lines: list[str] = []
+
+    def add(self, where: str, message: str) -> None:
+        self.lines.append(f"{where}: {message}")
+
+
+def display_path(path: Path) -> str:
+    try:
+        return str(path.resolve().relative_to(Path.cwd().resolve()))
+    except ValueError:
+        return str(path)
+
+
+def read_toml(path: Path, problems: Problems) -> dict | None:
+    """Read one TOML file; report unreadable, oversized, non-UTF-8 or malformed files."""
+    where = display_path(path)
+    if path.is_symlink() and not path.exists():
+        problems.add(where, "is a broken link")
+        return None
+    if path.is_dir():
+        problems.add(where, "is a directory, expected a .toml file")
+        return None
+    try:
+        size = path.stat().st_size
+        if size > MAX_FILE_BYTES:
+            problems.add(where, f"is {size} bytes; a material file may be at most {MAX_FILE_BYTES} bytes")
+            return None
+        raw = path.read_bytes()
+    except OSError as exc:
+        problems.add(where, f"cannot be read ({exc.strerror})")
+        return None
+    try:
+        text = raw.decode("utf-8")
+    except UnicodeDecodeError as exc:
+        problems.add(where, f"is not UTF-8 text (byte {exc.start}); save it as UTF-8")
+        return None
+    try:
+        return tomllib.loads(text)
+    except tomllib.TOMLDecodeError as exc:
+        problems.add(where, f"is not valid TOML: {exc}")
+        return None
+
+
+def parse_quantity(text: object, unit: str, where: str, problems: Problems) -> float | None:
+    """Parse "value unit" with pint and convert to ``unit``; report dimension and number problems."""
+    if not isinstance(text, str):
+        problems.add(where, f"expected a string such as \"1.72e-8 ohm*m\" (value and unit), found {text!r}")
+        return None
+    match = NUMBER_UNIT.match(text)
+    if match is None:
+        problems.add(where, f"expected a number then a unit, such as \"1.72e-8 ohm*m\", found \"{text}\"")
+        return None
+    unit_text = match.group(2).strip()
+    try:
+        quantity = UREG.Quantity(float(match.group(1)), unit_text or "dimensionless")
+    except Exception as exc:  # pint raises many types for bad unit text; all are a user's typo
+        problems.add(where, f"cannot read the unit \"{unit_text}\" of \"{text}\" ({type(exc).__name__})")
+        return None
+    if not unit_text and not UREG.Quantity(1, unit).dimensionless:
+        problems.add(where, f"\"{text}\" has no unit; expected a value in {unit}")
+        return None
+    try:
+        value = float(quantity.to(unit).magnitude)
+    except pint.DimensionalityError:
+        problems.add(where, f"expected a value in {unit}, found \"{text}\" (units of {quantity.dimensionality})")
+        return None
+    if not math.isfinite(value):
+        problems.add(where, f"expected a finite number, found \"{text}\"")
+        return None
+    return value
+
+
+def parse_temperature(text: object, where: str, problems: Problems) -> float | None:
+    """A condition temperature ("20 degC", "293 K") in K; must be above absolute zero."""
+    if not isinstance(text, str):
+        problems.add(where, f"expected a temperature such as \"20 degC\", found {text!r}")
+        return None
+    match = NUMBER_UNIT.match(text)
+    try:
+        if match is None:
+            raise ValueError(text)
+        quantity = UREG.Quantity(float(match.group(1)), match.group(2).strip() or "K")
+        kelvin = float(quantity.to("K").magnitude)
+    except Exception:
+        problems.add(where, f"expected a temperature such as \"20 degC\" or \"293.15 K\", found \"{text}\"")
+        return None
+    if not math.isfinite(kelvin) or kelvin <= 0:
+        problems.add(where, f"expected a temperature above absolute zero, found \"{text}\"")
+        return None
+    return kelvin
+
+
+def read_record(name: str, record: object, where: str, sources: set[str], problems: Problems) -> Value | None:
+    """Validate one [properties.NAME] table into a Value."""
+    spec = PROPERTIES.get(name)
+    if spec is None:
+        problems.add(where, f"unknown property; expected one of {', '.join(sorted(PROPERTIES))}")
+        return None
+    if not isinstance(record, dict):
+        problems.add(where, "expected a table with value, source and locator")
+        return None
+    for key in sorted(set(record) - RECORD_KEYS):
+        problems.add(f"{where}.{key}", f"unknown key; expected one of {', '.join(sorted(RECORD_KEYS))}")
+    ok = True
+    for key in ("value", "source", "locator"):
+        if key not in record:
+            problems.add(f"{where}.{key}", "is missing (every value needs value, source and locator)")
+            ok = False
+    if not ok:
+        return None
+    source = record["source"]
+    if source not in sources:
+        problems.add(f"{where}.source", f"unknown source key \"{source}\"; add it to data/sources.toml")
+        ok = False
+    value = parse_quantity(record["value"], spec.unit, f"{where}.value", problems)
+    low = parse_quantity(record["min"], spec.unit, f"{where}.min", problems) if "min" in record else None
+    high = parse_quantity(record["max"], spec.unit, f"{where}.max", problems) if "max" in record else None
+    temperature = None
+    if "temperature" in record:
+        temperature = parse_temperature(record["temperature"], f"{where}.temperature", problems)
+    elif spec.needs_temperature:
+        problems.add(f"{where}.temperature", "is missing: this property depends on temperature")
+        ok = False
+    valid_from = parse_temperature(record["valid_from"], f"{where}.valid_from", problems) if "valid_from" in record else None
+    valid_to = parse_temperature(record["valid_to"], f"{where}.valid_to", problems) if "valid_to" in record else None
+    if value is None:
+        return None
+    if not spec.low <= value <= spec.high:
+        problems.add(f"{where}.value", f"expected {spec.label} between {spec.low:g} and {spec.high:g} {spec.unit}, "
+                     f"found \"{record['value']}\" = {value:g} {spec.unit}")
+        ok = False
+    if low is not None and high is not None and not low <= value <= high:
+        problems.add(f"{where}", f"value must lie between min and max, found {record.get('min')} ≤ {record['value']} ≤ {record.get('max')}")
+        ok = False
+    if valid_from is not None and valid_to is not None and valid_from >= valid_to:
+        problems.add(f"{where}", "valid_from must be below valid_to")
+        ok = False
+    if not ok:
+        return None
+    return Value(name=name, si=value, unit=spec.unit, text=record["value"], source=source,
+                 locator=str(record["locator"]), note=str(record.get("note", "")), temperature=temperature,
+                 low=low, high=high, valid_from=valid_from, valid_to=valid_to)
+
+
+def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
+               problems: Problems) -> ResistivityTable | None:
+    """Validate [resistivity_table]: units, source, strictly increasing T, positive ρ."""
+    if not isinstance(table, dict):
+        problems.add(where, "expected a table with temperature_unit, resistivity_unit, points")
+        return None
+    for key in sorted(set(table) - TABLE_KEYS):
+        problems.add(f"{where}.{key}", f"unknown key; expected one of {', '.join(sorted(TABLE_KEYS))}")
+    missing = [k for k in ("temperature_unit", "resistivity_unit", "source", "locator", "points") if k not in table]
+    for key in missing:
+        problems.add(f"{where}.{key}", "is missing")
+    if missing:
+        return None
+    if table["source"] not in sources:
+        problems.add(f"{where}.source", f"unknown source key \"{table['source']}\"; add it to data/sources.toml")
+        return None
+    points = table["points"]
+    if not isinstance(points, list) or len(points) < 2:
+        problems.add(f"{where}.points", "expected a list of at least two [temperature, resistivity] pairs")
+        return None
+    t_unit, r_unit = table["temperature_unit"], table["resistivity_unit"]
+    try:
+        UREG.Quantity(1.0, r_unit).to("ohm * m")
+    except Exception:
+        problems.add(f"{where}.resistivity_unit", f"expected a resistivity unit such as \"uohm*cm\", found \"{r_unit}\"")
+        return None
+    temps: list[float] = []
+    rhos: list[float] = []
+    for i, pair in enumerate(points):
+        here = f"{where}.points[{i}]"
+        if (not isinstance(pair, list) or len(pair) != 2
+                or not all(isinstance(x, (int, float)) and not isinstance(x, bool) for x in pair)):
+            problems.add(here, f"expected [temperature, resistivity] as two numbers, found {pair!r}")
+            return None
+        try:
+            t = float(UREG.Quantity(float(pair[0]), t_unit).to("K").magnitude)
+        except Exception:
+            problems.add(f"{where}.temperature_unit", f"expected a temperature unit such as \"K\" or \"degC\", found \"{t_unit}\"")
+            return None
+        rho = float(UREG.Quantity(float(pair[1]), r_unit).to("ohm * m").magnitude)
+        if not (math.isfinite(t) and math.isfinite(rho)):
+            problems.add(here, f"expected finite numbers, found {pair!r}")
+            return None
+        if t <= 0:
+            problems.add(here, f"temperature {pair[0]} {t_unit} is at or below absolute zero")
+            return None
+        if rho <= 0:
+            problems.add(here, f"resistivity must be positive, found {pair[1]} {r_unit}")
+            return None
+        if temps and t <= temps[-1]:
+            problems.add(here, f"temperatures must increase strictly, found {pair[0]} after "
+                         f"{points[i - 1][0]} {t_unit}")
+            return None
+        if strict_rise and rhos and rho <= rhos[-1]:
+            problems.add(here, f"resistivity of a pure non-magnetic metal must rise with temperature, found "
+                         f"{pair[1]} after {points[i - 1][1]} {r_unit}")
+            return None
+        temps.append(t)
+        rhos.append(rho)
+    return ResistivityTable(tuple(temps), tuple(rhos), table["source"], str(table["locator"]),
+                            str(table.get("note", "")))
+
+
+def read_material(path: Path, sources: set[str], problems: Problems) -> Material | None:
+    """Validate one material file into a Material (None if it has problems, all reported)."""
+    data = read_toml(path, problems)
+    if data is None:
+        return None
+    where = display_path(path)
+    before = len(problems.lines)
+    for key in sorted(set(data) - TOP_LEVEL_KEYS):
+        problems.add(f"{where}: {key}", f"unknown key; expected one of {', '.join(sorted(TOP_LEVEL_KEYS))}")
+    if data.get("schema") != SCHEMA_VERSION:
+        problems.add(f"{where}: schema", f"expected {SCHEMA_VERSION}, found {data.get('schema')!r}")
+    for key in ("id", "name", "class", "summary"):
+        if not isinstance(data.get(key), str) or not data.get(key, "").strip():
+            problems.add(f"{where}: {key}", f"expected a non-empty string, found {data.get(key)!r}")
+    material_id = data.get("id", "")
+    if isinstance(material_id, str) and material_id and not ID_PATTERN.match(material_id):
+        problems.add(f"{where}: id", f"expected a lowercase slug like \"copper-annealed\", found \"{material_id}\"")
+    klass = data.get("class")
+    if isinstance(klass, str) and klass not in CLASSES:
+        problems.add(f"{where}: class", f"expected one of {', '.join(sorted(CLASSES))}, found \"{klass}\"")
+    aliases = data.get("aliases", [])
+    if not isinstance(aliases, list) or not all(isinstance(a, str) and a.strip() for a in aliases):
+        problems.add(f"{where}: aliases", f"expected a list of non-empty strings, found {aliases!r}")
+        aliases = []
+    notes = data.get("notes", "")
+    if not isinstance(notes, str):
+        problems.add(f"{where}: notes", "expected a Markdown string")
+        notes = ""
+    raw_props = data.get("properties", {})
+    if not isinstance(raw_props, dict):
+        problems.add(f"{where}: properties", "expected tables [properties.NAME]")
+        raw_props = {}
+    properties: dict[str, Value] = {}
+    for name in sorted(raw_props):
+        value = read_record(name, raw_props[name], f"{where}: properties.{name}", sources, problems)
+        if value is not None:
+            properties[name] = value
+    if "resistivity" not in raw_props and "conductivity_iacs" not in raw_props:
+        problems.add(f"{where}: properties.resistivity", "is missing (give resistivity or conductivity_iacs)")
+    table = None
+    if "resistivity_table" in data:
+        strict = klass == "pure-metal" and not (MAGNETIC & set(raw_props))
+        table = read_table(data["resistivity_table"], f"{where}: resistivity_table", sources, strict, problems)
+    if len(problems.lines) > before:
+        return None
+    return Material(id=material_id, name=data["name"].strip(), klass=klass, aliases=tuple(a.strip() for a in aliases),
+                    summary=data["summary"].strip(), notes=notes, properties=MappingProxyType(properties),
+                    table=table, path=path)
+
+
+def read_sources(path: Path, problems: Problems) -> dict[str, Source]:
+    """Read a bibliography file: key -> Source."""
+    data = read_toml(path, problems)
+    if data is None:
+        return {}
+    where = display_path(path)
+    allowed = {"kind", "title", "authors", "publisher", "edition", "year", "number", "doi", "note"}
+    out: dict[str, Source] = {}
+    for key, entry in data.items():
+        if not isinstance(entry, dict):
+            problems.add(f"{where}: {key}", "expected a table [key] with kind and title")
+            continue
+        for extra in sorted(set(entry) - allowed):
+            problems.add(f"{where}: {key}.{extra}", f"unknown key; expected one of {', '.join(sorted(allowed))}")
+        if entry.get("kind") not in SOURCE_KINDS:
+            problems.add(f"{where}: {key}.kind", f"expected one of {', '.join(sorted(SOURCE_KINDS))}, found {entry.get('kind')!r}")
+            continue
+        if not isinstance(entry.get("title"), str) or not entry["title"].strip():
+            problems.add(f"{where}: {key}.title", "is missing")
+            continue
+        year = entry.get("year")
+        if year is not None and not isinstance(year, int):
+            problems.add(f"{where}: {key}.year", f"expected a year as a number, found {year!r}")
+            continue
+        out[key] = Source(key=key, kind=entry["kind"], title=entry["title"].strip(),
+                          **{k: str(entry[k]) for k in ("authors", "publisher", "edition", "number", "doi", "note")
+                             if k in entry}, year=year)
+    return out
+
+
+def material_files(folder: Path) -> list[Path]:
+    """The material files of a data folder: FOLDER/materials/*.toml, or FOLDER/*.toml."""
+    sub = folder / "materials"
+    base = sub if sub.is_dir() else folder
+    return sorted(p for p in base.iterdir() if p.name.endswith(".toml") and p.name != "sources.toml")
+
+
+def load_dataset(folders: list[Path]) -> DataSet:
+    """Load and validate every folder (the first is the shipped data/), all problems at once.
+
+    Each folder may hold sources.toml (merged; a key defined twice is an error) and material
+    files. Ids and aliases must be unique across all folders, case-insensitively.
+    """
+    problems = Problems()
+    sources: dict[str, Source] = {}
+    source_origin: dict[str, Path] = {}
+    for folder in folders:
+        if not folder.is_dir():
+            problems.add(display_path(folder), "is not a folder of material files")
+            continue
+        bib = folder / "sources.toml"
+        if bib.exists():
+            for key, src in read_sources(bib, problems).items():
+                if key in sources:
+                    problems.add(f"{display_path(bib)}: {key}", f"source key also defined in {display_path(source_origin[key])}")
+                    continue
+                sources[key] = src
+                source_origin[key] = bib
+    if not sources and not problems.lines:
+        problems.add(display_path(folders[0]), "has no sources.toml (the bibliography)")
+    materials: list[Material] = []
+    for folder in folders:
+        if not folder.is_dir():
+            continue
+        for path in material_files(folder):
+            m = read_material(path, set(sources), problems)
+            if m is not None:
+                materials.append(m)
+    names: dict[str, tuple[str, Path]] = {}
+    for m in materials:
+        for label, kind in [(m.id, "id")] + [(a, "alias") for a in m.aliases]:
+            key = label.casefold()
+            if key in names:
+                other_kind, other = names[key]
+                where = display_path(m.path)
+                if other == m.path:
+                    problems.add(f"{where}: aliases", f"\"{label}\" is listed twice")
+                else:
+                    problems.add(f"{where}: {'id' if kind == 'id' else 'aliases'}",
+                                 f"\"{label}\" clashes with the {other_kind} of {display_path(other)}")
+            else:
+                names[key] = (kind, m.path)
+    if not materials and not problems.lines:
+        problems.add(display_path(folders[0]), "holds no material files")
+    if problems.lines:
+        raise DataError(problems.lines)
+    materials.sort(key=lambda m: m.id)
+    return DataSet(materials=tuple(materials), sources=MappingProxyType(dict(sorted(sources.items()))))

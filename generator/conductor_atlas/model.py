@@ -1,0 +1,118 @@
+"""The validated data set: immutable records with every quantity as an SI float.
+
+Produced by ``conductor_atlas.load``; read by every later stage. Nothing here parses or writes.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from pathlib import Path
+from types import MappingProxyType
+from typing import Mapping
+
+
+@dataclass(frozen=True)
+class Source:
+    """One bibliography entry of data/sources.toml."""
+
+    key: str
+    kind: str
+    title: str
+    authors: str = ""
+    publisher: str = ""
+    edition: str = ""
+    year: int | None = None
+    number: str = ""
+    doi: str = ""
+    note: str = ""
+
+    def citation(self) -> str:
+        """The entry as one line of text: authors, title, number, publisher, edition, year, DOI."""
+        parts = [p for p in (self.authors, self.title, self.number, self.publisher) if p]
+        if self.edition:
+            parts.append(f"{self.edition} ed.")
+        if self.year:
+            parts.append(str(self.year))
+        text = ". ".join(parts)
+        if self.doi:
+            text += f". doi:{self.doi}"
+        return text
+
+
+@dataclass(frozen=True)
+class Value:
+    """One sourced property value, converted to SI.
+
+    ``si`` is the value in ``unit`` (the SI unit of the property); ``temperature`` is the
+    condition in K (or None); ``low``/``high`` the range where the source gives one.
+    """
+
+    name: str
+    si: float
+    unit: str
+    text: str
+    source: str
+    locator: str
+    note: str = ""
+    temperature: float | None = None
+    low: float | None = None
+    high: float | None = None
+    valid_from: float | None = None
+    valid_to: float | None = None
+
+    @property
+    def from_memory(self) -> bool:
+        return "from memory" in self.note.lower()
+
+
+@dataclass(frozen=True)
+class ResistivityTable:
+    """Sourced ρ(T) points: temperatures [K] and resistivities [Ω·m], T strictly increasing."""
+
+    temperatures: tuple[float, ...]
+    resistivities: tuple[float, ...]
+    source: str
+    locator: str
+    note: str = ""
+
+    @property
+    def from_memory(self) -> bool:
+        return "from memory" in self.note.lower()
+
+
+@dataclass(frozen=True)
+class Material:
+    """One conductor material, as validated from its TOML file."""
+
+    id: str
+    name: str
+    klass: str
+    aliases: tuple[str, ...]
+    summary: str
+    notes: str
+    properties: Mapping[str, Value]
+    table: ResistivityTable | None
+    path: Path
+
+    def get(self, name: str) -> Value | None:
+        return self.properties.get(name)
+
+    def source_keys(self) -> list[str]:
+        keys = {v.source for v in self.properties.values()}
+        if self.table is not None:
+            keys.add(self.table.source)
+        return sorted(keys)
+
+
+@dataclass(frozen=True)
+class DataSet:
+    """All materials (sorted by id) and the bibliography (key -> Source)."""
+
+    materials: tuple[Material, ...]
+    sources: Mapping[str, Source] = field(default_factory=lambda: MappingProxyType({}))
+
+    def by_id(self, material_id: str) -> Material:
+        for m in self.materials:
+            if m.id == material_id:
+                return m
+        raise KeyError(material_id)

@@ -1,0 +1,58 @@
+"""Stage 5, the only stage that writes the site: build into a temporary sibling folder, then swap.
+
+A failed build leaves the previous site untouched; two builds into one folder at once are
+refused by a lock; a folder that is not a Conductor Atlas site is never replaced.
+"""
+
+from __future__ import annotations
+
+import fcntl
+import os
+import shutil
+from pathlib import Path
+
+from conductor_atlas.errors import BuildError
+
+MARKER = ".conductor-atlas-site"
+
+
+def check_replaceable(out: Path) -> None:
+    if not out.exists():
+        return
+    if not out.is_dir():
+        raise BuildError(f"{out} exists and is not a folder; choose another --out")
+    if any(out.iterdir()) and not (out / MARKER).is_file():
+        raise BuildError(f"refusing to replace {out}: it is not empty and was not made by conductor-atlas "
+                         f"(no {MARKER} file); choose another --out")
+
+
+def publish(files: dict[str, bytes], out: Path) -> Path:
+    """Write ``files`` (relative path -> bytes) as the new site at ``out``, atomically."""
+    out = out.resolve()
+    out.parent.mkdir(parents=True, exist_ok=True)
+    lock_path = out.parent / f".{out.name}.lock"
+    with open(lock_path, "w") as lock:
+        try:
+            fcntl.flock(lock, fcntl.LOCK_EX | fcntl.LOCK_NB)
+        except BlockingIOError as exc:
+            raise BuildError(f"another build is writing {out} right now; wait for it to finish") from exc
+        check_replaceable(out)
+        staging = out.parent / f".{out.name}.new-{os.getpid()}"
+        if staging.exists():
+            shutil.rmtree(staging)
+        try:
+            for rel in sorted(files):
+                target = staging / rel
+                target.parent.mkdir(parents=True, exist_ok=True)
+                target.write_bytes(files[rel])
+            (staging / MARKER).write_text("Built by conductor-atlas; this folder is replaced on each build.\n")
+        except OSError as exc:
+            shutil.rmtree(staging, ignore_errors=True)
+            raise BuildError(f"could not write the new site next to {out}: {exc.strerror}") from exc
+        old = out.parent / f".{out.name}.old-{os.getpid()}"
+        if out.exists():
+            os.rename(out, old)
+        os.rename(staging, out)
+        if old.exists():
+            shutil.rmtree(old, ignore_errors=True)
+    return out

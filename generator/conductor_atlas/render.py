@@ -1,0 +1,135 @@
+"""Stage 3: turn the data set and derived views into page bytes (HTML, CSV, JSON).
+
+Returns a mapping "relative/path" -> bytes; writes nothing (the publish stage does).
+Templates run under StrictUndefined with autoescaping; Markdown notes have raw HTML escaped.
+"""
+
+from __future__ import annotations
+
+import json
+from dataclasses import dataclass
+from pathlib import Path
+
+import jinja2
+import markdown
+
+from conductor_atlas.derive import CELSIUS, MaterialView
+from conductor_atlas.core.numfmt import format_number, format_fixed
+from conductor_atlas.model import DataSet, Value
+from conductor_atlas.schema import CLASSES, PROPERTIES
+
+SITE_NAME = "Conductor Atlas"
+
+# How a property is shown on the card: (scale to the shown unit, shown unit, significant digits)
+CARD_UNITS = {
+    "resistivity": (1e8, "µΩ·cm", 5),
+    "conductivity_iacs": (1.0, "%IACS", 4),
+    "temperature_coefficient": (1.0, "1/K", 4),
+    "density": (1e-3, "g/cm³", 4),
+    "molar_mass": (1e3, "g/mol", 7),
+    "valence": (1.0, "", 3),
+    "electron_density": (1.0, "m⁻³", 3),
+    "debye_temperature": (1.0, "K", 4),
+    "melting_point": (1.0, "K", 6),
+    "thermal_conductivity": (1.0, "W/(m·K)", 4),
+    "relative_permeability": (1.0, "", 4),
+    "curie_temperature": (1.0, "K", 5),
+    "mean_free_path": (1e9, "nm", 3),
+    "residual_resistivity_ratio": (1.0, "", 4),
+    "tensile_strength": (1e-6, "MPa", 4),
+    "cvd_a": (1.0, "1/K", 5),
+    "cvd_b": (1.0, "1/K²", 4),
+    "cvd_c": (1.0, "1/K⁴", 4),
+}
+
+
+def markdown_safe(text: str) -> str:
+    """Markdown to HTML with any raw HTML in the source shown as text, never as markup."""
+    escaped = text.replace("&", "&amp;").replace("<", "&lt;")
+    return markdown.markdown(escaped, output_format="html")
+
+
+def condition_text(t: float | None) -> str:
+    if t is None:
+        return ""
+    return f"at {format_fixed(t - CELSIUS, 0)} °C" if abs((t - CELSIUS) - round(t - CELSIUS)) < 1e-9 \
+        else f"at {format_fixed(t, 2)} K"
+
+
+@dataclass(frozen=True)
+class CardRow:
+    id: str
+    label: str
+    value: str
+    unit: str
+    condition: str
+    source: str
+    locator: str
+    note: str
+
+
+def card_rows(view: MaterialView) -> list[CardRow]:
+    rows = []
+    for name in PROPERTIES:
+        value: Value | None = view.material.get(name)
+        if value is None:
+            continue
+        scale, unit, sig = CARD_UNITS[name]
+        text = format_number(value.si * scale, sig)
+        if value.low is not None and value.high is not None:
+            text = f"{text} ({format_number(value.low * scale, sig)} – {format_number(value.high * scale, sig)})"
+        rows.append(CardRow(id=f"prop-{name.replace('_', '-')}", label=PROPERTIES[name].label, value=text,
+                            unit=unit, condition=condition_text(value.temperature), source=value.source,
+                            locator=value.locator, note=value.note))
+    return rows
+
+
+class Renderer:
+    """Holds the Jinja environment; ``render_site`` produces every page."""
+
+    def __init__(self, templates_dir: Path, version: str) -> None:
+        self.env = jinja2.Environment(
+            loader=jinja2.FileSystemLoader(str(templates_dir)),
+            autoescape=jinja2.select_autoescape(["html"]),
+            undefined=jinja2.StrictUndefined,
+            trim_blocks=True,
+            lstrip_blocks=True,
+            keep_trailing_newline=True,
+        )
+        self.version = version
+
+    def page(self, template: str, path: str, **context) -> bytes:
+        depth = path.count("/")
+        root = "../" * depth
+        context.setdefault("fmt", format_number)
+        html = self.env.get_template(template).render(root=root, site_name=SITE_NAME, page_path=path,
+                                                      version=self.version, **context)
+        return html.encode("utf-8")
+
+    def render_site(self, dataset: DataSet, views: list[MaterialView]) -> dict[str, bytes]:
+        out: dict[str, bytes] = {}
+        groups = []
+        for klass, title in CLASSES.items():
+            members = [v for v in views if v.material.klass == klass]
+            if members:
+                groups.append({"id": klass, "title": title, "views": members})
+        out["index.html"] = self.page("index.html", "index.html", groups=groups, views=views,
+                                      title=SITE_NAME)
+        for view in views:
+            m = view.material
+            base = f"materials/{m.id}"
+            used = [dataset.sources[k] for k in m.source_keys()]
+            out[f"{base}/index.html"] = self.page(
+                "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view),
+                notes_html=markdown_safe(m.notes), sources=used, title=m.name,
+                calc_json=view.calc)
+            for table in view.tables:
+                out[f"{base}/{table.id}.csv"] = table.to_csv().encode("utf-8")
+                out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")
+        out["references/index.html"] = self.page("references.html", "references/index.html",
+                                                 sources=list(dataset.sources.values()), title="References")
+        out["materials.json"] = (json.dumps(
+            [{"id": v.material.id, "name": v.material.name, "class": v.material.klass,
+              "aliases": list(v.material.aliases), "rho_20": v.rho_20, "iacs_20": v.iacs_20}
+             for v in views], ensure_ascii=False, indent=1) + "\n").encode("utf-8")
+        return out

@@ -1,0 +1,71 @@
+"""What a material file may contain: its keys, each property's SI unit and plausible range.
+
+Read by ``conductor_atlas.load``; documented for people in DEVELOPERS.md ("The material file").
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+SCHEMA_VERSION = 1
+
+CLASSES = {
+    "pure-metal": "High-purity metals",
+    "conductor-grade": "Conductor grades",
+    "copper-alloy": "Copper alloys",
+    "resistance-alloy": "Resistance and heating alloys",
+    "steel": "Steels",
+    "thin-film": "Thin-film metals",
+    "sensor-metal": "Sensor metals",
+}
+
+TOP_LEVEL_KEYS = {"schema", "id", "name", "class", "aliases", "summary", "notes", "properties",
+                  "resistivity_table"}
+RECORD_KEYS = {"value", "min", "max", "temperature", "valid_from", "valid_to", "source", "locator",
+               "note"}
+TABLE_KEYS = {"temperature_unit", "resistivity_unit", "source", "locator", "note", "points"}
+
+
+@dataclass(frozen=True)
+class PropertySpec:
+    """A property's SI unit (as pint reads it), its label, and the range a real conductor lies in."""
+
+    unit: str
+    label: str
+    low: float
+    high: float
+    needs_temperature: bool = False
+
+
+# low/high are sanity limits (a typo check), not physics claims: a value outside is an error.
+PROPERTIES = {
+    "resistivity": PropertySpec("ohm * m", "resistivity", 1e-9, 1e-4, True),
+    "conductivity_iacs": PropertySpec("percent", "conductivity (%IACS)", 0.1, 120.0, True),
+    "temperature_coefficient": PropertySpec("1 / K", "temperature coefficient of resistance",
+                                            -1e-3, 1e-2, True),
+    "density": PropertySpec("kg / m ** 3", "density", 100.0, 25000.0),
+    "molar_mass": PropertySpec("kg / mol", "molar mass", 1e-3, 0.3),
+    "valence": PropertySpec("dimensionless", "conduction electrons per atom", 0.1, 8.0),
+    "electron_density": PropertySpec("1 / m ** 3", "conduction-electron density", 1e27, 1e30),
+    "debye_temperature": PropertySpec("K", "Debye temperature", 10.0, 2500.0),
+    "melting_point": PropertySpec("K", "melting point", 200.0, 4000.0),
+    "thermal_conductivity": PropertySpec("W / (m * K)", "thermal conductivity", 0.5, 5000.0, True),
+    "relative_permeability": PropertySpec("dimensionless", "relative permeability", 0.9, 1e6),
+    "curie_temperature": PropertySpec("K", "Curie temperature", 100.0, 2000.0),
+    "mean_free_path": PropertySpec("m", "electron mean free path", 1e-11, 1e-6, True),
+    "residual_resistivity_ratio": PropertySpec("dimensionless", "residual resistivity ratio",
+                                               1.0, 1e6),
+    "tensile_strength": PropertySpec("Pa", "tensile strength", 1e6, 5e9),
+    "cvd_a": PropertySpec("1 / K", "Callendar–Van Dusen A", 1e-3, 1e-2),
+    "cvd_b": PropertySpec("1 / K ** 2", "Callendar–Van Dusen B", -1e-5, 1e-5),
+    "cvd_c": PropertySpec("1 / K ** 4", "Callendar–Van Dusen C", -1e-10, 1e-10),
+}
+
+# SI unit symbols shown on pages for each property
+DISPLAY_UNITS = {
+    "ohm * m": "Ω·m", "percent": "%", "1 / K": "1/K", "kg / m ** 3": "kg/m³", "kg / mol": "kg/mol",
+    "dimensionless": "", "1 / m ** 3": "m⁻³", "K": "K", "W / (m * K)": "W/(m·K)", "m": "m",
+    "Pa": "Pa", "1 / K ** 2": "1/K²", "1 / K ** 4": "1/K⁴",
+}
+
+MAX_FILE_BYTES = 1_000_000
