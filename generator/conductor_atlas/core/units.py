@@ -162,6 +162,9 @@ def parse_number(text, field):
         raise CoreError("expected a number first, found “" + text + "”", field)
     number_text = match.group(1)
     rest = match.group(2)
+    if re.match(r"^[.,][0-9]", rest) is not None:
+        raise CoreError("“" + text + "” mixes a decimal comma and a decimal point, or has two separators; "
+                        "write it as 1234.5 or 1234,5", field)
     if number_text.find(",") >= 0:
         if number_text.find(".") >= 0:
             raise CoreError("“" + number_text + "” mixes a decimal comma and a decimal point", field)

@@ -1,0 +1,48 @@
+"""The core stays inside the Transcrypt subset: every forbidden construct is named with file:line."""
+
+from pathlib import Path
+
+import pytest
+
+from tests.support.subset import violations
+
+CORE = Path(__file__).resolve().parents[2] / "generator" / "conductor_atlas" / "core"
+
+
+def test_core_uses_only_the_transcrypt_subset():
+    found = []
+    for path in sorted(CORE.glob("*.py")):
+        found.extend(violations(path.read_text(encoding="utf-8"), f"{path.parent.name}/{path.name}"))
+    assert found == [], "constructs Transcrypt cannot carry:\n" + "\n".join(found)
+
+
+@pytest.mark.parametrize("snippet, words", [
+    ("from .units import parse", "relative import"),
+    ("import json", "import of 'json'"),
+    ("x = f'{y:.3g}'", "format spec"),
+    ("x = '%d' % 3", "% string formatting"),
+    ("x = [1] + [2]", "list + list"),
+    ("x = [0] * 4", "[x] * n"),
+    ("ok = a == [1, 2]", "== between lists"),
+    ("v = x[-1]", "negative index"),
+    ("n = int(x)", "int()"),
+    ("y = math.isfinite(x)", "math.isfinite"),
+    ("s = t.zfill(3)", ".zfill()"),
+    ("s = t.strip('x')", "ignores its argument"),
+    ("length = 3", "name 'length'"),
+    ("a, *b = c", "star-unpacking"),
+    ("ok = 0 < x < 1", "chained comparison"),
+    ("@dataclass\nclass A:\n    pass", "class decorators"),
+    ("if isinstance(x, float):\n    pass", "isinstance"),
+])
+def test_checker_names_each_forbidden_construct(snippet, words):
+    found = violations(snippet, "probe.py")
+    assert found, f"not flagged: {snippet!r}"
+    assert words in found[0]
+    assert found[0].startswith("probe.py:")
+
+
+def test_checker_accepts_plain_core_code():
+    code = ("import math\nfrom conductor_atlas.core.errors import CoreError\n"
+            "def area(d):\n    return math.pi * d * d / 4.0\n")
+    assert violations(code, "ok.py") == []
