@@ -10,6 +10,8 @@ byte-identical in both runtimes.
 
 import math
 
+from conductor_atlas.core.errors import CoreError
+
 SUPERSCRIPT_DIGITS = "⁰¹²³⁴⁵⁶⁷⁸⁹"
 
 SI_PREFIXES = [
@@ -27,7 +29,10 @@ def decimal_digits(x):
     """Split a finite float into [sign, digits, exponent] with x = sign * 0.d1d2d3... * 10**exponent.
 
     ``digits`` has no leading or trailing zeros ("0" for zero, with exponent 1).
+    Raises CoreError for NaN and infinities (their text differs between the runtimes).
     """
+    if not is_finite(x):
+        raise CoreError("not a finite number")
     text = str(x)
     sign = 1
     if text[0] == "-":
@@ -205,10 +210,10 @@ def format_fixed(x, decimals):
     if not is_finite(x):
         return "—"
     scale = math.pow(10, decimals)
+    if abs(x) * scale >= 1e15:
+        return format_number(x, 6)
     n = math.floor(abs(x) * scale + 0.5)
     text = str(n)
-    if text.find("e") >= 0:
-        return format_number(x, 6)
     while len(text) <= decimals:
         text = "0" + text
     if decimals > 0:
