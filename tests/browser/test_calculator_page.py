@@ -1,0 +1,101 @@
+"""In Chromium: a material page's calculator gives the same numbers as the Python core."""
+
+from __future__ import annotations
+
+import json
+from urllib.parse import quote
+
+import pytest
+
+from conductor_atlas.build import data_folders
+from conductor_atlas.core.calculators import calculate
+from conductor_atlas.derive import derive
+from conductor_atlas.load import load_dataset
+
+pytestmark = pytest.mark.browser
+
+
+@pytest.fixture(scope="module")
+def calc_materials():
+    views = derive(load_dataset(data_folders()))
+    return {v.material.id: v.calc for v in views if v.calc is not None}
+
+
+@pytest.fixture()
+def page(browser):
+    context = browser.new_context(viewport={"width": 900, "height": 1200})
+    pg = context.new_page()
+    errors = []
+    pg.on("pageerror", lambda e: errors.append(str(e)))
+    pg.on("console", lambda m: errors.append(m.text) if m.type == "error" else None)
+    pg.errors = errors
+    yield pg
+    context.close()
+
+
+def result_values(pg):
+    return pg.eval_on_selector_all(
+        "[data-result]", "els => Object.fromEntries(els.map(e => [e.dataset.result, e.dataset.value ?? null]))")
+
+
+CASES = [
+    ("copper-annealed", {"length": "1 km", "size": "10 AWG", "temperature": "20 °C", "current": "10 A"}),
+    ("aluminium-1350", {"length": "350 ft", "size": "4/0 AWG", "temperature": "75 °C", "current": "180 A"}),
+    ("silver", {"length": "2,5 m", "size": "d 0.8 mm", "temperature": "90 degC", "current": "2 A"}),
+]
+
+
+@pytest.mark.parametrize("material_id, inputs", CASES)
+def test_typed_inputs_match_python(page, served_site, calc_materials, material_id, inputs):
+    page.goto(f"{served_site}/materials/{material_id}/index.html")
+    page.wait_for_selector("html.calc-ready")
+    for name, text in inputs.items():
+        page.fill(f"input[name={name}]", text)
+    expected = calculate("resistance", inputs, calc_materials[material_id])
+    assert expected["errors"] == {}
+    shown = result_values(page)
+    for name, result in expected["results"].items():
+        if name not in shown:
+            continue
+        assert shown[name] is not None, f"{name} has no data-value"
+        assert float(shown[name]) == pytest.approx(result["value"], rel=1e-12)
+        assert page.text_content(f"[data-result={name}]") == result["text"]
+    assert "resistance" in shown and shown["resistance"] is not None
+    # the inputs are mirrored in the URL so a link reopens the calculation
+    for name, text in inputs.items():
+        assert quote(text, safe="").replace("%20", "+") in page.url or quote(text) in page.url
+    assert page.errors == []
+
+
+def test_permalink_reopens_the_calculation(page, served_site, calc_materials):
+    inputs = {"length": "35 m", "size": "2.5 mm2", "temperature": "90 °C", "current": "16 A"}
+    query = "&".join(f"{k}={quote(v)}" for k, v in inputs.items())
+    page.goto(f"{served_site}/materials/copper-annealed/index.html?{query}")
+    page.wait_for_selector("html.calc-ready")
+    expected = calculate("resistance", inputs, calc_materials["copper-annealed"])
+    shown = result_values(page)
+    assert float(shown["voltage_drop"]) == pytest.approx(expected["results"]["voltage_drop"]["value"], rel=1e-12)
+    assert page.input_value("input[name=temperature]") == "90 °C"
+
+
+def test_bad_input_names_the_field(page, served_site):
+    page.goto(f"{served_site}/materials/copper-annealed/index.html")
+    page.wait_for_selector("html.calc-ready")
+    page.fill("input[name=size]", "5 kg")
+    assert "unknown unit" in page.text_content("#in-size-error")
+    assert page.get_attribute("input[name=size]", "aria-invalid") == "true"
+    assert page.text_content("[data-result=resistance]") == "—"
+    body = page.text_content("body")
+    assert "NaN" not in body and "undefined" not in body
+    assert page.errors == []
+
+
+def test_file_url_reads_and_explains(browser, built_site):
+    context = browser.new_context()
+    pg = context.new_page()
+    pg.goto((built_site / "materials" / "copper-annealed" / "index.html").as_uri())
+    note = pg.locator(".needs-server")
+    assert note.is_visible()
+    assert "served over http" in note.text_content()
+    assert pg.locator("#resistivity-temperature table tbody tr").count() > 5
+    context.close()
