@@ -99,6 +99,19 @@ def size_record(shape, area, label, diameter, width, thickness):
     }
 
 
+def usable_area(area, field):
+    """``area`` [m²] when it is finite and above zero; a CoreError naming ``field`` otherwise.
+
+    A diameter or bar side that parses can still give an area that overflows to infinity
+    ("d 1e200 m") or underflows to zero ("d 1e-200 mm"); either would reach R = ρL/A.
+    """
+    if not (area - area == 0):
+        raise CoreError("the cross-section is too large to compute with", field)
+    if not (area > 0):
+        raise CoreError("the cross-section is too small to compute with (it rounds to zero)", field)
+    return area
+
+
 def parse_size(text, field="size"):
     """Parse a conductor size (see module docstring) into a size record with SI values.
 
@@ -120,7 +133,8 @@ def parse_size(text, field="size"):
         d = parse_quantity(diameter.group(1), "length", field)
         if not (d > 0):
             raise CoreError("diameter must be greater than zero", field)
-        return size_record("round", round_area(d), "ø " + diameter.group(1).strip(), d, 0.0, 0.0)
+        return size_record("round", usable_area(round_area(d), field), "ø " + diameter.group(1).strip(), d,
+                           0.0, 0.0)
     bar = re.match(r"^([0-9.,eE+-]+)\s*[x×*]\s*([0-9.,eE+-]+)\s*(.*)$", compact)
     if bar is not None:
         unit = bar.group(3).strip()
@@ -135,7 +149,7 @@ def parse_size(text, field="size"):
         if t > w:
             wide = t
             thin = w
-        return size_record("bar", w * t, compact, 0.0, wide, thin)
+        return size_record("bar", usable_area(w * t, field), compact, 0.0, wide, thin)
     area = parse_quantity(compact, "area", field)
     if not (area > 0):
         raise CoreError("cross-section must be greater than zero", field)
