@@ -1,0 +1,230 @@
+"""Shop-floor formulas: winding temperature by the resistance method, equal-resistance
+comparison of two materials, and the minimum cross-section for a voltage-drop limit.
+
+Temperatures are in kelvin at every interface; the resistance-method constant k is the
+(positive) magnitude of the inferred zero-resistance temperature below 0 degC, in kelvin
+(234.5 for copper). Choosing the next standard conductor size belongs to the geometry
+module; this one returns areas. Pure Python in the Transcrypt subset; CoreError for
+impossible inputs.
+"""
+
+from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.errors import CoreError
+
+# Inferred zero-resistance temperature below 0 degC, [K]. From memory: IEEE Std 118 and
+# IEEE Std 112 use 234.5 for copper (100 % IACS) and 225 for aluminium (EC grade, ~62 % IACS);
+# IEC 60034-1 (clause on the resistance method) rounds copper to 235 and uses 225 for
+# aluminium.
+K_COPPER = 234.5
+K_ALUMINIUM = 225.0
+
+
+def _positive(x, field, what):
+    if not (x - x == 0) or x <= 0.0:
+        raise CoreError(what + " must be a finite number above 0", field)
+
+
+def inferred_zero_from_alpha(alpha, T_ref):
+    """Resistance-method constant k from a material's temperature coefficient.
+
+    k = 1 / alpha - t_ref   (t_ref in degC; the linear R(t) extrapolates to zero at t = -k)
+
+    Parameters
+    ----------
+    alpha : float
+        Temperature coefficient of resistance at T_ref, [1/K]
+    T_ref : float
+        Reference temperature of alpha, [K]
+
+    Returns
+    -------
+    k : float
+        Magnitude of the inferred zero below 0 degC, [K]
+
+    Notes
+    -----
+    Annealed copper, alpha_20 = 0.00393 /K (IEC 60028 standard annealed copper): k = 234.5.
+    """
+    _positive(alpha, "alpha", "temperature coefficient")
+    _positive(T_ref, "T_ref", "reference temperature")
+    return 1.0 / alpha - (T_ref - ZERO_CELSIUS)
+
+
+def resistance_method_temperature(R1, T1, R2, k=K_COPPER):
+    """Winding temperature from its resistance rise (the resistance method).
+
+    t2 = (R2 / R1)(k + t1) - k   (t in degC; here T = t + 273.15 in and out)
+
+    Parameters
+    ----------
+    R1 : float
+        Cold resistance, measured at T1, [ohm]
+    T1 : float
+        Winding temperature at the cold measurement, [K]
+    R2 : float
+        Hot resistance, [ohm]
+    k : float, optional
+        Inferred zero below 0 degC, [K]; 234.5 for copper, 225 for aluminium, or
+        inferred_zero_from_alpha for another material
+
+    Returns
+    -------
+    T2 : float
+        Mean winding temperature at the hot measurement, [K]
+
+    Notes
+    -----
+    Gives the mean temperature of the winding (hot spots are higher). Assumes a linear R(T)
+    between the two states, good for copper and aluminium from -50 to 200 degC.
+
+    References
+    ----------
+    1. IEC 60034-1, Rotating electrical machines - Rating and performance, clause on
+       determining winding temperature by the resistance method (from memory).
+    2. IEEE Std 118, Standard test code for resistance measurement (from memory).
+    """
+    _positive(R1, "R1", "cold resistance")
+    _positive(R2, "R2", "hot resistance")
+    _positive(T1, "T1", "temperature")
+    _positive(k, "k", "k")
+    t1 = T1 - ZERO_CELSIUS
+    if not (k + t1 > 0.0):
+        raise CoreError("cold temperature lies below the inferred zero -k", "T1")
+    return (R2 / R1) * (k + t1) - k + ZERO_CELSIUS
+
+
+def temperature_rise(R1, T1, R2, T_coolant, k=K_COPPER):
+    """Temperature rise of a winding over its coolant by the resistance method.
+
+    dtheta = (R2 - R1) / R1 (k + t1) + t1 - t_a
+
+    Parameters
+    ----------
+    R1 : float
+        Cold resistance at T1, [ohm]
+    T1 : float
+        Winding temperature at the cold measurement, [K]
+    R2 : float
+        Hot resistance, [ohm]
+    T_coolant : float
+        Coolant (ambient) temperature at the end of the test, [K]
+    k : float, optional
+        Inferred zero below 0 degC, [K]
+
+    Returns
+    -------
+    rise : float
+        Temperature rise, [K]
+
+    References
+    ----------
+    1. IEC 60034-1, clause on the resistance method (from memory).
+    """
+    _positive(T_coolant, "T_coolant", "coolant temperature")
+    return resistance_method_temperature(R1, T1, R2, k) - T_coolant
+
+
+def equal_resistance_area_ratio(rho1, rho2):
+    """Cross-section ratio A2 / A1 for equal resistance at equal length: A2/A1 = rho2/rho1.
+
+    Parameters
+    ----------
+    rho1 : float
+        Resistivity of the reference material, [ohm*m]
+    rho2 : float
+        Resistivity of the candidate, [ohm*m]
+
+    Returns
+    -------
+    ratio : float
+        A2 / A1, [-]
+    """
+    _positive(rho1, "rho1", "resistivity")
+    _positive(rho2, "rho2", "resistivity")
+    return rho2 / rho1
+
+
+def equal_resistance_diameter_ratio(rho1, rho2):
+    """Diameter ratio d2 / d1 of round conductors for equal resistance: sqrt(rho2 / rho1).
+
+    Parameters
+    ----------
+    rho1 : float
+        Resistivity of the reference material, [ohm*m]
+    rho2 : float
+        Resistivity of the candidate, [ohm*m]
+
+    Returns
+    -------
+    ratio : float
+        d2 / d1, [-]
+    """
+    return equal_resistance_area_ratio(rho1, rho2) ** 0.5
+
+
+def equal_resistance_mass_ratio(rho1, density1, rho2, density2):
+    """Mass ratio m2 / m1 for equal resistance at equal length: (rho2 d2) / (rho1 d1).
+
+    Parameters
+    ----------
+    rho1 : float
+        Resistivity of the reference material, [ohm*m]
+    density1 : float
+        Mass density of the reference material, [kg/m^3]
+    rho2 : float
+        Resistivity of the candidate, [ohm*m]
+    density2 : float
+        Mass density of the candidate, [kg/m^3]
+
+    Returns
+    -------
+    ratio : float
+        m2 / m1, [-]
+
+    Notes
+    -----
+    EC aluminium against annealed copper: about 0.50 (half the mass for the same
+    resistance, with 1.64 times the area).
+    """
+    _positive(density1, "density1", "density")
+    _positive(density2, "density2", "density")
+    return equal_resistance_area_ratio(rho1, rho2) * density2 / density1
+
+
+def voltage_drop_min_area(rho, current, route_length, max_drop, wires=2.0):
+    """Smallest cross-section that keeps the resistive voltage drop within a limit.
+
+    A_min = wires * rho * L * I / dV_max
+
+    Parameters
+    ----------
+    rho : float
+        Resistivity at the operating temperature, [ohm*m]
+    current : float
+        Current, [A]
+    route_length : float
+        One-way route length L, [m]
+    max_drop : float
+        Allowed voltage drop, [V]
+    wires : float, optional
+        Conductor length per unit route length, [-]: 2 for a two-wire DC or single-phase
+        circuit (out and back), 1 when route_length is already the whole conductor
+        length, sqrt(3) for the line-to-line drop of a balanced three-phase circuit
+
+    Returns
+    -------
+    A : float
+        Minimum conductor cross-section, [m^2]
+
+    Notes
+    -----
+    Resistive drop only: no reactance or power factor, no skin effect; pick rho at the
+    conductor's operating temperature. A physics estimate, not an installation rule: the
+    next standard size and the current rating follow the local electrical code.
+    """
+    _positive(rho, "rho", "resistivity")
+    _positive(current, "current", "current")
+    _positive(route_length, "route_length", "route length")
+    _positive(max_drop, "max_drop", "allowed voltage drop")
+    _positive(wires, "wires", "wires")
+    return wires * rho * route_length * current / max_drop
