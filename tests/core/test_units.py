@@ -23,10 +23,14 @@ PINT_NAME = {
     "w": "W", "mw": "mW", "kw": "kW",
     "a/m2": "A/m**2", "a/mm2": "A/mm**2", "a/cm2": "A/cm**2",
     "%": "percent",
+    "kg/m3": "kg/m**3", "g/cm3": "g/cm**3",
+    "1/k": "1/K", "1/degc": "1/delta_degC", "ppm/k": "ppm/K",
+    "w/(m*k)": "W/(m*K)", "w/m/k": "W/m/K",
 }
 SI_IN_PINT = {"length": "m", "area": "m**2", "temperature": "K", "current": "A", "frequency": "Hz",
               "voltage": "V", "resistance": "ohm", "resistivity": "ohm*m", "power": "W",
-              "current_density": "A/m**2", "ratio": "dimensionless"}
+              "current_density": "A/m**2", "ratio": "dimensionless",
+              "density": "kg/m**3", "temperature_coefficient": "1/K", "thermal_conductivity": "W/(m*K)"}
 
 
 def test_every_unit_has_a_pint_counterpart():

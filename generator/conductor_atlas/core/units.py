@@ -26,6 +26,7 @@ SI_UNIT = {
     "density": "kg/m³",
     "ratio": "",
     "temperature_coefficient": "1/K",
+    "thermal_conductivity": "W/(m·K)",
 }
 
 # normalised spelling -> [kind, factor, offset]; offset only for temperatures
@@ -89,6 +90,16 @@ UNITS = {
     "a/m2": ["current_density", 1.0, 0.0],
     "a/mm2": ["current_density", 1e6, 0.0],
     "a/cm2": ["current_density", 1e4, 0.0],
+    # density (search filters such as "density < 3 g/cm3")
+    "kg/m3": ["density", 1.0, 0.0],
+    "g/cm3": ["density", 1000.0, 0.0],
+    # temperature coefficient of resistance ("alpha > 0.004 1/K"); a kelvin step equals a degC step
+    "1/k": ["temperature_coefficient", 1.0, 0.0],
+    "1/degc": ["temperature_coefficient", 1.0, 0.0],
+    "ppm/k": ["temperature_coefficient", 1e-6, 0.0],
+    # thermal conductivity ("thermal conductivity > 300 W/(m·K)")
+    "w/(m*k)": ["thermal_conductivity", 1.0, 0.0],
+    "w/m/k": ["thermal_conductivity", 1.0, 0.0],
     # plain ratios
     "%": ["ratio", 0.01, 0.0],
 }
@@ -119,6 +130,9 @@ KIND_WORDS = {
     "power": "a power (e.g. 10 W)",
     "current_density": "a current density (e.g. 4 A/mm²)",
     "ratio": "a ratio (e.g. 3 % or 0.03)",
+    "density": "a density (e.g. 8.9 g/cm³, 2700 kg/m³)",
+    "temperature_coefficient": "a temperature coefficient (e.g. 0.0039 1/K, 3900 ppm/K)",
+    "thermal_conductivity": "a thermal conductivity (e.g. 400 W/(m·K))",
 }
 
 
