@@ -21,6 +21,7 @@ from conductor_atlas.schema import (CLASSES, MAX_FILE_BYTES, PROPERTIES, RECORD_
 
 UREG = pint.UnitRegistry()
 NUMBER_UNIT = re.compile(r"^\s*([+-]?(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(.*)$")
+NON_FINITE = re.compile(r"^\s*[+-]?(?:nan|inf|infinity)\b", re.IGNORECASE)
 ID_PATTERN = re.compile(r"^[a-z0-9]+(?:-[a-z0-9]+)*$")
 SOURCE_KINDS = {"standard", "handbook", "paper", "textbook", "datasheet", "practice", "demo"}
 # Pure non-magnetic metals must have ρ rising with T; magnetic ones may show kinks near Curie.
@@ -53,6 +54,9 @@ def read_toml(path: Path, problems: Problems) -> dict | None:
     if path.is_dir():
         problems.add(where, "is a directory, expected a .toml file")
         return None
+    if not path.is_file():
+        problems.add(where, "is not a regular file (a device, pipe or socket), expected a .toml file")
+        return None
     try:
         size = path.stat().st_size
         if size > MAX_FILE_BYTES:
@@ -81,7 +85,8 @@ def parse_quantity(text: object, unit: str, where: str, problems: Problems) -> f
         return None
     match = NUMBER_UNIT.match(text)
     if match is None:
-        problems.add(where, f"expected a number then a unit, such as \"1.72e-8 ohm*m\", found \"{text}\"")
+        problems.add(where, f"expected a number then a unit, such as \"1.72e-8 ohm*m\", found \"{text}\""
+                     + (" (nan and inf are not finite numbers)" if NON_FINITE.match(text) else ""))
         return None
     unit_text = match.group(2).strip()
     try:
@@ -109,6 +114,9 @@ def parse_temperature(text: object, where: str, problems: Problems) -> float | N
         problems.add(where, f"expected a temperature such as \"20 degC\", found {text!r}")
         return None
     match = NUMBER_UNIT.match(text)
+    if match is None and NON_FINITE.match(text):
+        problems.add(where, f"expected a finite temperature, found \"{text}\"")
+        return None
     try:
         if match is None:
             raise ValueError(text)
@@ -142,7 +150,10 @@ def read_record(name: str, record: object, where: str, sources: set[str], proble
     if not ok:
         return None
     source = record["source"]
-    if source not in sources:
+    if not isinstance(source, str):
+        problems.add(f"{where}.source", f"expected a source key (a string naming an entry of sources.toml), found {source!r}")
+        ok = False
+    elif source not in sources:
         problems.add(f"{where}.source", f"unknown source key \"{source}\"; add it to data/sources.toml")
         ok = False
     value = parse_quantity(record["value"], spec.unit, f"{where}.value", problems)
@@ -163,10 +174,10 @@ def read_record(name: str, record: object, where: str, sources: set[str], proble
                      f"found \"{record['value']}\" = {value:g} {spec.unit}")
         ok = False
     if low is not None and high is not None and not low <= value <= high:
-        problems.add(f"{where}", f"value must lie between min and max, found {record.get('min')} ≤ {record['value']} ≤ {record.get('max')}")
+        problems.add(f"{where}.value", f"must lie between min and max, found {record.get('min')} ≤ {record['value']} ≤ {record.get('max')}")
         ok = False
     if valid_from is not None and valid_to is not None and valid_from >= valid_to:
-        problems.add(f"{where}", "valid_from must be below valid_to")
+        problems.add(f"{where}.valid_from", f"must be below valid_to, found {record['valid_from']} and {record['valid_to']}")
         ok = False
     if not ok:
         return None
@@ -187,6 +198,10 @@ def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
     for key in missing:
         problems.add(f"{where}.{key}", "is missing")
     if missing:
+        return None
+    if not isinstance(table["source"], str):
+        problems.add(f"{where}.source", f"expected a source key (a string naming an entry of sources.toml), "
+                     f"found {table['source']!r}")
         return None
     if table["source"] not in sources:
         problems.add(f"{where}.source", f"unknown source key \"{table['source']}\"; add it to data/sources.toml")
@@ -302,7 +317,7 @@ def read_sources(path: Path, problems: Problems) -> dict[str, Source]:
             continue
         for extra in sorted(set(entry) - allowed):
             problems.add(f"{where}: {key}.{extra}", f"unknown key; expected one of {', '.join(sorted(allowed))}")
-        if entry.get("kind") not in SOURCE_KINDS:
+        if not isinstance(entry.get("kind"), str) or entry["kind"] not in SOURCE_KINDS:
             problems.add(f"{where}: {key}.kind", f"expected one of {', '.join(sorted(SOURCE_KINDS))}, found {entry.get('kind')!r}")
             continue
         if not isinstance(entry.get("title"), str) or not entry["title"].strip():
