@@ -1,6 +1,8 @@
 """Stage 2: compute everything the pages show, with the core's functions (floats in SI).
 
-No file access here: the result is plain data for the render stage.
+No file access here: the result is plain data for the render stage. The calculators'
+catalogue record of each material (``calc_record``) is made here too, so the browser, the CLI
+and the tables all start from the same numbers.
 """
 
 from __future__ import annotations
@@ -8,16 +10,23 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from conductor_atlas.core import resistance as dc
-from conductor_atlas.core.numfmt import format_fixed, format_number
+from conductor_atlas.core.carriers import electron_density
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.lookup import fold
+from conductor_atlas.core.material_models import resistivity_at
+from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
 from conductor_atlas.model import DataSet, Material
-from conductor_atlas.tables import Column, Row, Table, temperature_row_id
+from conductor_atlas.tables import Table
+from conductor_atlas.material_tables import material_tables
 
 CELSIUS = 273.15
+T20 = CELSIUS + 20.0
 # The span of the linear model when a file gives none: −50 °C … +200 °C is the trade's usual
 # working range for conductor metals (common practice (no source)); pages say so.
 DEFAULT_VALID_FROM = CELSIUS - 50.0
 DEFAULT_VALID_TO = CELSIUS + 200.0
-TABLE_TEMPERATURES_C = [-40.0, -20.0, 0.0, 20.0, 40.0, 60.0, 70.0, 80.0, 90.0, 105.0, 120.0, 150.0, 200.0]
+FIT_LIMIT = 2.0  # fit Bloch–Grüneisen to table points up to this multiple of the Debye temperature
+MAGNETIC_PROPERTIES = ("relative_permeability", "curie_temperature")
 
 
 @dataclass(frozen=True)
@@ -40,22 +49,23 @@ def reference_resistivity(m: Material) -> tuple[float, float, str]:
     """(ρ [Ω·m], temperature [K], source key) from resistivity, or from %IACS at 20 °C."""
     value = m.get("resistivity")
     if value is not None:
-        return value.si, value.temperature or CELSIUS + 20.0, value.source
+        return value.si, value.temperature or T20, value.source
     iacs = m.get("conductivity_iacs")
-    return dc.resistivity_from_iacs(iacs.si), iacs.temperature or CELSIUS + 20.0, iacs.source
+    return dc.resistivity_from_iacs(iacs.si), iacs.temperature or T20, iacs.source
 
 
 def linear_model(m: Material) -> LinearModel | None:
     """The material's linear ρ(T) model, or None when it has no temperature coefficient.
 
-    When ρ and α are given at different temperatures, ρ is moved to α's reference temperature
-    with the same linear model: ρ(T_α) = ρ(T_ρ) / (1 + α (T_ρ − T_α)).
+    α is referred to its own temperature T_α (20 °C or 0 °C, as the source gives it). When ρ
+    is given at another temperature it is moved to T_α with the same model:
+    ρ(T_α) = ρ(T_ρ) / (1 + α (T_ρ − T_α)).
     """
     alpha = m.get("temperature_coefficient")
     if alpha is None:
         return None
     rho, t_rho, rho_source = reference_resistivity(m)
-    t_ref = alpha.temperature or CELSIUS + 20.0
+    t_ref = alpha.temperature or T20
     rho_ref = rho / (1.0 + alpha.si * (t_rho - t_ref))
     sourced = alpha.valid_from is not None and alpha.valid_to is not None
     return LinearModel(
@@ -65,56 +75,93 @@ def linear_model(m: Material) -> LinearModel | None:
         span_sourced=sourced, sources=tuple(sorted({rho_source, alpha.source})))
 
 
-def calc_material(m: Material, model: LinearModel) -> dict:
-    """The flat record the calculators read (embedded in pages as JSON; used by the CLI)."""
-    density = m.get("density")
+def is_magnetic(m: Material) -> bool:
+    return any(m.get(name) is not None for name in MAGNETIC_PROPERTIES)
+
+
+def bloch_gruneisen(m: Material) -> BlochGruneisenFit | None:
+    """A Bloch–Grüneisen fit for non-magnetic pure metals with a table and a Debye temperature."""
+    if m.table is None or m.klass != "pure-metal" or is_magnetic(m):
+        return None
+    debye = m.get("debye_temperature")
+    if debye is None:
+        return None
+    # Fit only up to 2 Θ_D: above that thermal expansion and vacancies bend ρ(T) away from the
+    # model (core.temperature_models.bg_warnings states the same range).
+    points = [(t, r) for t, r in zip(m.table.temperatures, m.table.resistivities) if t <= FIT_LIMIT * debye.si]
+    if len(points) < 5:
+        return None
+    return fit_bloch_gruneisen([p[0] for p in points], [p[1] for p in points], debye.si)
+
+
+def carrier_density(m: Material) -> tuple[float, str]:
+    """Conduction-electron density [1/m³] and how it was obtained ("tabulated", "computed", "")."""
+    tabulated = m.get("electron_density")
+    if tabulated is not None:
+        return tabulated.si, "tabulated"
+    parts = [m.get(k) for k in ("density", "molar_mass", "valence")]
+    if all(p is not None for p in parts):
+        return electron_density(parts[0].si, parts[1].si, parts[2].si), "computed"
+    return 0.0, ""
+
+
+def si_or(m: Material, name: str, default: float) -> float:
+    value = m.get(name)
+    return value.si if value is not None else default
+
+
+def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit | None) -> dict:
+    """The flat record the calculators read (see core.material_models for the keys)."""
+    rho, t_rho, rho_source = reference_resistivity(m)
+    n, n_how = carrier_density(m)
+    mfp = m.get("mean_free_path")
     return {
         "id": m.id,
         "name": m.name,
-        "rho_ref": model.rho_ref,
-        "alpha": model.alpha,
-        "t_ref": model.t_ref,
-        "valid_from": model.valid_from,
-        "valid_to": model.valid_to,
-        "density": density.si if density is not None else 0.0,
-        "sources": list(model.sources),
+        "klass": m.klass,
+        "rho_ref": model.rho_ref if model else rho,
+        "t_ref": model.t_ref if model else t_rho,
+        "alpha": model.alpha if model else 0.0,
+        "valid_from": model.valid_from if model else t_rho,
+        "valid_to": model.valid_to if model else t_rho,
+        "density": si_or(m, "density", 0.0),
+        "mu_r": si_or(m, "relative_permeability", 1.0),
+        "electron_density": n,
+        "electron_density_how": n_how,
+        "mean_free_path": mfp.si if mfp is not None else 0.0,
+        "mean_free_path_t": (mfp.temperature or 0.0) if mfp is not None else 0.0,
+        "thermal_conductivity": si_or(m, "thermal_conductivity", 0.0),
+        "table_t": list(m.table.temperatures) if m.table else [],
+        "table_rho": list(m.table.resistivities) if m.table else [],
+        "bg_rho0": fit.rho0 if fit else 0.0,
+        "bg_a": fit.a if fit else 0.0,
+        "bg_theta": fit.theta if fit else 0.0,
+        "bg_t_min": fit.t_min if fit else 0.0,
+        "bg_t_max": fit.t_max if fit else 0.0,
+        "bg_worst": fit.worst if fit else 0.0,
+        "cvd_a": si_or(m, "cvd_a", 0.0),
+        "cvd_b": si_or(m, "cvd_b", 0.0),
+        "cvd_c": si_or(m, "cvd_c", 0.0),
+        "sources": list(m.source_keys()),
     }
 
 
-def resistivity_temperature_table(m: Material, model: LinearModel) -> Table:
-    """ρ, σ and %IACS from −40 °C to +200 °C with the linear model (rows outside its span dropped)."""
-    columns = (
-        Column("temperature_c", "Temperature", "°C"),
-        Column("temperature_k", "Temperature", "K"),
-        Column("resistivity", "Resistivity", "µΩ·cm"),
-        Column("conductivity", "Conductivity", "MS/m"),
-        Column("iacs", "Conductivity", "%IACS"),
-        Column("ratio_20", "ρ / ρ(20 °C)", ""),
-    )
-    rho_20 = model.rho(CELSIUS + 20.0)
-    rows = []
-    for celsius in TABLE_TEMPERATURES_C:
-        t = CELSIUS + celsius
-        if t < model.valid_from - 1e-9 or t > model.valid_to + 1e-9:
-            continue
-        rho = model.rho(t)
-        values = (celsius, t, rho * 1e8, 1e-6 / rho, dc.iacs_percent(rho), rho / rho_20)
-        texts = (format_fixed(celsius, 0), format_fixed(t, 2), format_number(rho * 1e8, 5, True),
-                 format_number(1e-6 / rho, 4, True), format_number(dc.iacs_percent(rho), 4, True),
-                 format_number(rho / rho_20, 4, True))
-        rows.append(Row(temperature_row_id(celsius), values, texts))
-    span = (f"{format_fixed(model.valid_from - CELSIUS, 0)} °C to {format_fixed(model.valid_to - CELSIUS, 0)} °C")
-    validity = f"Linear model valid {span}" + ("" if model.span_sourced else " (common practice, no source)")
-    return Table(
-        id="resistivity-temperature",
-        title="Resistivity vs temperature",
-        model=(f"ρ(T) = ρ_ref·[1 + α·(T − T_ref)], ρ_ref = {format_number(model.rho_ref * 1e8, 5)} µΩ·cm, "
-               f"α = {format_number(model.alpha, 4)} /K, T_ref = {format_fixed(model.t_ref - CELSIUS, 1)} °C"),
-        validity=validity,
-        sources=model.sources,
-        columns=columns,
-        rows=tuple(rows),
-    )
+def calc_catalogue(records: list[dict], materials: list[Material]) -> dict:
+    """{"materials": {id: record}, "aliases": {folded alias or name: id}, "display_aliases": {...}}."""
+    catalogue = {"materials": {}, "aliases": {}, "display_aliases": {}}
+    taken = {r["id"] for r in records}
+    by_id = {m.id: m for m in materials}
+    for record in records:
+        catalogue["materials"][record["id"]] = record
+    for record in records:
+        m = by_id[record["id"]]
+        for label in list(m.aliases) + [m.name]:
+            key = fold(label)
+            if key in taken or key in catalogue["aliases"]:
+                continue
+            catalogue["aliases"][key] = m.id
+            catalogue["display_aliases"][key] = label
+    return catalogue
 
 
 @dataclass(frozen=True)
@@ -123,23 +170,31 @@ class MaterialView:
 
     material: Material
     model: LinearModel | None
-    calc: dict | None
+    fit: BlochGruneisenFit | None
+    calc: dict
     tables: tuple[Table, ...]
     rho_20: float
     iacs_20: float
+    rho_20_model: str
+
+
+def rho_at_20(record: dict) -> tuple[float, str]:
+    """ρ at 20 °C by the model "auto" picks there; the stated value when no model reaches 20 °C."""
+    try:
+        found = resistivity_at(record, T20, "auto")
+    except CoreError:
+        return record["rho_ref"], "reference"
+    return found["rho"], found["model"]
 
 
 def derive_material(m: Material) -> MaterialView:
     model = linear_model(m)
-    rho, t_rho, _ = reference_resistivity(m)
-    rho_20 = model.rho(CELSIUS + 20.0) if model is not None else rho
-    tables: list[Table] = []
-    calc = None
-    if model is not None:
-        tables.append(resistivity_temperature_table(m, model))
-        calc = calc_material(m, model)
-    return MaterialView(material=m, model=model, calc=calc, tables=tuple(tables), rho_20=rho_20,
-                        iacs_20=dc.iacs_percent(rho_20))
+    fit = bloch_gruneisen(m)
+    record = calc_record(m, model, fit)
+    rho_20, how = rho_at_20(record)
+    tables = material_tables(m, record, model, fit)
+    return MaterialView(material=m, model=model, fit=fit, calc=record, tables=tuple(tables), rho_20=rho_20,
+                        iacs_20=dc.iacs_percent(rho_20), rho_20_model=how)
 
 
 def derive(dataset: DataSet) -> list[MaterialView]:

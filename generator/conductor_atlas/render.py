@@ -13,7 +13,7 @@ from pathlib import Path
 import jinja2
 import markdown
 
-from conductor_atlas.derive import CELSIUS, MaterialView
+from conductor_atlas.derive import CELSIUS, MaterialView, calc_catalogue
 from conductor_atlas.core.numfmt import format_number, format_fixed
 from conductor_atlas.model import DataSet, Value
 from conductor_atlas.schema import CLASSES, PROPERTIES
@@ -119,10 +119,11 @@ class Renderer:
             m = view.material
             base = f"materials/{m.id}"
             used = [dataset.sources[k] for k in m.source_keys()]
+            catalogue = calc_catalogue([view.calc], [m])
             out[f"{base}/index.html"] = self.page(
                 "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view),
                 notes_html=markdown_safe(m.notes), sources=used, title=m.name,
-                calc_json=view.calc)
+                calc_json=catalogue)
             for table in view.tables:
                 out[f"{base}/{table.id}.csv"] = table.to_csv().encode("utf-8")
                 out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")

@@ -4,25 +4,40 @@
 import {calculate} from '../js/conductor_atlas.core.calculators.js';
 import {dict} from '../js/org.transcrypt.__runtime__.js';
 
-function readMaterial(form) {
-  const holder = document.getElementById(form.dataset.material);
-  return JSON.parse(holder.textContent);
+// Plain JSON objects become Transcrypt dicts (keys(), get(), `in` work on them in the core).
+function toPy(value) {
+  if (Array.isArray(value)) return value.map(toPy);
+  if (value !== null && typeof value === 'object') {
+    const out = {};
+    for (const key of Object.keys(value)) out[key] = toPy(value[key]);
+    return dict(out);
+  }
+  return value;
+}
+
+function readCatalogue(form) {
+  const holder = document.getElementById(form.dataset.catalogue);
+  return toPy(JSON.parse(holder.textContent));
 }
 
 function fieldsOf(form) {
-  return Array.from(form.querySelectorAll('input[name]'));
+  return Array.from(form.querySelectorAll('input[name], select[name]'));
+}
+
+function visibleFields(form) {
+  return fieldsOf(form).filter((input) => input.type !== 'hidden');
 }
 
 function fillFromQuery(form) {
   const params = new URLSearchParams(window.location.search);
-  for (const input of fieldsOf(form)) {
+  for (const input of visibleFields(form)) {
     if (params.has(input.name)) input.value = params.get(input.name);
   }
 }
 
 function writeQuery(form) {
   const params = new URLSearchParams();
-  for (const input of fieldsOf(form)) {
+  for (const input of visibleFields(form)) {
     if (input.value.trim() !== '') params.set(input.name, input.value);
   }
   const query = params.toString();
@@ -50,6 +65,10 @@ function show(form, outcome) {
       delete cell.dataset.value;
     }
   }
+  const shown = new Set(visibleFields(form).map((input) => input.name));
+  const general = Object.keys(errors).filter((field) => !shown.has(field)).map((field) => field + ': ' + errors[field]);
+  const problems = section.querySelector('.calc-problems');
+  if (problems) problems.textContent = general.join(' · ');
   const list = section.querySelector('.calc-warnings');
   if (list) {
     list.replaceChildren();
@@ -59,14 +78,16 @@ function show(form, outcome) {
       list.appendChild(item);
     }
   }
+  const model = section.querySelector('[data-model]');
+  if (model) model.textContent = outcome.model ? 'Model: ' + outcome.model : '';
 }
 
-function run(form, material) {
+function run(form, catalogue) {
   const inputs = {};
   for (const input of fieldsOf(form)) inputs[input.name] = input.value;
   let outcome;
   try {
-    outcome = calculate(form.dataset.calculator, dict(inputs), dict(material));
+    outcome = calculate(form.dataset.calculator, dict(inputs), catalogue);
   } catch (problem) {
     outcome = {results: {}, warnings: ['The calculator hit an internal problem: ' + String(problem && problem.message || problem)], errors: {}};
   }
@@ -75,10 +96,11 @@ function run(form, material) {
 }
 
 for (const form of document.querySelectorAll('form[data-calculator]')) {
-  const material = readMaterial(form);
+  const catalogue = readCatalogue(form);
   fillFromQuery(form);
-  form.addEventListener('input', () => { run(form, material); writeQuery(form); });
+  form.addEventListener('input', () => { run(form, catalogue); writeQuery(form); });
+  form.addEventListener('change', () => { run(form, catalogue); writeQuery(form); });
   form.addEventListener('submit', (event) => event.preventDefault());
-  run(form, material);
+  run(form, catalogue);
 }
 document.documentElement.classList.add('calc-ready');

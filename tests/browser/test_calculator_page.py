@@ -9,16 +9,16 @@ import pytest
 
 from conductor_atlas.build import data_folders
 from conductor_atlas.core.calculators import calculate
-from conductor_atlas.derive import derive
+from conductor_atlas.derive import calc_catalogue, derive
 from conductor_atlas.load import load_dataset
 
 pytestmark = pytest.mark.browser
 
 
 @pytest.fixture(scope="module")
-def calc_materials():
+def catalogue():
     views = derive(load_dataset(data_folders()))
-    return {v.material.id: v.calc for v in views if v.calc is not None}
+    return calc_catalogue([v.calc for v in views], [v.material for v in views])
 
 
 @pytest.fixture()
@@ -46,19 +46,19 @@ CASES = [
 
 
 @pytest.mark.parametrize("material_id, inputs", CASES)
-def test_typed_inputs_match_python(page, served_site, calc_materials, material_id, inputs):
+def test_typed_inputs_match_python(page, served_site, catalogue, material_id, inputs):
     page.goto(f"{served_site}/materials/{material_id}/index.html")
     page.wait_for_selector("html.calc-ready")
     for name, text in inputs.items():
         page.fill(f"input[name={name}]", text)
-    expected = calculate("resistance", inputs, calc_materials[material_id])
+    expected = calculate("resistance", {**inputs, "material": material_id}, catalogue)
     assert expected["errors"] == {}
     shown = result_values(page)
     for name, result in expected["results"].items():
         if name not in shown:
             continue
         assert shown[name] is not None, f"{name} has no data-value"
-        assert float(shown[name]) == pytest.approx(result["value"], rel=1e-12)
+        assert float(shown[name]) == pytest.approx(result["value"], rel=1e-12, abs=0)
         assert page.text_content(f"[data-result={name}]") == result["text"]
     assert "resistance" in shown and shown["resistance"] is not None
     # the inputs are mirrored in the URL so a link reopens the calculation
@@ -67,14 +67,14 @@ def test_typed_inputs_match_python(page, served_site, calc_materials, material_i
     assert page.errors == []
 
 
-def test_permalink_reopens_the_calculation(page, served_site, calc_materials):
+def test_permalink_reopens_the_calculation(page, served_site, catalogue):
     inputs = {"length": "35 m", "size": "2.5 mm2", "temperature": "90 °C", "current": "16 A"}
     query = "&".join(f"{k}={quote(v)}" for k, v in inputs.items())
     page.goto(f"{served_site}/materials/copper-annealed/index.html?{query}")
     page.wait_for_selector("html.calc-ready")
-    expected = calculate("resistance", inputs, calc_materials["copper-annealed"])
+    expected = calculate("resistance", {**inputs, "material": "copper-annealed"}, catalogue)
     shown = result_values(page)
-    assert float(shown["voltage_drop"]) == pytest.approx(expected["results"]["voltage_drop"]["value"], rel=1e-12)
+    assert float(shown["voltage_drop"]) == pytest.approx(expected["results"]["voltage_drop"]["value"], rel=1e-12, abs=0)
     assert page.input_value("input[name=temperature]") == "90 °C"
 
 
@@ -90,12 +90,23 @@ def test_bad_input_names_the_field(page, served_site):
     assert page.errors == []
 
 
-def test_file_url_reads_and_explains(browser, built_site):
+def test_file_url_reads_and_calculates(browser, built_site, catalogue):
+    """From file:// module scripts are refused; the build's classic bundle (bundle.py) still runs."""
     context = browser.new_context()
     pg = context.new_page()
-    pg.goto((built_site / "materials" / "copper-annealed" / "index.html").as_uri())
-    note = pg.locator(".needs-server")
-    assert note.is_visible()
-    assert "served over http" in note.text_content()
+    errors = []
+    pg.on("pageerror", lambda e: errors.append(str(e)))
+    pg.on("console", lambda m: errors.append(m.text) if m.type == "error" else None)
+    inputs = {"length": "35 m", "size": "2.5 mm2", "temperature": "90 °C", "current": "16 A"}
+    query = "&".join(f"{k}={quote(v)}" for k, v in inputs.items())
+    pg.goto((built_site / "materials" / "copper-annealed" / "index.html").as_uri() + "?" + query)
+    pg.wait_for_selector("html.calc-ready")
+    assert not pg.locator(".needs-server").is_visible()
+    expected = calculate("resistance", {**inputs, "material": "copper-annealed"}, catalogue)
+    assert float(result_values(pg)["voltage_drop"]) == pytest.approx(
+        expected["results"]["voltage_drop"]["value"], rel=1e-12)
+    note = pg.locator(".from-file-note")  # the service worker needs the served copy, and says so
+    assert note.is_visible() and "conductor-atlas serve" in note.text_content()
     assert pg.locator("#resistivity-temperature table tbody tr").count() > 5
+    assert errors == []
     context.close()

@@ -10,11 +10,14 @@ import random
 
 from conductor_atlas.core.units import UNITS
 
-COPPER = {"id": "copper-annealed", "name": "Standard annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393,
-          "t_ref": 293.15, "valid_from": 223.15, "valid_to": 473.15, "density": 8890.0, "sources": ["iec60028"]}
-ALUMINIUM = {"id": "aluminium-1350", "name": "Conductor aluminium 1350", "rho_ref": 2.8264556e-8,
-             "alpha": 0.00403, "t_ref": 293.15, "valid_from": 223.15, "valid_to": 423.15, "density": 2703.0,
-             "sources": ["iec60889"]}
+def shipped_catalogue():
+    """The calculators' catalogue of the shipped data set (real records, as the pages embed them)."""
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.derive import calc_catalogue, derive
+    from conductor_atlas.load import load_dataset
+    dataset = load_dataset(data_folders())
+    views = derive(dataset)
+    return calc_catalogue([v.calc for v in views], [v.material for v in views])
 
 
 def unit_cases():
@@ -70,24 +73,104 @@ def resistance_cases():
 
 
 def calculator_cases():
+    catalogue = shipped_catalogue()
     inputs = [
         {"length": "1 km", "size": "10 AWG", "temperature": "20 °C", "current": "10 A"},
-        {"length": "35 m", "size": "2.5 mm2", "temperature": "90 degC", "current": "16 A"},
-        {"length": "2,5 km", "size": "40 x 5 mm", "temperature": "300 °C"},
-        {"length": "100 ft", "size": "4/0 AWG", "temperature": "194 °F", "current": "250 A"},
+        {"length": "35 m", "size": "2.5 mm2", "temperature": "90 degC", "current": "16 A", "frequency": "50 Hz"},
+        {"length": "2,5 km", "size": "40 x 5 mm", "temperature": "300 °C", "frequency": "10 kHz"},
+        {"length": "100 ft", "size": "4/0 AWG", "temperature": "194 °F", "current": "250 A", "frequency": "400 Hz"},
         {"length": "abc", "size": "5 kg", "temperature": "-300 °C"},
         {"length": "", "size": "", "temperature": "", "current": ""},
         {"length": "1e308 m", "size": "1e-300 mm2"},
         {"length": "-5 m", "size": "d 1.6 mm", "current": "-3 A"},
         {"length": "12 m", "size": "0.5 mm2", "temperature": "-250 °C"},
+        {"length": "12 m", "size": "0.5 mm2", "temperature": "4.2 K", "model": "bloch-gruneisen"},
+        {"length": "12 m", "size": "0.5 mm2", "temperature": "77 K", "model": "table"},
+        {"length": "12 m", "size": "0.5 mm2", "model": "nonsense"},
     ]
     cases = []
-    for material in (COPPER, ALUMINIUM):
+    names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", ""]
+    for name in names:
         for inp in inputs:
-            cases.append(("conductor_atlas.core.calculators", "calculate", ["resistance", inp, material]))
-    cases.append(("conductor_atlas.core.calculators", "calculate", ["nonsense", {}, COPPER]))
+            cases.append(("conductor_atlas.core.calculators", "calculate",
+                          ["resistance", {**inp, "material": name}, catalogue]))
+        for t in ("20 °C", "77 K", "4.2 K", "500 °C", "1200 K", "-300 °C", "abc"):
+            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen"):
+                cases.append(("conductor_atlas.core.calculators", "calculate",
+                              ["resistivity", {"material": name, "temperature": t, "model": model}, catalogue]))
+    cases.append(("conductor_atlas.core.calculators", "calculate", ["nonsense", {}, catalogue]))
+    for text in ("Cu", "cu", " IACS ", "annealed copper", "Standard annealed copper", "alu", "", "Xx"):
+        cases.append(("conductor_atlas.core.lookup", "find_material", [catalogue, text, "material"]))
     return cases
 
 
 def all_cases():
-    return unit_cases() + geometry_cases() + numfmt_cases() + resistance_cases() + calculator_cases()
+    return (unit_cases() + geometry_cases() + numfmt_cases() + resistance_cases() + calculator_cases()
+            + search_cases() + model_cases())
+
+
+SEARCH_QUERIES = [
+    "copper", "Copper", "COPPER", "cooper", "coper", "nickle", "aluminum", "alumínium", "ALUMINIUM", "aluminim",
+    "tungsten", "wolfram", "w", "cu", "A91350", "uns a91350", "c17200", "C172", "cca 10", "CCA-10", "2.4869",
+    "skin depth", "skin", "resistivity temperature", "debye", "mean free path", "calculator", "resistance calculator",
+    "references", "gold film", "copper alloy", "the", "   ", "", "Ωµ²·", "crème brûlée", "zzzz qqqq",
+    "resistivity < 3 µΩ·cm", "resistivity < 3 μΩ*cm", "resistivity <= 1.7241 uohm cm", "rho < 2e-8 ohm m",
+    "density < 3 g/cm3", "density < 3000 kg/m³", "density > 19", "iacs > 90", "iacs >= 100 %", "iacs > 90 %IACS",
+    "%IACS ≥ 97", "conductivity > 50, copper", "copper alloy, iacs > 50", "alpha > 0.004", "α ≤ 0.0001 1/K",
+    "tcr > 4000 ppm/K", "mean free path > 20 nm", "mfp >= 0,02 um", "thermal conductivity > 300 W/(m·K)",
+    "melting point > 1500", "melting point > 1500 °C and density < 10", "density = 8.96 g/cm3", "density ≈ 2.7",
+    "resistivty < 2", "densty < 3", "<img src=x onerror=alert(1)>", "foo > 3", "iacs >", "iacs > abc",
+    "iacs > 50 kg", "density < 3 ohm", "> 5", "iacs > 1e999", "iacs > 90 > 80", "rho < 2,5 µΩ·cm", "rho < −1",
+]
+
+
+def search_cases():
+    """The real index (shipped data, no rendered pages) through prepare and a list of typed queries."""
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.derive import derive
+    from conductor_atlas.load import load_dataset
+    from conductor_atlas.search_index import build_index
+    dataset = load_dataset(data_folders())
+    everything = build_index(dataset, derive(dataset), {})["entries"]
+    # every material, but the tables of a few only: each case carries the whole list to node
+    keep = ("copper/", "aluminium/", "nickel/", "tungsten/", "aluminium-1350/")
+    entries = [e for e in everything if e["kind"] != "table" or e["id"].startswith(keep)]
+    module = "conductor_atlas.core.search"
+    cases = [(module, "prepare_index", [entries])]
+    for query in SEARCH_QUERIES:
+        cases.append((module, "search_entries", [entries, query, 12]))
+    for text in ["Crème Brûlée", "ÆØÅ ß", "µΩ·cm²", "Ωhm", "ρ(T) α", "Cu-Ni 55/45", "e\u0301te\u0301", "CCA 10%", ""]:
+        cases.append((module, "fold_text", [text]))
+        cases.append((module, "tokens", [text]))
+        cases.append((module, "compact", [text]))
+    for a, b in [("cooper", "copper"), ("nickle", "nickel"), ("aluminum", "aluminium"), ("ab", "ba"), ("", "abc"),
+                 ("kitten", "sitting"), ("tungsten", "tunsgten"), ("abc", "abc")]:
+        for limit in (0, 1, 2, 3):
+            cases.append((module, "osa_distance", [a, b, limit]))
+        cases.append((module, "token_match", [a, b]))
+    for query in ["iacs > 90; density < 3, copper", "rho < 2,5 uohm*cm and iacs > 1", "a and b", ",;,"]:
+        cases.append((module, "split_clauses", [query]))
+    return cases
+
+
+def model_cases():
+    """Direct cases for the core models the calculators lean on."""
+    tm = "conductor_atlas.core.temperature_models"
+    sk = "conductor_atlas.core.skin_effect"
+    cases = []
+    for t in (4.2, 20.0, 77.0, 150.0, 293.15, 600.0, 1200.0):
+        cases.append((tm, "bloch_gruneisen_resistivity", [t, 1e-11, 5.5e-8, 330.0]))
+        cases.append((tm, "interpolate_table", [t, [20.0, 100.0, 300.0, 600.0], [1e-11, 3.5e-9, 1.7e-8, 3.9e-8]]))
+    for t in (73.15, 173.15, 273.15, 373.15, 1123.15, 50.0):
+        cases.append((tm, "callendar_van_dusen_resistance", [t, 100.0, 3.9083e-3, -5.775e-7, -4.183e-12]))
+    for r in (18.5201, 60.0, 100.0, 138.5055, 390.0, -1.0):
+        cases.append((tm, "callendar_van_dusen_temperature", [r, 100.0, 3.9083e-3, -5.775e-7, -4.183e-12]))
+    for x in (0.0, 1e-3, 0.5, 2.0, 8.0, 16.4, 16.6, 40.0, 300.0, 2000.0, 1e4):
+        cases.append((sk, "kelvin_resistance_ratio", [x]))
+    for f in (50.0, 1e3, 1e6, 1e9, 0.0, -5.0):
+        cases.append((sk, "skin_depth", [1.7241e-8, f, 1.0]))
+        cases.append((sk, "rectangular_bar_resistance_ratio", [0.04, 0.005, 1.7241e-8, f, 1.0]))
+    cases.append(("conductor_atlas.core.outcome", "kelvin_text", [363.15]))
+    cases.append(("conductor_atlas.core.calc_common", "read_temperature",
+                  [{"errors": {}, "warnings": []}, {"temperature": "90 °C"}, "temperature"]))
+    return cases

@@ -1,6 +1,20 @@
-"""Entry module for the transpiler: everything the browser calls is reachable from here."""
+"""Entry module for the transpiler: every core module the browser needs is imported here.
+
+conductor_atlas.transpile ships exactly the modules imported below (and checks each was written).
+"""
 
 from conductor_atlas.core.calculators import calculate, CALCULATOR_FIELDS, FIELD_DEFAULTS
+from conductor_atlas.core.calc_resistance import calculate_resistance
+from conductor_atlas.core.calc_resistivity import calculate_resistivity
+from conductor_atlas.core.calc_common import read_material
+from conductor_atlas.core.outcome import new_outcome
+from conductor_atlas.core.lookup import find_material
+from conductor_atlas.core.material_models import resistivity_at
 from conductor_atlas.core.numfmt import format_number, format_plain, format_si
 from conductor_atlas.core.units import parse_quantity
 from conductor_atlas.core.geometry import parse_size
+from conductor_atlas.core.resistance import resistivity_linear
+from conductor_atlas.core.temperature_models import interpolate_table
+from conductor_atlas.core.skin_effect import skin_depth
+from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.search import search, prepare_index, search_entries

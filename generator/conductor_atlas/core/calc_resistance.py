@@ -1,0 +1,106 @@
+"""Calculator "resistance": a conductor run's resistance, voltage drop, I²R loss and AC resistance."""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core import resistance as dc
+from conductor_atlas.core import skin_effect as skin
+from conductor_atlas.core.geometry import parse_size
+from conductor_atlas.core.numfmt import format_number, format_si
+from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
+                                          has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
+from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+
+FIELDS = ["material", "length", "size", "temperature", "current", "frequency", "model"]
+DEFAULTS = {"material": "", "length": "100 m", "size": "2.5 mm2", "temperature": "20 °C", "current": "",
+            "frequency": "", "model": "auto"}
+
+
+def read_size(outcome, inputs, field):
+    try:
+        return parse_size(field_text(inputs, field), field)
+    except CoreError as problem:
+        add_error(outcome, field, problem.message)
+        return None
+
+
+def ac_ratio(outcome, size, rho, f, mu_r):
+    """R_ac/R_dc for the size's shape: exact Kelvin solution for round, bar approximation for bars."""
+    if size["shape"] == "bar":
+        add_warning(outcome, "AC resistance of a bar uses an approximation (see the method notes); "
+                             "proximity to other conductors is not included")
+        return skin.rectangular_bar_resistance_ratio(size["width"], size["thickness"], rho, f, mu_r)
+    if size["shape"] == "area":
+        add_warning(outcome, "a cross-section given as an area is treated as one solid round wire of that area; "
+                             "stranded and compacted conductors differ (IEC 60287-1-1 k_s)")
+    return skin.round_wire_resistance_ratio(size["diameter"] / 2.0, rho, f, mu_r)
+
+
+def mass_text(mass):
+    if mass < 1.0:
+        return format_si(mass * 1000.0, "g", 4)
+    return format_number(mass, 4) + " kg"
+
+
+def calculate_resistance(inputs, catalogue):
+    """DC (and optionally AC) resistance of a conductor run.
+
+    Fields: material; length (conductor length, e.g. "50 m": for a two-wire circuit enter both
+    conductors); size (geometry.parse_size); temperature (default 20 °C); current (optional);
+    frequency (optional: adds skin depth, AC/DC ratio and AC resistance); model (auto, linear,
+    table, bloch-gruneisen, callendar-van-dusen).
+    R = ρ(T) L / A; U = I R; P = I² R; J = I / A; R_ac = R · (R_ac/R_dc).
+    """
+    outcome = new_outcome("resistance", inputs)
+    m = read_material(outcome, inputs, catalogue, "material")
+    length_m = read_quantity(outcome, inputs, "length", "length", True)
+    size = read_size(outcome, inputs, "size")
+    t = read_temperature(outcome, inputs, "temperature")
+    current = read_quantity(outcome, inputs, "current", "current", False)
+    f = read_quantity(outcome, inputs, "frequency", "frequency", False)
+    require_positive(outcome, "length", length_m, "length")
+    if current is not None and current < 0:
+        add_error(outcome, "current", "must not be negative (enter the magnitude)")
+    if f is not None and f < 0:
+        add_error(outcome, "frequency", "must not be negative")
+    if has_errors(outcome):
+        return outcome
+    outcome["material"] = m["id"]
+    rho = material_resistivity(outcome, m, t, inputs)
+    if rho is None:
+        return outcome
+    area = size["area"]
+    r = dc.resistance(rho, length_m, area)
+    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "area", area, "m²", format_number(area * 1e6, 4) + " mm²")
+    add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
+    add_result(outcome, "conductivity", 1.0 / rho, "S/m", format_number(1e-6 / rho, 4) + " MS/m")
+    add_result(outcome, "resistance", r, "Ω", format_si(r, "Ω", 4))
+    add_result(outcome, "resistance_per_km", r / length_m * 1000.0, "Ω/km",
+               format_number(r / length_m * 1000.0, 4) + " Ω/km")
+    if m["density"] > 0:
+        mass = m["density"] * length_m * area
+        add_result(outcome, "mass", mass, "kg", mass_text(mass))
+    if current is not None:
+        u = dc.voltage_drop(r, current)
+        add_result(outcome, "voltage_drop", u, "V", format_si(u, "V", 4))
+        p = dc.power_loss(r, current)
+        add_result(outcome, "power_loss", p, "W", format_si(p, "W", 4))
+        j = dc.current_density(current, area)
+        add_result(outcome, "current_density", j, "A/m²", format_number(j / 1e6, 4) + " A/mm²")
+    if f is not None and f > 0:
+        if m["mu_r"] > 1.5:
+            add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(m["mu_r"], 3)
+                        + "; in iron, steel and nickel it depends strongly on field strength and frequency")
+        try:
+            delta = skin.skin_depth(rho, f, m["mu_r"])
+            ratio = ac_ratio(outcome, size, rho, f, m["mu_r"])
+        except CoreError as problem:
+            add_error(outcome, "frequency", problem.message)
+            return outcome
+        add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
+        add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5))
+        add_result(outcome, "resistance_ac", r * ratio, "Ω", format_si(r * ratio, "Ω", 4))
+        if current is not None:
+            p_ac = dc.power_loss(r * ratio, current)
+            add_result(outcome, "power_loss_ac", p_ac, "W", format_si(p_ac, "W", 4))
+    check_finite_results(outcome, "length")
+    return outcome

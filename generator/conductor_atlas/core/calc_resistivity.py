@@ -1,0 +1,53 @@
+"""Calculator "resistivity": ρ, σ, %IACS and the local temperature coefficient at a temperature."""
+
+from conductor_atlas.core import resistance as dc
+from conductor_atlas.core.numfmt import format_number
+from conductor_atlas.core.outcome import (add_result, check_finite_results, has_errors, kelvin_text, new_outcome)
+from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.material_models import choose_model
+
+FIELDS = ["material", "temperature", "model"]
+DEFAULTS = {"material": "", "temperature": "20 °C", "model": "auto"}
+
+STEP = 0.5  # [K] half-width of the central difference for the local coefficient
+
+
+def calculate_resistivity(inputs, catalogue):
+    """Resistivity of a material at a temperature by the model that fits there.
+
+    Results: resistivity [Ω·m], conductivity [S/m], iacs_percent (100·ρ_IACS/ρ, comparing at the
+    given temperature against annealed copper at 20 °C), temperature_coefficient: the local
+    α(T) = (dρ/dT)/ρ(T) by a central difference of ±0.5 K with the same model.
+    """
+    outcome = new_outcome("resistivity", inputs)
+    m = read_material(outcome, inputs, catalogue, "material")
+    t = read_temperature(outcome, inputs, "temperature")
+    if has_errors(outcome):
+        return outcome
+    outcome["material"] = m["id"]
+    rho = material_resistivity(outcome, m, t, inputs)
+    if rho is None:
+        return outcome
+    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
+    add_result(outcome, "conductivity", 1.0 / rho, "S/m", format_number(1e-6 / rho, 4) + " MS/m")
+    add_result(outcome, "iacs_percent", dc.iacs_percent(rho), "%", format_number(dc.iacs_percent(rho), 4) + " %IACS")
+    if t > STEP + 1.0:
+        quiet = {"warnings": [], "errors": {}, "results": {}, "model": ""}
+        below = material_resistivity(quiet, m, t - STEP, {"model": outcome_model_key(inputs, m, t)})
+        above = material_resistivity(quiet, m, t + STEP, {"model": outcome_model_key(inputs, m, t)})
+        if below is not None and above is not None:
+            alpha = (above - below) / (2.0 * STEP) / rho
+            add_result(outcome, "temperature_coefficient", alpha, "1/K", format_number(alpha, 4) + " /K")
+    check_finite_results(outcome, "temperature")
+    return outcome
+
+
+def outcome_model_key(inputs, m, t):
+    """The model key the main evaluation used, so the derivative uses the same one."""
+    model = "auto"
+    if "model" in inputs and len(str(inputs["model"]).strip()) > 0:
+        model = str(inputs["model"]).strip()
+    if model == "auto":
+        return choose_model(m, t)
+    return model

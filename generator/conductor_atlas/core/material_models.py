@@ -1,0 +1,150 @@
+"""Resistivity of a catalogue material at a temperature, by the model that fits there.
+
+A catalogue record (conductor_atlas.derive.calc_record) may carry any of: the linear α model
+(rho_ref, alpha, t_ref, valid_from, valid_to), a sourced ρ(T) table (table_t, table_rho), a
+Bloch–Grüneisen fit to that table (bg_rho0, bg_a, bg_theta, bg_t_min, bg_t_max, bg_worst), and
+Callendar–Van Dusen coefficients (cvd_a, cvd_b, cvd_c) for platinum sensor metals.
+
+``resistivity_at`` returns {"rho": [Ω·m], "model": key, "label": text, "warnings": [...]};
+"auto" picks, in order: linear inside its span; Callendar–Van Dusen inside −200…850 °C;
+the table inside its range (interpolated, flagged); the Bloch–Grüneisen fit inside its fitted
+range; else the nearest model with a warning. Never silent outside a model's range.
+"""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core import resistance as dc
+from conductor_atlas.core import temperature_models as tm
+from conductor_atlas.core.outcome import kelvin_text
+
+MODEL_LABELS = {
+    "linear": "linear temperature-coefficient model",
+    "table": "interpolation of the sourced ρ(T) table",
+    "bloch-gruneisen": "Bloch–Grüneisen fit to the sourced ρ(T) table",
+    "callendar-van-dusen": "Callendar–Van Dusen equation (IEC 60751)",
+    "reference": "the reference value only (no temperature model on record)",
+}
+
+MODEL_CHOICES = ["auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen"]
+
+
+def has_linear(m):
+    return m["alpha"] != 0
+
+
+def has_table(m):
+    return len(m["table_t"]) >= 2
+
+
+def has_bg(m):
+    return m["bg_theta"] > 0
+
+
+def has_cvd(m):
+    return m["cvd_a"] > 0
+
+
+def in_linear_span(m, t):
+    return t >= m["valid_from"] and t <= m["valid_to"]
+
+
+def in_table(m, t):
+    return has_table(m) and t >= m["table_t"][0] and t <= m["table_t"][len(m["table_t"]) - 1]
+
+
+def in_bg_range(m, t):
+    return has_bg(m) and t >= m["bg_t_min"] and t <= m["bg_t_max"]
+
+
+def in_cvd_range(t):
+    return t >= 73.15 and t <= 1123.15
+
+
+def available_models(m):
+    """The model keys this material supports."""
+    out = []
+    if has_linear(m):
+        out.append("linear")
+    if has_cvd(m):
+        out.append("callendar-van-dusen")
+    if has_table(m):
+        out.append("table")
+    if has_bg(m):
+        out.append("bloch-gruneisen")
+    return out
+
+
+def cvd_ratio(m, t):
+    """R(T)/R(T_ref) of the Callendar–Van Dusen equation with the material's coefficients."""
+    r_t = tm.callendar_van_dusen_resistance(t, 1.0, m["cvd_a"], m["cvd_b"], m["cvd_c"])
+    r_ref = tm.callendar_van_dusen_resistance(m["t_ref"], 1.0, m["cvd_a"], m["cvd_b"], m["cvd_c"])
+    return r_t / r_ref
+
+
+def choose_model(m, t):
+    """The model "auto" uses at temperature t [K]."""
+    if has_linear(m) and in_linear_span(m, t):
+        return "linear"
+    if has_cvd(m) and in_cvd_range(t):
+        return "callendar-van-dusen"
+    if in_table(m, t):
+        return "table"
+    if in_bg_range(m, t):
+        return "bloch-gruneisen"
+    if has_bg(m):
+        return "bloch-gruneisen"
+    if has_table(m):
+        return "table"
+    if has_linear(m):
+        return "linear"
+    return "reference"
+
+
+def resistivity_at(m, t, model):
+    """Resistivity of material record ``m`` at temperature t [K] with ``model`` (or "auto").
+
+    Raises CoreError (field "model" or "temperature") when the asked model is not on record or
+    the temperature is impossible.
+    """
+    if not (t > 0):
+        raise CoreError("must be above absolute zero (−273.15 °C)", "temperature")
+    key = model
+    if key == "auto" or len(key) == 0:
+        key = choose_model(m, t)
+    warnings = []
+    if key == "linear":
+        if not has_linear(m):
+            raise CoreError("no temperature coefficient is on record for " + m["name"], "model")
+        if not in_linear_span(m, t):
+            warnings.append("temperature " + kelvin_text(t) + " is outside the span where the linear model holds for "
+                            + m["name"] + " (" + kelvin_text(m["valid_from"]) + " to " + kelvin_text(m["valid_to"]) + ")")
+        rho = dc.resistivity_linear(t, m["rho_ref"], m["alpha"], m["t_ref"])
+    elif key == "table":
+        if not has_table(m):
+            raise CoreError("no sourced ρ(T) table is on record for " + m["name"], "model")
+        rho = tm.interpolate_table(t, m["table_t"], m["table_rho"])
+        for w in tm.table_warnings(t, m["table_t"]):
+            warnings.append("ρ(T) table of " + m["name"] + ": " + w)
+        if not (rho > 0):
+            raise CoreError("the table cannot be extrapolated this far (it gives no positive resistivity)", "temperature")
+    elif key == "bloch-gruneisen":
+        if not has_bg(m):
+            raise CoreError("no Bloch–Grüneisen fit is available for " + m["name"], "model")
+        rho = tm.bloch_gruneisen_resistivity(t, m["bg_rho0"], m["bg_a"], m["bg_theta"])
+        if not in_bg_range(m, t):
+            warnings.append("temperature " + kelvin_text(t) + " is outside the range the Bloch–Grüneisen fit of "
+                            + m["name"] + " was fitted over (" + kelvin_text(m["bg_t_min"]) + " to "
+                            + kelvin_text(m["bg_t_max"]) + ")")
+    elif key == "callendar-van-dusen":
+        if not has_cvd(m):
+            raise CoreError("no Callendar–Van Dusen coefficients are on record for " + m["name"], "model")
+        for w in tm.cvd_warnings(t):
+            warnings.append(w)
+        rho = m["rho_ref"] * cvd_ratio(m, t)
+    elif key == "reference":
+        if abs(t - m["t_ref"]) > 0.5:
+            raise CoreError("no temperature model is on record for " + m["name"] + "; only "
+                            + kelvin_text(m["t_ref"]) + " can be computed", "temperature")
+        rho = m["rho_ref"]
+    else:
+        raise CoreError("unknown model “" + model + "”; choose one of: " + ", ".join(MODEL_CHOICES), "model")
+    return {"rho": rho, "model": key, "label": MODEL_LABELS[key], "warnings": warnings}

@@ -1,0 +1,117 @@
+"""The record every calculator returns, and the helpers that fill it.
+
+    {"calculator": name, "material": id, "inputs": {field: text}, "results": {name: {"value": SI float,
+     "unit": SI symbol, "text": what a person reads}}, "warnings": [str], "errors": {field: message},
+     "sources": [source keys], "model": str}
+
+Bad input never raises out of a calculator: the message goes under errors[field].
+"""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.units import parse_quantity
+from conductor_atlas.core.numfmt import format_fixed
+
+
+def new_outcome(name, inputs):
+    """An empty outcome for calculator ``name`` with a copy of the inputs."""
+    copied = {}
+    for key in inputs.keys():
+        copied[key] = inputs[key]
+    return {
+        "calculator": name,
+        "material": "",
+        "inputs": copied,
+        "results": {},
+        "warnings": [],
+        "errors": {},
+        "sources": [],
+        "model": "",
+    }
+
+
+def add_result(outcome, name, value, unit, text):
+    """Store one result (SI value, SI unit symbol, text a person reads)."""
+    outcome["results"][name] = {"value": value, "unit": unit, "text": text}
+
+
+def add_error(outcome, field, message):
+    """Record the first problem of a field (later ones for the same field are dropped)."""
+    if not (field in outcome["errors"]):
+        outcome["errors"][field] = message
+
+
+def add_warning(outcome, message):
+    for existing in outcome["warnings"]:
+        if existing == message:
+            return
+    outcome["warnings"].append(message)
+
+
+def add_sources(outcome, keys):
+    for key in keys:
+        seen = False
+        for existing in outcome["sources"]:
+            if existing == key:
+                seen = True
+        if not seen:
+            outcome["sources"].append(key)
+
+
+def has_errors(outcome):
+    return len(outcome["errors"].keys()) > 0
+
+
+def field_text(inputs, field):
+    """The text typed in ``field``, or "" when the field is absent or empty."""
+    if field in inputs:
+        value = inputs[field]
+        if value is None:
+            return ""
+        return str(value).strip()
+    return ""
+
+
+def read_quantity(outcome, inputs, field, kind, required, default_text=""):
+    """Parse one field as a quantity of ``kind``; on failure record errors[field], return None.
+
+    An empty optional field gives None with no error; an empty field with ``default_text``
+    is read as that text.
+    """
+    text = field_text(inputs, field)
+    if len(text) == 0:
+        if len(default_text) > 0:
+            text = default_text
+        elif not required:
+            return None
+    try:
+        return parse_quantity(text, kind, field)
+    except CoreError as problem:
+        add_error(outcome, field, problem.message)
+        return None
+
+
+def require_positive(outcome, field, value, what):
+    """Record an error when a parsed value is not > 0; return True when it is fine."""
+    if value is None:
+        return False
+    if not (value > 0):
+        add_error(outcome, field, what + " must be greater than zero")
+        return False
+    return True
+
+
+def check_finite_results(outcome, field):
+    """Turn any non-finite result into a message on ``field`` (no NaN or ∞ reaches a page)."""
+    bad = False
+    for key in outcome["results"].keys():
+        v = outcome["results"][key]["value"]
+        if not (v - v == 0):
+            bad = True
+    if bad:
+        outcome["results"] = {}
+        add_error(outcome, field, "the inputs are too extreme to compute a finite result; check the values")
+
+
+def kelvin_text(t):
+    """A temperature in K as text a person reads: "90.0 °C (363.15 K)"."""
+    return format_fixed(t - 273.15, 1) + " °C (" + format_fixed(t, 2) + " K)"

@@ -1,0 +1,74 @@
+"""Build-time fits of model parameters to sourced tables (numpy least squares).
+
+Only parameters are computed here; the formulas themselves are the core's
+(conductor_atlas.core.temperature_models), so the browser evaluates exactly what was fitted.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+
+from conductor_atlas.core.temperature_models import bloch_gruneisen_integral, bloch_gruneisen_resistivity
+
+
+@dataclass(frozen=True)
+class BlochGruneisenFit:
+    """ρ(T) = ρ0 + A (T/Θ)^5 J5(Θ/T) fitted to a table; worst relative deviation over its points."""
+
+    rho0: float
+    a: float
+    theta: float
+    t_min: float
+    t_max: float
+    worst: float      # max |ρ_fit/ρ_table − 1| over the fitted points
+    worst_at: float   # temperature of that point [K]
+    points: int
+
+
+def phonon_basis(temperatures: np.ndarray, theta: float) -> np.ndarray:
+    """(T/Θ)^5 J5(Θ/T) for each T, with the core's integral."""
+    return np.array([(t / theta) ** 5 * bloch_gruneisen_integral(5.0, theta / t) for t in temperatures])
+
+
+def fit_bloch_gruneisen(temperatures, resistivities, theta_guess: float) -> BlochGruneisenFit | None:
+    """Fit ρ0 ≥ 0, A > 0 and Θ to a ρ(T) table by relative least squares.
+
+    For each Θ on a grid (0.5…1.6 × the Debye temperature, then refined), ρ0 and A solve a
+    linear least-squares problem weighted by 1/ρ_i (so cryogenic points count as much as hot
+    ones); the Θ with the smallest weighted residual wins. Returns None for fewer than 5 points
+    or an unphysical result (A ≤ 0).
+    """
+    t = np.asarray(temperatures, dtype=float)
+    rho = np.asarray(resistivities, dtype=float)
+    if len(t) < 5:
+        return None
+    w = 1.0 / rho
+
+    def solve(theta: float):
+        g = phonon_basis(t, theta)
+        design = np.column_stack([np.ones_like(t), g]) * w[:, None]
+        coef, *_ = np.linalg.lstsq(design, rho * w, rcond=None)
+        rho0, a = float(coef[0]), float(coef[1])
+        if rho0 < 0:
+            rho0 = 0.0
+            a = float(np.dot(g * w, rho * w) / np.dot(g * w, g * w))
+        resid = (rho0 + a * g) / rho - 1.0
+        return float(np.sum(resid ** 2)), rho0, a
+
+    grid = np.linspace(0.5 * theta_guess, 1.6 * theta_guess, 45)
+    scores = [solve(th)[0] for th in grid]
+    best = float(grid[int(np.argmin(scores))])
+    step = float(grid[1] - grid[0])
+    fine = np.linspace(max(best - step, 1.0), best + step, 41)
+    fine_scores = [solve(th)[0] for th in fine]
+    theta = float(fine[int(np.argmin(fine_scores))])
+    _, rho0, a = solve(theta)
+    if not a > 0:
+        return None
+    fitted = np.array([bloch_gruneisen_resistivity(float(x), rho0, a, theta) for x in t])
+    dev = np.abs(fitted / rho - 1.0)
+    i = int(np.argmax(dev))
+    return BlochGruneisenFit(rho0=rho0, a=a, theta=theta, t_min=float(t[0]), t_max=float(t[-1]),
+                             worst=float(dev[i]), worst_at=float(t[i]), points=len(t))
