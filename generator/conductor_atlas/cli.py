@@ -11,6 +11,7 @@ import sys
 from pathlib import Path
 
 from conductor_atlas import __version__
+from conductor_atlas.calc_cli import add_calc_parser, run_calc
 from conductor_atlas.errors import AtlasError, DataError
 
 
@@ -34,6 +35,7 @@ def build_parser() -> argparse.ArgumentParser:
     p_serve = sub.add_parser("serve", help="serve the built site on http://127.0.0.1")
     p_serve.add_argument("--dir", type=Path, default=Path("site"), metavar="DIR", help="site folder (default: site)")
     p_serve.add_argument("--port", type=int, default=8000, help="port (default: 8000)")
+    add_calc_parser(sub)
     return parser
 
 
@@ -60,7 +62,7 @@ def cmd_serve(args: argparse.Namespace) -> int:
     return 0
 
 
-COMMANDS = {"build": cmd_build, "check": cmd_check, "serve": cmd_serve}
+COMMANDS = {"build": cmd_build, "check": cmd_check, "serve": cmd_serve, "calc": run_calc}
 
 
 def main(argv: list[str] | None = None) -> int:

@@ -200,3 +200,9 @@ def derive_material(m: Material) -> MaterialView:
 def derive(dataset: DataSet) -> list[MaterialView]:
     """Derive the views of every material, in id order."""
     return [derive_material(m) for m in dataset.materials]
+
+
+def catalogue_of(dataset: DataSet) -> dict:
+    """The calculators' catalogue of every material, without computing any page table."""
+    records = [calc_record(m, linear_model(m), bloch_gruneisen(m)) for m in dataset.materials]
+    return calc_catalogue(records, list(dataset.materials))

@@ -9,9 +9,31 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_warning, ch
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
 
+TITLE = "Resistance of a conductor run"
+SUMMARY = "DC and AC resistance, voltage drop, I²R loss and mass of a conductor at its temperature."
 FIELDS = ["material", "length", "size", "temperature", "current", "frequency", "model"]
-DEFAULTS = {"material": "", "length": "100 m", "size": "2.5 mm2", "temperature": "20 °C", "current": "",
-            "frequency": "", "model": "auto"}
+DEFAULTS = {"material": "copper-annealed", "length": "100 m", "size": "2.5 mm2", "temperature": "20 °C",
+            "current": "", "frequency": "", "model": "auto"}
+# field -> [label, hint]
+FIELD_INFO = {
+    "material": ["Material", "id, alias or symbol, e.g. IACS, 1350, Cu"],
+    "length": ["Conductor length", "e.g. 25 m, 300 ft, 1.2 km. For a two-wire circuit, both conductors."],
+    "size": ["Cross-section", "e.g. 2.5 mm², 12 AWG, 4/0 AWG, 250 kcmil, d 1.6 mm, 40 x 5 mm"],
+    "temperature": ["Conductor temperature", "e.g. 20 °C, 90 degC, 363 K, 194 °F"],
+    "current": ["Current (optional)", "e.g. 16 A, 250 mA"],
+    "frequency": ["Frequency (optional)", "e.g. 50 Hz, 400 Hz, 100 kHz: adds skin depth and AC resistance"],
+    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+}
+# results shown on the page, in order: [name, label]
+RESULT_LABELS = [
+    ["resistance", "Resistance"], ["resistance_per_km", "Per kilometre"], ["resistivity", "Resistivity at temperature"],
+    ["conductivity", "Conductivity at temperature"], ["temperature", "Temperature"],
+    ["area", "Cross-section"], ["mass", "Mass of conductor"], ["voltage_drop", "Voltage drop"],
+    ["power_loss", "I²R loss"], ["current_density", "Current density"], ["skin_depth", "Skin depth"],
+    ["ac_dc_ratio", "AC/DC ratio"], ["resistance_ac", "AC resistance"], ["power_loss_ac", "I²R loss at AC"],
+]
+CAUTION = ("A physics estimate, not an ampacity rating. Size real installations to the local electrical code and "
+           "licensed practice.")
 
 
 def read_size(outcome, inputs, field):
@@ -97,7 +119,7 @@ def calculate_resistance(inputs, catalogue):
             add_error(outcome, "frequency", problem.message)
             return outcome
         add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
-        add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5))
+        add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
         add_result(outcome, "resistance_ac", r * ratio, "Ω", format_si(r * ratio, "Ω", 4))
         if current is not None:
             p_ac = dc.power_loss(r * ratio, current)

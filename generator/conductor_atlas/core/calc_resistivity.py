@@ -6,8 +6,20 @@ from conductor_atlas.core.outcome import (add_result, check_finite_results, has_
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
 from conductor_atlas.core.material_models import choose_model
 
+TITLE = "Resistivity at a temperature"
+SUMMARY = "Resistivity, conductivity, %IACS and the local temperature coefficient by the model that fits."
 FIELDS = ["material", "temperature", "model"]
-DEFAULTS = {"material": "", "temperature": "20 °C", "model": "auto"}
+DEFAULTS = {"material": "Cu", "temperature": "20 °C", "model": "auto"}
+FIELD_INFO = {
+    "material": ["Material", "id, alias or symbol, e.g. Cu, Ag, 1350, Pt385"],
+    "temperature": ["Temperature", "e.g. 20 °C, 77 K, 600 °C"],
+    "model": ["Model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+}
+RESULT_LABELS = [
+    ["resistivity", "Resistivity"], ["conductivity", "Conductivity"], ["iacs_percent", "Conductivity (%IACS)"],
+    ["temperature_coefficient", "Local temperature coefficient"], ["temperature", "Temperature"],
+]
+CAUTION = "Values follow the named model and its sources; outside a model's range the result carries a warning."
 
 STEP = 0.5  # [K] half-width of the central difference for the local coefficient
 

@@ -11,20 +11,23 @@ from conductor_atlas.core.outcome import add_error, new_outcome
 from conductor_atlas.core import calc_resistance
 from conductor_atlas.core import calc_resistivity
 
+# name -> module; each module defines TITLE, SUMMARY, FIELDS, DEFAULTS, FIELD_INFO, RESULT_LABELS,
+# CAUTION and the calculate_* function registered below.
+MODULES = {
+    "resistance": calc_resistance,
+    "resistivity": calc_resistivity,
+}
+
 CALCULATORS = {
     "resistance": calc_resistance.calculate_resistance,
     "resistivity": calc_resistivity.calculate_resistivity,
 }
 
-CALCULATOR_FIELDS = {
-    "resistance": calc_resistance.FIELDS,
-    "resistivity": calc_resistivity.FIELDS,
-}
-
-FIELD_DEFAULTS = {
-    "resistance": calc_resistance.DEFAULTS,
-    "resistivity": calc_resistivity.DEFAULTS,
-}
+CALCULATOR_FIELDS = {}
+FIELD_DEFAULTS = {}
+for _name in MODULES.keys():
+    CALCULATOR_FIELDS[_name] = MODULES[_name].FIELDS
+    FIELD_DEFAULTS[_name] = MODULES[_name].DEFAULTS
 
 
 def calculator_names():

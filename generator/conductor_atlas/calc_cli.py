@@ -1,0 +1,75 @@
+"""``conductor-atlas calc NAME --field "value" ... [--json]``: the web calculators in the terminal.
+
+Options are made from each calculator's FIELDS (``max_drop`` becomes ``--max-drop``); the inputs
+are the same text a person types into the web form, read by the same core.
+"""
+
+from __future__ import annotations
+
+import argparse
+import json
+import sys
+from pathlib import Path
+
+from conductor_atlas.core.calculators import CALCULATORS, MODULES, calculate
+
+
+def option_name(field: str) -> str:
+    return "--" + field.replace("_", "-")
+
+
+def add_calc_parser(sub) -> None:
+    p_calc = sub.add_parser("calc", help="run a calculator in the terminal (same core as the web pages)")
+    calcs = p_calc.add_subparsers(dest="calculator", metavar="NAME")
+    calcs.required = True
+    for name in sorted(CALCULATORS):
+        module = MODULES[name]
+        p = calcs.add_parser(name, help=module.SUMMARY, description=module.SUMMARY)
+        for field in module.FIELDS:
+            label, hint = module.FIELD_INFO[field]
+            default = module.DEFAULTS.get(field, "")
+            extra = f" (default: {default})" if default else ""
+            p.add_argument(option_name(field), dest=f"field_{field}", metavar="TEXT", default=None,
+                           help=f"{label}: {hint}{extra}")
+        p.add_argument("--json", action="store_true", help="print one JSON object")
+        p.add_argument("--data", action="append", type=Path, default=[], metavar="DIR",
+                       help="an extra folder of material files (repeatable)")
+
+
+def inputs_from(args: argparse.Namespace) -> dict[str, str]:
+    module = MODULES[args.calculator]
+    inputs = {}
+    for field in module.FIELDS:
+        value = getattr(args, f"field_{field}")
+        if value is None:
+            value = module.DEFAULTS.get(field, "")
+        inputs[field] = value
+    return inputs
+
+
+def run_calc(args: argparse.Namespace) -> int:
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.derive import catalogue_of
+    from conductor_atlas.load import load_dataset
+    catalogue = catalogue_of(load_dataset(data_folders(args.data)))
+    outcome = calculate(args.calculator, inputs_from(args), catalogue)
+    if args.json:
+        payload = {k: outcome[k] for k in ("calculator", "inputs", "results", "warnings", "errors", "sources",
+                                           "material", "model")}
+        print(json.dumps(payload, ensure_ascii=False, indent=1))
+        return 1 if outcome["errors"] else 0
+    if outcome["errors"]:
+        for field, message in outcome["errors"].items():
+            print(f"conductor-atlas: calc {args.calculator}: {option_name(field)}: {message}", file=sys.stderr)
+        return 1
+    module = MODULES[args.calculator]
+    labels = dict(module.RESULT_LABELS)
+    width = max((len(labels.get(k, k)) for k in outcome["results"]), default=10)
+    print(f"{module.TITLE}: {outcome['material']}" + (f" ({outcome['model']})" if outcome["model"] else ""))
+    for name, result in outcome["results"].items():
+        print(f"  {labels.get(name, name).ljust(width)}  {result['text']}")
+    for warning in outcome["warnings"]:
+        print(f"  warning: {warning}")
+    print(f"  sources: {', '.join(outcome['sources'])}")
+    print(f"  {module.CAUTION}")
+    return 0
