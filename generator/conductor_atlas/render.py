@@ -12,6 +12,8 @@ from pathlib import Path
 
 import jinja2
 import markdown
+import markdown.extensions
+import markdown.treeprocessors
 
 from conductor_atlas.derive import CELSIUS, MaterialView, calc_catalogue
 from conductor_atlas.core.numfmt import format_number, format_fixed
@@ -43,10 +45,44 @@ CARD_UNITS = {
 }
 
 
+SAFE_URL_SCHEMES = ("http", "https", "mailto")
+
+
+def url_is_safe(url: str) -> bool:
+    """True for a relative URL or an http(s)/mailto one; javascript:, data: and the like are not."""
+    compact = "".join(ch for ch in url if ch > " ").lower()
+    head = compact.split("/", 1)[0].split("?", 1)[0].split("#", 1)[0]
+    if ":" not in head:
+        return True
+    return head.split(":", 1)[0] in SAFE_URL_SCHEMES
+
+
+class InertLinks(markdown.treeprocessors.Treeprocessor):
+    """After Markdown's own inline pass: a link to an unsafe URL becomes its text, an image its alt text
+    (notes load nothing, and nothing from another origin)."""
+
+    def run(self, root):
+        for element in root.iter():
+            if element.tag == "img":
+                alt = element.get("alt", "")
+                element.attrib.clear()
+                element.tag = "span"
+                element.text = alt
+            elif element.tag == "a" and not url_is_safe(element.get("href", "")):
+                element.attrib.clear()
+                element.tag = "span"
+
+
+class InertLinksExtension(markdown.extensions.Extension):
+    def extendMarkdown(self, md):  # noqa: N802 - the Markdown API's name
+        md.treeprocessors.register(InertLinks(md), "inert_links", 0)
+
+
 def markdown_safe(text: str) -> str:
-    """Markdown to HTML with any raw HTML in the source shown as text, never as markup."""
+    """Markdown to HTML with any raw HTML in the source shown as text, never as markup; links to
+    javascript: (or any scheme but http, https, mailto) and images are shown as their text."""
     escaped = text.replace("&", "&amp;").replace("<", "&lt;")
-    return markdown.markdown(escaped, output_format="html")
+    return markdown.markdown(escaped, output_format="html", extensions=[InertLinksExtension()])
 
 
 def condition_text(t: float | None) -> str:
