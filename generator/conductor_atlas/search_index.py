@@ -1,0 +1,158 @@
+"""Build step: the search index (search-index.json) the browser searches with core/search.py.
+
+One entry per material (name, aliases, class, summary, numeric properties in SI and their text
+as the property card shows it), one per derived table, and one per other page of the site
+(calculators, compare, references ...), read from the rendered pages' <title>. When the site has
+no calculator pages, the calculator embedded in each material page gets an entry instead.
+
+Pure: takes the data set, the derived views and the rendered files; returns bytes. Writes nothing.
+"""
+
+from __future__ import annotations
+
+import html
+import json
+import re
+from typing import Mapping, Sequence
+
+from conductor_atlas.core.numfmt import format_number
+from conductor_atlas.core.search import FILTERS
+from conductor_atlas.derive import MaterialView
+from conductor_atlas.model import DataSet
+from conductor_atlas.render import CARD_UNITS, SITE_NAME
+from conductor_atlas.schema import CLASSES, PROPERTIES
+
+INDEX_FORMAT = 1
+INDEX_PATH = "search-index.json"
+TITLE_TAG = re.compile(r"<title>(.*?)</title>", re.S)
+H1_TAG = re.compile(r"<h1[^>]*>(.*?)</h1>", re.S)
+CALCULATOR_HEADING = re.compile(r'<h2 id="calculator-title">(.*?)<', re.S)
+TAG = re.compile(r"<[^>]+>")
+# pages that are not entries of their own: the home page, the search page, material pages (from data)
+SKIPPED_PAGES = ("index.html", "search/index.html")
+# Properties kept out of "props": %IACS as stated is in percent (the index carries iacs_20 as a fraction).
+NOT_PROPS = ("conductivity_iacs",)
+
+
+def material_url(material_id: str) -> str:
+    return f"materials/{material_id}/index.html"
+
+
+def page_title(content: bytes) -> str:
+    """The page's <title> without the site name, as plain text ("" when it has none)."""
+    text = content.decode("utf-8", errors="replace")
+    found = TITLE_TAG.search(text)
+    if found is None:
+        return ""
+    title = html.unescape(TAG.sub("", found.group(1))).strip()
+    suffix = f" · {SITE_NAME}"
+    if title.endswith(suffix):
+        title = title[: -len(suffix)]
+    return title
+
+
+def first_heading(content: bytes) -> str:
+    found = H1_TAG.search(content.decode("utf-8", errors="replace"))
+    return "" if found is None else html.unescape(TAG.sub("", found.group(1))).strip()
+
+
+def property_text(name: str, si: float) -> str:
+    scale, unit, sig = CARD_UNITS[name]
+    text = format_number(si * scale, sig)
+    return f"{text} {unit}" if unit else text
+
+
+def material_entry(view: MaterialView) -> dict:
+    m = view.material
+    props: dict[str, float] = {"rho_20": view.rho_20, "iacs_20": view.iacs_20 / 100.0}
+    facts: dict[str, list[str]] = {
+        "rho_20": ["resistivity at 20 °C", property_text("resistivity", view.rho_20)],
+        "iacs_20": ["conductivity at 20 °C", f"{format_number(view.iacs_20, 4)} %IACS"],
+    }
+    keywords = ["resistivity", "conductivity"]
+    for name in PROPERTIES:
+        value = m.get(name)
+        if value is None:
+            continue
+        keywords.append(PROPERTIES[name].label)
+        if name in NOT_PROPS:
+            continue
+        props[name] = value.si
+        facts[name] = [PROPERTIES[name].label, property_text(name, value.si)]
+    return {
+        "id": m.id, "kind": "material", "title": m.name, "url": material_url(m.id),
+        "aliases": list(m.aliases), "class_title": CLASSES.get(m.klass, m.klass), "summary": m.summary,
+        "keywords": keywords, "props": props, "facts": facts,
+    }
+
+
+def table_entries(view: MaterialView) -> list[dict]:
+    m = view.material
+    out = []
+    for table in view.tables:
+        keywords = sorted({c.label for c in table.columns} | {c.unit for c in table.columns if c.unit})
+        out.append({
+            "id": f"{m.id}/{table.id}", "kind": "table", "title": f"{table.title} — {m.name}",
+            "url": f"{material_url(m.id)}#{table.id}", "material": " ".join([m.name, *m.aliases]),
+            "summary": table.validity, "keywords": ["table", *keywords],
+        })
+    return out
+
+
+def page_entries(files: Mapping[str, bytes]) -> list[dict]:
+    """Calculator and other pages of the rendered site (everything but home, search and materials)."""
+    out = []
+    for path in sorted(files):
+        if not path.endswith(".html") or path in SKIPPED_PAGES or path.startswith("materials/"):
+            continue
+        title = page_title(files[path]) or first_heading(files[path]) or path
+        folder = path.split("/")[0]
+        kind = "calculator" if folder == "calculators" else "page"
+        entry_id = path[: -len("/index.html")] if path.endswith("/index.html") else path[: -len(".html")]
+        out.append({"id": entry_id, "kind": kind, "title": title, "url": path,
+                    "keywords": ["calculator"] if kind == "calculator" else []})
+    return out
+
+
+def embedded_calculator_entries(views: Sequence[MaterialView], files: Mapping[str, bytes]) -> list[dict]:
+    """The calculator section of each material page, used while the site has no calculator pages."""
+    out = []
+    for view in views:
+        m = view.material
+        content = files.get(material_url(m.id))
+        if content is None:
+            continue
+        found = CALCULATOR_HEADING.search(content.decode("utf-8", errors="replace"))
+        if found is None:
+            continue
+        heading = html.unescape(found.group(1)).strip()
+        out.append({
+            "id": f"{m.id}/calculator", "kind": "calculator", "title": f"{heading} — {m.name}",
+            "url": f"{material_url(m.id)}#calculator", "material": " ".join([m.name, *m.aliases]),
+            "summary": f"Calculator on the {m.name} page, with the material preselected.",
+            "keywords": ["calculator"],
+        })
+    return out
+
+
+def build_index(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[str, bytes]) -> dict:
+    """The whole index as plain data: {"format", "filters", "entries"}."""
+    entries = [material_entry(v) for v in views]
+    for view in views:
+        entries.extend(table_entries(view))
+    pages = page_entries(files)
+    entries.extend(pages)
+    if not any(e["kind"] == "calculator" for e in pages):
+        entries.extend(embedded_calculator_entries(views, files))
+    filters = [{"property": spec[0], "label": spec[1], "words": spec[2], "unit": spec[5]} for spec in FILTERS]
+    return {"format": INDEX_FORMAT, "materials": len(dataset.materials), "filters": filters, "entries": entries}
+
+
+def index_json(index: dict) -> bytes:
+    """Compact, repeatable JSON (sorted keys, no spaces), UTF-8."""
+    return (json.dumps(index, ensure_ascii=False, sort_keys=True, separators=(",", ":")) + "\n").encode("utf-8")
+
+
+def search_index_files(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[str, bytes]) -> dict[str, bytes]:
+    """{"search-index.json": bytes} for the publish stage."""
+    return {INDEX_PATH: index_json(build_index(dataset, views, files))}
