@@ -13,6 +13,7 @@ from conductor_atlas import __version__
 from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
 from conductor_atlas.model import DataSet
+from conductor_atlas.offline import add_offline_files
 from conductor_atlas.paths import DATA_DIR, STATIC_DIR, TEMPLATES_DIR
 from conductor_atlas.publish import publish
 from conductor_atlas.render import Renderer
@@ -44,7 +45,7 @@ def assemble(dataset: DataSet) -> dict[str, bytes]:
     files = Renderer(TEMPLATES_DIR, __version__).render_site(dataset, views)
     files.update(static_files())
     files.update(transpile_core())
-    return files
+    return add_offline_files(files)  # last: the service worker lists every other file
 
 
 def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:

@@ -1,0 +1,173 @@
+"""Join an ES-module graph into one classic script, so a page opened from file:// can run it.
+
+Chromium refuses module scripts on file:// pages (their origin is "null"), and Transcrypt only
+writes ES modules. The build therefore links the modules itself: every module body becomes a
+generator function in one script, and the script imitates what a browser does with modules:
+
+1. link: run every module up to its first ``yield``, which installs its exports as getters on a
+   namespace object (the module's own hoisted ``var``/``function`` bindings, so the getters are
+   live, as in a real module namespace);
+2. evaluate: resume the modules in the order a browser evaluates them (depth first, imports in
+   source order, each module after the modules it imports).
+
+Only the linkage lines are rewritten, never the code: a line must be one of the import and export
+forms Transcrypt writes (listed in ``IMPORT_*`` and ``EXPORT_*`` below), or the build stops and
+names the file and line. Named imports are copied when the module starts, which is exact unless
+the import closes a cycle (the exporting module has not run yet); that case is refused too, while
+``import * as ns`` across a cycle is fine (the namespace is live).
+
+Pure function: files in, bytes out; writes nothing.
+"""
+
+from __future__ import annotations
+
+import json
+import posixpath
+import re
+from dataclasses import dataclass, field
+
+from conductor_atlas.errors import BuildError
+
+NAME = r"[A-Za-z_$][A-Za-z0-9_$]*"
+SPEC = r"'(?P<spec>\.{1,2}/[^'\s]+\.js)'"
+IMPORT_NAMED = re.compile(rf"^import \{{(?P<names>[^}}]*)\}} from {SPEC};\s*$")
+IMPORT_STAR = re.compile(rf"^import \* as (?P<local>{NAME}) from {SPEC};\s*$")
+EXPORT_DECL = re.compile(rf"^export (?P<kind>var|let|const|function|class) (?P<name>{NAME})\b")
+EXPORT_LIST = re.compile(r"^export \{(?P<names>[^}]*)\};\s*$")
+LINKAGE_WORD = re.compile(r"^\s*(import|export)\b")
+DYNAMIC = re.compile(r"\bimport\s*\(|\bimport\.meta\b")
+PREFIX = "__ca_bundle_"  # the bundle's own names; a module using this prefix is refused
+
+
+@dataclass
+class Module:
+    path: str
+    body: list[str] = field(default_factory=list)                   # lines, linkage removed
+    imports: list[tuple[str, list[tuple[str, str]] | str]] = field(default_factory=list)
+    exports: dict[str, str] = field(default_factory=dict)           # exported name -> local name
+
+
+def _pairs(text: str, where: str) -> list[tuple[str, str]]:
+    """``a, b as c`` -> [("a", "a"), ("b", "c")] (outer name, local name)."""
+    pairs = []
+    for item in (part.strip() for part in text.split(",")):
+        if not item:
+            continue
+        match = re.fullmatch(rf"({NAME})(?:\s+as\s+({NAME}))?", item)
+        if match is None:
+            raise BuildError(f"{where}: cannot read import/export name {item!r}")
+        pairs.append((match.group(1), match.group(2) or match.group(1)))
+    return pairs
+
+
+def parse_module(path: str, source: str) -> Module:
+    """Split one module into its linkage (imports, exports) and its code."""
+    module = Module(path)
+    if PREFIX in source:
+        raise BuildError(f"{path}: uses the name prefix {PREFIX}, which the classic bundle reserves")
+    for number, line in enumerate(source.split("\n"), start=1):
+        where = f"{path}:{number}"
+        if DYNAMIC.search(line):
+            raise BuildError(f"{where}: dynamic import() or import.meta cannot be bundled into a classic script")
+        if not LINKAGE_WORD.match(line):
+            module.body.append(line)
+            continue
+        if m := IMPORT_NAMED.match(line):
+            module.imports.append((resolve(path, m["spec"]), _pairs(m["names"], where)))
+            module.body.append("")
+        elif m := IMPORT_STAR.match(line):
+            module.imports.append((resolve(path, m["spec"]), m["local"]))
+            module.body.append("")
+        elif m := EXPORT_DECL.match(line):
+            module.exports[m["name"]] = m["name"]
+            module.body.append(line[len("export "):])
+        elif m := EXPORT_LIST.match(line):
+            for local, outer in _pairs(m["names"], where):
+                module.exports[outer] = local
+            module.body.append("")
+        else:
+            raise BuildError(f"{where}: an import/export form the classic bundler does not know: "
+                             f"{line.strip()[:80]!r}")
+    return module
+
+
+def resolve(importer: str, spec: str) -> str:
+    return posixpath.normpath(posixpath.join(posixpath.dirname(importer), spec))
+
+
+def evaluation_order(entry: str, modules: dict[str, Module]) -> list[str]:
+    """Depth-first post-order from the entry, imports in source order: a browser's order."""
+    order: list[str] = []
+    seen: set[str] = set()
+
+    def visit(path: str) -> None:
+        seen.add(path)
+        for target, _ in modules[path].imports:
+            if target not in seen:
+                visit(target)
+        order.append(path)
+
+    visit(entry)
+    return order
+
+
+def load_graph(files: dict[str, bytes], entry: str) -> dict[str, Module]:
+    modules: dict[str, Module] = {}
+    pending = [entry]
+    while pending:
+        path = pending.pop()
+        if path in modules:
+            continue
+        if path not in files:
+            raise BuildError(f"classic bundle of {entry}: {path} is imported but is not a file of the site")
+        modules[path] = parse_module(path, files[path].decode("utf-8"))
+        pending.extend(target for target, _ in modules[path].imports)
+    return modules
+
+
+def bundle(files: dict[str, bytes], entry: str) -> bytes:
+    """One classic script that runs ``entry`` (a site path such as "static/calc.js") and its imports."""
+    modules = load_graph(files, entry)
+    order = evaluation_order(entry, modules)
+    position = {path: i for i, path in enumerate(order)}
+    out = [f"// Conductor Atlas: {entry} and the modules it imports, joined by the build into one classic",
+           "// script so the page also works when opened from a file. Generated; edit the modules instead.",
+           "(function () {",
+           "'use strict';",
+           f"const {PREFIX}ns = {json.dumps(order)}.map(() => Object.create(null));",
+           f"function {PREFIX}export(ns, getters) {{",
+           "  for (const name of Object.keys(getters).sort()) {",
+           "    Object.defineProperty(ns, name, {get: getters[name], enumerable: true});",
+           "  }",
+           "  Object.defineProperty(ns, Symbol.toStringTag, {value: 'Module'});",
+           "  Object.preventExtensions(ns);",
+           "}",
+           f"const {PREFIX}modules = [];"]
+    for path in order:
+        module = modules[path]
+        me = position[path]
+        getters = ", ".join(f"{json.dumps(outer)}: () => {local}" for outer, local in sorted(module.exports.items()))
+        out.append(f"// ---- module {path}")
+        out.append(f"{PREFIX}modules.push(function* () {{")
+        out.append(f"{PREFIX}export({PREFIX}ns[{me}], {{{getters}}});")
+        out.append("yield;")
+        for target, what in module.imports:
+            source = position[target]
+            if isinstance(what, str):
+                out.append(f"const {what} = {PREFIX}ns[{source}];")
+                continue
+            if source >= me:
+                raise BuildError(f"{path}: a named import from {target} closes an import cycle; "
+                                 f"the classic bundle supports only `import * as` across a cycle")
+            for outer, _ in what:
+                if outer not in modules[target].exports:
+                    raise BuildError(f"{path}: imports {outer!r} from {target}, which does not export it")
+            names = ", ".join(outer if outer == local else f"{outer}: {local}" for outer, local in what)
+            out.append(f"const {{{names}}} = {PREFIX}ns[{source}];")
+        out.extend(module.body)
+        out.append("});")
+    out.append(f"const {PREFIX}running = {PREFIX}modules.map((make) => make());")
+    out.append(f"for (const module of {PREFIX}running) module.next();")
+    out.append(f"for (const module of {PREFIX}running) module.next();")
+    out.append("})();")
+    return ("\n".join(out) + "\n").encode("utf-8")

@@ -1,0 +1,118 @@
+"""Build step for reading the site without a network: file:// scripts, the app manifest, sw.js.
+
+``add_offline_files(files)`` takes the finished site (path -> bytes) and returns it with:
+
+- ``static/<name>.classic.js`` for every ES-module script in static/ (see bundle.py): one classic
+  script that also runs on a page opened from a file, where browsers refuse module scripts;
+- ``site.webmanifest``: name, start page and icons, so a tablet can install the site;
+- ``sw.js`` (from templates/sw.js.j2): a service worker that, on the first served visit, stores
+  every other file of the site in one cache and then answers from it, network or not. Its cache
+  name carries a hash of every file's path and bytes, so any change to the site is a new cache
+  and the old one is deleted when the new worker takes over.
+
+All URLs are relative, so the site may live under any sub-path. Pure: computes, writes nothing.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import json
+import re
+import struct
+
+import jinja2
+
+from conductor_atlas.bundle import bundle
+from conductor_atlas.errors import BuildError
+from conductor_atlas.paths import TEMPLATES_DIR
+
+APP_NAME = "Conductor Atlas"
+SHORT_NAME = "Atlas"
+ICON_SVG = "icons/atlas.svg"          # under static/
+ICON_SIZES = (192, 512)               # PNGs at static/icons/atlas-<size>.png, rendered from the SVG
+THEME_COLOUR = "#9a4a1c"              # the icon's background, the site's accent
+BACKGROUND_COLOUR = "#fbfaf7"         # style.css --paper
+WORKER = "sw.js"
+MANIFEST = "site.webmanifest"
+MODULE_LINE = re.compile(rb"^(import|export)\b", re.MULTILINE)
+
+
+def classic_name(path: str) -> str:
+    return path[: -len(".js")] + ".classic.js"
+
+
+def classic_bundles(files: dict[str, bytes]) -> dict[str, bytes]:
+    """A classic-script twin for every module script in static/ (module = has import/export lines)."""
+    entries = [p for p in sorted(files) if p.startswith("static/") and p.endswith(".js")
+               and not p.endswith(".classic.js") and MODULE_LINE.search(files[p])]
+    return {classic_name(p): bundle(files, p) for p in entries}
+
+
+def png_size(data: bytes, path: str) -> tuple[int, int]:
+    if data[:8] != b"\x89PNG\r\n\x1a\n" or data[12:16] != b"IHDR":
+        raise BuildError(f"{path} is not a PNG file")
+    return struct.unpack(">II", data[16:24])
+
+
+def manifest(files: dict[str, bytes]) -> bytes:
+    """The web app manifest; every icon it lists must be in the site at the size it claims."""
+    icons = [{"src": f"static/{ICON_SVG}", "sizes": "any", "type": "image/svg+xml", "purpose": "any"}]
+    for size in ICON_SIZES:
+        path = f"static/icons/atlas-{size}.png"
+        if path not in files:
+            raise BuildError(f"{path} is missing (render it with `.venv/bin/python -m tests.support.icons`)")
+        if png_size(files[path], path) != (size, size):
+            raise BuildError(f"{path} is {png_size(files[path], path)} pixels, the manifest says {size}x{size}")
+        icons.append({"src": path, "sizes": f"{size}x{size}", "type": "image/png", "purpose": "any"})
+        # the drawing keeps inside the central 80 % circle, so the same PNG also serves icon masks
+        icons.append({"src": path, "sizes": f"{size}x{size}", "type": "image/png", "purpose": "maskable"})
+    if f"static/{ICON_SVG}" not in files:
+        raise BuildError(f"static/{ICON_SVG} is missing")
+    data = {
+        "name": APP_NAME,
+        "short_name": SHORT_NAME,
+        "description": "A sourced reference of electrical conductor materials, with tables and calculators "
+                       "that work offline.",
+        "id": "./",
+        "start_url": "./index.html",
+        "scope": "./",
+        "display": "standalone",
+        "background_color": BACKGROUND_COLOUR,
+        "theme_color": THEME_COLOUR,
+        "icons": icons,
+    }
+    return (json.dumps(data, ensure_ascii=False, indent=1) + "\n").encode("utf-8")
+
+
+def cache_version(files: dict[str, bytes]) -> str:
+    """A hash of every path and its bytes: equal sites share it, any change gives a new one."""
+    digest = hashlib.sha256()
+    for path in sorted(files):
+        digest.update(path.encode("utf-8") + b"\0" + str(len(files[path])).encode() + b"\0")
+        digest.update(files[path])
+    return digest.hexdigest()[:16]
+
+
+def precache_list(files: dict[str, bytes]) -> list[str]:
+    """Every file of the site, as URLs relative to sw.js (the site root)."""
+    return sorted(p for p in files if p != WORKER)
+
+
+def service_worker(files: dict[str, bytes]) -> bytes:
+    env = jinja2.Environment(loader=jinja2.FileSystemLoader(str(TEMPLATES_DIR)), autoescape=False,
+                             undefined=jinja2.StrictUndefined, keep_trailing_newline=True)
+    text = env.get_template("sw.js.j2").render(version=cache_version(files),
+                                               files_json=json.dumps(precache_list(files), indent=0))
+    return text.encode("utf-8")
+
+
+def add_offline_files(files: dict[str, bytes]) -> dict[str, bytes]:
+    """The site plus its classic scripts, manifest and service worker (the worker last: it lists all)."""
+    for name in (WORKER, MANIFEST):
+        if name in files:
+            raise BuildError(f"{name} is made by the offline step; another stage also wrote it")
+    out = dict(files)
+    out.update(classic_bundles(out))
+    out[MANIFEST] = manifest(out)
+    out[WORKER] = service_worker(out)
+    return out
