@@ -142,8 +142,20 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "cvd_a": si_or(m, "cvd_a", 0.0),
         "cvd_b": si_or(m, "cvd_b", 0.0),
         "cvd_c": si_or(m, "cvd_c", 0.0),
-        "sources": list(m.source_keys()),
+        "sources": model_sources(m),
+        "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
+        "mean_free_path_source": mfp.source if mfp is not None else "",
     }
+
+
+def model_sources(m: Material) -> list[str]:
+    """Source keys behind ρ(T) and density: what a resistance result rests on."""
+    keys = {v.source for name, v in m.properties.items()
+            if name in ("resistivity", "conductivity_iacs", "temperature_coefficient", "density",
+                        "relative_permeability", "cvd_a", "cvd_b", "cvd_c")}
+    if m.table is not None:
+        keys.add(m.table.source)
+    return sorted(keys)
 
 
 def calc_catalogue(records: list[dict], materials: list[Material]) -> dict:

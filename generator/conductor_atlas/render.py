@@ -15,7 +15,12 @@ import markdown
 import markdown.extensions
 import markdown.treeprocessors
 
+from markupsafe import Markup
+
+from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows
+from conductor_atlas.core.calculators import MODULES, calculator_names
 from conductor_atlas.derive import CELSIUS, MaterialView, calc_catalogue
+from conductor_atlas.material_charts import material_charts
 from conductor_atlas.core.numfmt import format_number, format_fixed
 from conductor_atlas.model import DataSet, Value
 from conductor_atlas.schema import CLASSES, PROPERTIES
@@ -114,10 +119,36 @@ def card_rows(view: MaterialView) -> list[CardRow]:
         text = format_number(value.si * scale, sig)
         if value.low is not None and value.high is not None:
             text = f"{text} ({format_number(value.low * scale, sig)} – {format_number(value.high * scale, sig)})"
-        rows.append(CardRow(id=f"prop-{name.replace('_', '-')}", label=PROPERTIES[name].label, value=text,
+        rows.append(CardRow(id=f"prop-{name.replace('_', '-')}", label=PROPERTIES[name].label[:1].upper() + PROPERTIES[name].label[1:], value=text,
                             unit=unit, condition=condition_text(value.temperature), source=value.source,
                             locator=value.locator, note=value.note))
     return rows
+
+
+def calc_spec(name: str, fixed: dict | None = None, datalist: str = "") -> dict:
+    """What the calculator form macro needs: fields with label/hint/default, results, caution.
+
+    ``fixed`` maps fields to values that become hidden inputs (the material on its own page).
+    """
+    module = MODULES[name]
+    fixed = fixed or {}
+    fields = []
+    for field in module.FIELDS:
+        label, hint = module.FIELD_INFO[field]
+        fields.append({"name": field, "label": label, "hint": hint,
+                       "value": fixed.get(field, module.DEFAULTS.get(field, "")),
+                       "hidden": field in fixed,
+                       "list": datalist if field in ("material", "other") and datalist else ""})
+    return {"name": name, "title": module.TITLE, "summary": module.SUMMARY, "fields": fields,
+            "results": [list(r) for r in module.RESULT_LABELS], "caution": module.CAUTION}
+
+
+def material_choices(views: list[MaterialView]) -> list[tuple[str, str]]:
+    """(value, label) for the material datalist: every id, then every alias."""
+    out = [(v.material.id, v.material.name) for v in views]
+    for v in views:
+        out.extend((a, v.material.name) for a in v.material.aliases)
+    return out
 
 
 class Renderer:
@@ -156,13 +187,30 @@ class Renderer:
             base = f"materials/{m.id}"
             used = [dataset.sources[k] for k in m.source_keys()]
             catalogue = calc_catalogue([view.calc], [m])
+            charts = [{"id": c.id, "caption": c.caption, "svg": Markup(c.svg)} for c in material_charts(view)]
             out[f"{base}/index.html"] = self.page(
                 "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view),
                 notes_html=markdown_safe(m.notes), sources=used, title=m.name,
-                calc_json=catalogue)
+                calc_json=catalogue, charts=charts, calc=calc_spec("resistance", {"material": m.id}))
             for table in view.tables:
                 out[f"{base}/{table.id}.csv"] = table.to_csv().encode("utf-8")
                 out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")
+        out["search/index.html"] = self.page("search.html", "search/index.html", title="Search")
+        full_catalogue = calc_catalogue([v.calc for v in views], [v.material for v in views])
+        choices = material_choices(views)
+        calcs = [calc_spec(name, datalist="material-choices") for name in calculator_names()]
+        out["calculators/index.html"] = self.page("calculators.html", "calculators/index.html", calcs=calcs,
+                                                  title="Calculators")
+        for spec in calcs:
+            out[f"calculators/{spec['name']}/index.html"] = self.page(
+                "calculator.html", f"calculators/{spec['name']}/index.html", calc=spec, calc_json=full_catalogue,
+                choices=choices, title=spec["title"])
+        out["compare/index.html"] = self.page(
+            "compare.html", "compare/index.html", rows=compare_rows(views), columns=COMPARE_COLUMNS,
+            title="Compare materials",
+            calc=calc_spec("compare", datalist="material-choices") if "compare" in MODULES else None,
+            calc_json=full_catalogue, choices=choices)
+        out["methods/index.html"] = self.page("methods.html", "methods/index.html", title="Methods")
         out["references/index.html"] = self.page("references.html", "references/index.html",
                                                  sources=list(dataset.sources.values()), title="References")
         out["materials.json"] = (json.dumps(

@@ -80,6 +80,8 @@ function show(form, outcome) {
   }
   const model = section.querySelector('[data-model]');
   if (model) model.textContent = outcome.model ? 'Model: ' + outcome.model : '';
+  const sources = section.querySelector('[data-sources]');
+  if (sources) sources.textContent = outcome.sources && outcome.sources.length ? 'Sources: ' + outcome.sources.join(', ') : '';
 }
 
 function run(form, catalogue) {

@@ -1,0 +1,84 @@
+"""The rows of the compare page: one line per material with the figures people sort by.
+
+Each cell carries the SI-derived number (for sorting, CSV) and the text shown.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+from conductor_atlas.core import resistance as dc
+from conductor_atlas.core import skin_effect as skin
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.material_models import resistivity_at
+from conductor_atlas.core.numfmt import format_number
+from conductor_atlas.derive import T20, MaterialView
+from conductor_atlas.schema import CLASSES
+
+IACS_DENSITY = 8890.0  # kg/m³, IEC 60028 density of standard annealed copper
+
+
+@dataclass(frozen=True)
+class Cell:
+    value: float | None
+    text: str
+
+
+@dataclass(frozen=True)
+class CompareRow:
+    id: str
+    name: str
+    klass: str
+    cells: tuple[Cell, ...]
+
+
+COLUMNS = (
+    ("rho", "ρ at 20 °C", "µΩ·cm"),
+    ("iacs", "Conductivity", "%IACS"),
+    ("alpha", "α at 20 °C", "1/K"),
+    ("density", "Density", "g/cm³"),
+    ("mass_iacs", "Conductivity per mass", "% of copper"),
+    ("mfp", "Mean free path", "nm"),
+    ("delta_50", "Skin depth at 50 Hz", "mm"),
+    ("delta_1m", "Skin depth at 1 MHz", "µm"),
+)
+
+
+def cell(value: float | None, scale: float, sig: int) -> Cell:
+    if value is None:
+        return Cell(None, "—")
+    return Cell(value * scale, format_number(value * scale, sig))
+
+
+def local_alpha(record: dict, rho_20: float) -> float | None:
+    """α at 20 °C, (dρ/dT)/ρ(20 °C) by a ±0.5 K central difference of the auto model."""
+    try:
+        lo = resistivity_at(record, T20 - 0.5, "auto")
+        hi = resistivity_at(record, T20 + 0.5, "auto")
+    except CoreError:
+        return None
+    if lo["warnings"] or hi["warnings"]:
+        return None
+    return (hi["rho"] - lo["rho"]) / 1.0 / rho_20
+
+
+def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
+    rows = []
+    for v in sorted(views, key=lambda v: v.rho_20):
+        record = v.calc
+        rho = v.rho_20
+        density = record["density"] or None
+        mass_iacs = dc.iacs_percent(rho) * IACS_DENSITY / density if density else None
+        mfp = record["mean_free_path"] or None
+        cells = (
+            cell(rho, 1e8, 4),
+            cell(dc.iacs_percent(rho), 1.0, 3),
+            cell(local_alpha(record, rho), 1.0, 3),
+            cell(density, 1e-3, 4),
+            cell(mass_iacs, 1.0, 3),
+            cell(mfp, 1e9, 3),
+            cell(skin.skin_depth(rho, 50.0, record["mu_r"]), 1e3, 3),
+            cell(skin.skin_depth(rho, 1e6, record["mu_r"]), 1e6, 3),
+        )
+        rows.append(CompareRow(v.material.id, v.material.name, CLASSES[v.material.klass], cells))
+    return rows
