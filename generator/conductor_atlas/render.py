@@ -143,6 +143,16 @@ def calc_spec(name: str, fixed: dict | None = None, datalist: str = "") -> dict:
             "results": [list(r) for r in module.RESULT_LABELS], "caution": module.CAUTION}
 
 
+# The order calculators are listed in: everyday jobs first.
+CALCULATOR_ORDER = ["resistance", "sizing", "temperature-rise", "resistivity", "compare", "skin-effect",
+                    "carriers", "thin-film"]
+
+
+def ordered_calculators() -> list[str]:
+    names = calculator_names()
+    return [n for n in CALCULATOR_ORDER if n in names] + [n for n in names if n not in CALCULATOR_ORDER]
+
+
 def material_choices(views: list[MaterialView]) -> list[tuple[str, str]]:
     """(value, label) for the material datalist: every id, then every alias."""
     out = [(v.material.id, v.material.name) for v in views]
@@ -181,7 +191,7 @@ class Renderer:
             if members:
                 groups.append({"id": klass, "title": title, "views": members})
         out["index.html"] = self.page("index.html", "index.html", groups=groups, views=views,
-                                      title=SITE_NAME)
+                                      calcs=[calc_spec(name) for name in ordered_calculators()], title=SITE_NAME)
         for view in views:
             m = view.material
             base = f"materials/{m.id}"
@@ -198,7 +208,7 @@ class Renderer:
         out["search/index.html"] = self.page("search.html", "search/index.html", title="Search")
         full_catalogue = calc_catalogue([v.calc for v in views], [v.material for v in views])
         choices = material_choices(views)
-        calcs = [calc_spec(name, datalist="material-choices") for name in calculator_names()]
+        calcs = [calc_spec(name, datalist="material-choices") for name in ordered_calculators()]
         out["calculators/index.html"] = self.page("calculators.html", "calculators/index.html", calcs=calcs,
                                                   title="Calculators")
         for spec in calcs:
