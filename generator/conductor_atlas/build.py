@@ -17,6 +17,7 @@ from conductor_atlas.offline import add_offline_files
 from conductor_atlas.paths import DATA_DIR, STATIC_DIR, TEMPLATES_DIR
 from conductor_atlas.publish import publish
 from conductor_atlas.render import Renderer
+from conductor_atlas.search_index import search_index_files
 from conductor_atlas.transpile import transpile_core
 
 
@@ -43,6 +44,7 @@ def assemble(dataset: DataSet) -> dict[str, bytes]:
     """Every output file of the site, in memory."""
     views = derive(dataset)
     files = Renderer(TEMPLATES_DIR, __version__).render_site(dataset, views)
+    files.update(search_index_files(dataset, views, files))
     files.update(static_files())
     files.update(transpile_core())
     return add_offline_files(files)  # last: the service worker lists every other file

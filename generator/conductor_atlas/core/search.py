@@ -36,7 +36,7 @@ Problems become messages in the outcome, never exceptions.
 import math
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity, normalise_text, NUMBER_PATTERN, SI_UNIT
+from conductor_atlas.core.units import parse_quantity, known_units, normalise_text, NUMBER_PATTERN, SI_UNIT
 from conductor_atlas.core.numfmt import format_number
 
 # Characters folded to ASCII (applied after lower()); combining marks U+0300-U+036F are dropped.
@@ -263,15 +263,15 @@ def prepare_entry(entry):
     for word in tokens(field_text(entry, "title")):
         if not (word in title_words):
             title_words.append(word)
+    add_words(words, order, field_text(entry, "title"), 1.0, "title")
+    for alias in field_list(entry, "aliases"):
+        add_words(words, order, alias, 1.0, "aliases")
+    add_words(words, order, field_text(entry, "id"), 0.9, "id")
+    add_words(words, order, field_text(entry, "material"), 0.8, "material")
+    add_words(words, order, field_text(entry, "class_title"), 0.5, "class_title")
     for text in field_list(entry, "keywords"):
         add_words(words, order, text, 0.5, "keywords")
     add_words(words, order, field_text(entry, "summary"), 0.3, "summary")
-    add_words(words, order, field_text(entry, "class_title"), 0.5, "class_title")
-    add_words(words, order, field_text(entry, "material"), 0.8, "material")
-    add_words(words, order, field_text(entry, "id"), 0.9, "id")
-    for alias in field_list(entry, "aliases"):
-        add_words(words, order, alias, 1.0, "aliases")
-    add_words(words, order, field_text(entry, "title"), 1.0, "title")
     exact = [compact(field_text(entry, "id")), compact(field_text(entry, "title"))]
     for alias in field_list(entry, "aliases"):
         exact.append(compact(alias))
@@ -372,10 +372,10 @@ def parse_filter(clause):
                         + filter_names(), "q")
     spec = match[0]
     if len(right) == 0:
-        raise CoreError(spec[1] + ": put a number after “" + found[1] + "”, e.g. " + spec[2][0] + " "
-                        + found[1] + " 3 " + spec[5], "q")
+        raise CoreError("put a number after “" + found[1] + "”, e.g. " + spec[2][0] + " " + found[1] + " 3 "
+                        + spec[5], "q")
     if find_operator(right) is not None:
-        raise CoreError(spec[1] + ": one comparison per clause; separate clauses with a comma or “and”", "q")
+        raise CoreError("one comparison per clause; separate clauses with a comma or “and”", "q")
     number_text = right
     unit_text = ""
     pieces = NUMBER_PATTERN.match(normalise_text(right))
@@ -392,7 +392,7 @@ def parse_filter(clause):
     try:
         value = parse_quantity(quantity_text, spec[3], "q", spec[4])
     except CoreError as problem:
-        raise CoreError(spec[1] + " " + found[1] + " " + right + ": " + problem.message, "q")
+        raise CoreError(filter_unit_message(spec, number_text, unit_text, problem.message), "q")
     shown_unit = spec[5]
     if len(unit_text) > 0:
         shown_unit = unit_text
@@ -406,6 +406,30 @@ def parse_filter(clause):
     words = left_words[0:len(left_words) - match[1]]
     return {"filter": {"property": spec[0], "label": spec[1], "op": op, "value": value, "text": text},
             "words": words}
+
+
+def filter_unit_message(spec, number_text, unit_text, message):
+    """The unit parser's message, or, when the number alone reads, which units the property takes."""
+    if len(unit_text) == 0:
+        return message
+    if not (message.startswith("unknown unit") or message.find("but this field needs") >= 0):
+        return message
+    try:
+        parse_quantity(number_text, spec[3], "q", spec[4])
+    except CoreError:
+        return message
+    units = []
+    if spec[3] == "ratio":
+        if len(spec[5]) > 0:
+            units.append(spec[5])
+    else:
+        units = known_units(spec[3])
+    text = "“" + unit_text + "” is not a unit of " + spec[1]
+    if len(units) > 0:
+        text = text + "; use " + ", ".join(units) + " or a bare number in " + spec[5]
+    else:
+        text = text + ", which is a plain number"
+    return text
 
 
 def op_symbol(op):
@@ -483,7 +507,7 @@ def word_qualities(vocabulary, query_words):
 
 
 def score_entry(item, query_words, qualities, query_compact):
-    """[number of query words matched, score, best field, the word matched there] for one entry."""
+    """[number of query words matched, score, the field of the best match] for one entry."""
     matched = 0
     score = 0.0
     best_field = ""
@@ -503,7 +527,7 @@ def score_entry(item, query_words, qualities, query_compact):
         if gain > 0:
             matched += 1
             score += 10.0 * gain
-            if field != "title" and gain > best_gain:
+            if gain > best_gain:
                 best_gain = gain
                 best_field = field
     if matched == 0:
@@ -581,6 +605,18 @@ def fact_text(entry, key):
     return ""
 
 
+def named_fact(entry, query_words):
+    """ "label value" of the first property whose label a query word spells (exactly or as a prefix)."""
+    facts = field_dict(entry, "facts")
+    for key in facts.keys():
+        label_words = tokens(facts[key][0])
+        for q in query_words:
+            for w in label_words:
+                if len(q) >= 3 and token_match(q, w)[0] >= 0.7:
+                    return facts[key][0] + " " + facts[key][1]
+    return ""
+
+
 def snippet_for(entry, field, filters, query_words):
     """The plain text shown under a result: filter values, the matched alias or property, or the summary."""
     parts = []
@@ -590,19 +626,14 @@ def snippet_for(entry, field, filters, query_words):
             parts.append(text)
     if len(parts) > 0:
         return " · ".join(parts)
+    named = named_fact(entry, query_words)
+    if len(named) > 0:
+        return named
     if field == "aliases":
         names = []
         for alias in field_list(entry, "aliases"):
             names.append(alias)
         return "Also known as " + ", ".join(names)
-    if field == "keywords":
-        facts = field_dict(entry, "facts")
-        for key in facts.keys():
-            label_words = tokens(facts[key][0])
-            for q in query_words:
-                for w in label_words:
-                    if token_match(q, w)[0] > 0:
-                        return facts[key][0] + " " + facts[key][1]
     if field == "class_title":
         return field_text(entry, "class_title") + " · " + field_text(entry, "summary")
     return field_text(entry, "summary")
@@ -633,7 +664,7 @@ def search(index, query, limit):
         try:
             parsed = parse_filter(clause)
         except CoreError as problem:
-            outcome["errors"].append(problem.message)
+            outcome["errors"].append("“" + clause + "”: " + problem.message)
             continue
         filters.append(parsed["filter"])
         query_words.extend(parsed["words"])

@@ -1,0 +1,239 @@
+// Conductor Atlas search glue: turns each search form into a combobox and shows what the core finds.
+// The matching, the filters and their unit parsing live in the core (conductor_atlas.core.search);
+// this file only fetches search-index.json, passes typed text to the core and builds the list.
+// Typed text and index text reach the page through textContent only, never as markup.
+import {prepare_index, search} from '../js/conductor_atlas.core.search.js';
+import {dict} from '../js/org.transcrypt.__runtime__.js';
+
+// The site root: every search form carries it (data-root, relative to the page) from the build.
+const FIRST_FORM = document.querySelector('form[data-search]');
+const SITE_ROOT = new URL(FIRST_FORM ? FIRST_FORM.dataset.root : './', window.location.href);
+const POPUP_LIMIT = 8;
+const PAGE_LIMIT = 60;
+const KIND_LABEL = {material: 'Material', table: 'Table', calculator: 'Calculator', page: 'Page'};
+
+let indexPromise = null;
+
+// JSON objects become Transcrypt dicts, as the core expects (arrays stay arrays).
+function toPy(value) {
+  if (Array.isArray(value)) return value.map(toPy);
+  if (value !== null && typeof value === 'object') {
+    const out = {};
+    for (const key of Object.keys(value)) out[key] = toPy(value[key]);
+    return dict(out);
+  }
+  return value;
+}
+
+function loadIndex() {
+  if (indexPromise === null) {
+    indexPromise = fetch(new URL('search-index.json', SITE_ROOT))
+      .then((response) => {
+        if (!response.ok) throw new Error('HTTP ' + response.status);
+        return response.json();
+      })
+      .then((data) => prepare_index(toPy(data.entries)));
+  }
+  return indexPromise;
+}
+
+function plural(n, word) {
+  return n + ' ' + word + (n === 1 ? '' : 's');
+}
+
+class SearchBox {
+  constructor(form) {
+    this.form = form;
+    this.mode = form.dataset.search === 'page' ? 'page' : 'popup';
+    this.input = form.querySelector('input[name=q]');
+    this.list = form.querySelector('.site-search-results');
+    this.message = form.querySelector('.site-search-message');
+    this.status = form.querySelector('[role=status]');
+    this.results = [];
+    this.active = -1;
+    this.index = null;
+    this.announceTimer = 0;
+    this.input.setAttribute('role', 'combobox');
+    this.input.setAttribute('aria-autocomplete', 'list');
+    this.input.setAttribute('aria-expanded', 'false');
+    this.input.setAttribute('aria-controls', this.list.id);
+    this.list.setAttribute('role', 'listbox');
+    this.input.addEventListener('input', () => this.run());
+    this.input.addEventListener('focus', () => { this.ensureIndex().catch(() => {}); }, {once: true});
+    this.input.addEventListener('keydown', (event) => this.onKey(event));
+    this.input.addEventListener('blur', () => { if (this.mode === 'popup') this.close(); });
+    // keep the focus in the input while a result is clicked
+    this.list.addEventListener('mousedown', (event) => event.preventDefault());
+    form.addEventListener('submit', (event) => {
+      if (this.mode === 'page') { event.preventDefault(); this.open(this.active); }
+    });
+  }
+
+  ensureIndex() {
+    return loadIndex().then((index) => { this.index = index; return index; }, (problem) => {
+      this.showMessage('The search index could not be loaded (' + String(problem && problem.message || problem)
+        + '); the home page lists every material.');
+      throw problem;
+    });
+  }
+
+  run() {
+    const text = this.input.value;
+    if (this.index === null) {
+      this.ensureIndex().then(() => { if (this.input.value === text) this.run(); }, () => {});
+      return;
+    }
+    let outcome;
+    try {
+      outcome = search(this.index, text, this.mode === 'page' ? PAGE_LIMIT : POPUP_LIMIT);
+    } catch (problem) {
+      outcome = {results: [], total: 0, filters: [], note: '',
+        errors: ['Search hit an internal problem: ' + String(problem && problem.message || problem)]};
+    }
+    this.show(outcome);
+    if (this.mode === 'page') this.writeQuery(text);
+  }
+
+  show(outcome) {
+    this.results = outcome.results;
+    this.active = -1;
+    this.input.removeAttribute('aria-activedescendant');
+    this.list.replaceChildren();
+    outcome.results.forEach((result, i) => this.list.appendChild(this.option(result, i)));
+    const lines = [];
+    for (const problem of outcome.errors) lines.push(problem);
+    for (const f of outcome.filters) lines.push('Filter: ' + f.text);
+    if (outcome.note) lines.push(outcome.note);
+    if (outcome.total > outcome.results.length) {
+      lines.push('Showing ' + outcome.results.length + ' of ' + outcome.total
+        + (this.mode === 'popup' ? '; Enter lists them all.' : '.'));
+    }
+    this.showMessage(lines.join(' '));
+    this.message.classList.toggle('is-error', outcome.errors.length > 0);
+    const empty = this.input.value.trim() === '';
+    const hasResults = outcome.results.length > 0;
+    this.list.hidden = !hasResults;
+    this.input.setAttribute('aria-expanded', hasResults ? 'true' : 'false');
+    if (empty) this.showMessage('');
+    this.announce(empty ? '' : (outcome.errors.length ? outcome.errors.join(' ')
+      : plural(outcome.total, 'result') + (hasResults ? '. First: ' + outcome.results[0].title + '.' : '.')
+        + (outcome.note ? ' ' + outcome.note : '')));
+  }
+
+  option(result, i) {
+    const item = document.createElement('li');
+    item.id = this.list.id + '-' + i;
+    item.setAttribute('role', 'option');
+    item.setAttribute('aria-selected', 'false');
+    item.dataset.url = result.url;
+    item.className = 'site-search-option kind-' + result.kind;
+    const kind = document.createElement('span');
+    kind.className = 'site-search-kind';
+    kind.textContent = KIND_LABEL[result.kind] || result.kind;
+    const title = document.createElement('span');
+    title.className = 'site-search-title';
+    title.textContent = result.title;
+    const snippet = document.createElement('span');
+    snippet.className = 'site-search-snippet';
+    snippet.textContent = result.snippet;
+    item.append(kind, title, snippet);
+    item.addEventListener('click', () => this.open(i));
+    return item;
+  }
+
+  showMessage(text) {
+    this.message.textContent = text;
+    this.message.hidden = text === '';
+  }
+
+  announce(text) {
+    // wait for a pause in typing so a screen reader is not flooded with counts
+    window.clearTimeout(this.announceTimer);
+    this.announceTimer = window.setTimeout(() => { this.status.textContent = text; }, 350);
+  }
+
+  move(step) {
+    const count = this.results.length;
+    if (count === 0) return;
+    this.list.hidden = false;
+    this.input.setAttribute('aria-expanded', 'true');
+    let next = this.active + step;
+    if (next < 0) next = count - 1;
+    if (next >= count) next = 0;
+    this.select(next);
+  }
+
+  select(i) {
+    const options = this.list.querySelectorAll('[role=option]');
+    options.forEach((node, k) => node.setAttribute('aria-selected', k === i ? 'true' : 'false'));
+    this.active = i;
+    if (i >= 0 && options[i]) {
+      this.input.setAttribute('aria-activedescendant', options[i].id);
+      options[i].scrollIntoView({block: 'nearest'});
+    } else {
+      this.input.removeAttribute('aria-activedescendant');
+    }
+  }
+
+  open(i) {
+    if (i < 0 || i >= this.results.length) return false;
+    window.location.assign(new URL(this.results[i].url, SITE_ROOT).href);
+    return true;
+  }
+
+  close() {
+    if (this.mode !== 'popup') return;
+    this.list.hidden = true;
+    this.input.setAttribute('aria-expanded', 'false');
+    this.select(-1);
+  }
+
+  clear() {
+    this.input.value = '';
+    this.show({results: [], total: 0, filters: [], errors: [], note: ''});
+    this.status.textContent = 'Search cleared.';
+    if (this.mode === 'page') this.writeQuery('');
+  }
+
+  onKey(event) {
+    if (event.key === 'ArrowDown') {
+      event.preventDefault();
+      this.move(1);
+    } else if (event.key === 'ArrowUp') {
+      event.preventDefault();
+      this.move(-1);
+    } else if (event.key === 'Enter') {
+      if (this.active >= 0) {
+        event.preventDefault();
+        this.open(this.active);
+      }
+      // otherwise the form goes to the search page (popup) or stays (page)
+    } else if (event.key === 'Escape') {
+      event.preventDefault();
+      this.clear();
+    } else if (event.key === 'Tab') {
+      this.close();
+    }
+  }
+
+  writeQuery(text) {
+    const params = new URLSearchParams(window.location.search);
+    if (text.trim() === '') params.delete('q'); else params.set('q', text);
+    const query = params.toString();
+    window.history.replaceState(null, '', window.location.pathname + (query ? '?' + query : ''));
+  }
+}
+
+// A page opened from a file cannot fetch the index: the forms stay plain links to the search
+// page, which then says that search needs the served site.
+if (window.location.protocol !== 'file:') {
+  const boxes = Array.from(document.querySelectorAll('form[data-search]')).map((form) => new SearchBox(form));
+  for (const box of boxes) {
+    if (box.mode === 'page') {
+      const typed = new URLSearchParams(window.location.search).get('q');
+      if (typed) box.input.value = typed;
+      box.ensureIndex().then(() => box.run(), () => {});
+    }
+  }
+  document.documentElement.classList.add('search-ready');
+}

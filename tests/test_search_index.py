@@ -1,0 +1,90 @@
+"""search-index.json: one entry per material, table and page; every link resolves in the built site."""
+
+from __future__ import annotations
+
+import json
+import re
+import tomllib
+
+import pint
+import pytest
+
+from conductor_atlas.build import data_folders
+from conductor_atlas.derive import derive
+from conductor_atlas.load import load_dataset
+from conductor_atlas.paths import DATA_DIR
+from conductor_atlas.search_index import build_index, index_json, page_title
+
+UREG = pint.UnitRegistry()
+
+
+@pytest.fixture(scope="module")
+def site_index(built_site):
+    return json.loads((built_site / "search-index.json").read_text(encoding="utf-8"))
+
+
+def target_exists(built_site, url):
+    path, _, anchor = url.partition("#")
+    page = built_site / path
+    if not page.is_file():
+        return False
+    return not anchor or re.search(rf'\bid="{re.escape(anchor)}"', page.read_text(encoding="utf-8")) is not None
+
+
+def test_one_entry_per_material_with_its_names(site_index):
+    dataset = load_dataset(data_folders())
+    materials = {e["id"]: e for e in site_index["entries"] if e["kind"] == "material"}
+    assert sorted(materials) == sorted(m.id for m in dataset.materials)
+    for m in dataset.materials:
+        entry = materials[m.id]
+        assert entry["title"] == m.name and entry["aliases"] == list(m.aliases)
+        assert entry["url"] == f"materials/{m.id}/index.html"
+
+
+def test_every_link_resolves(site_index, built_site):
+    broken = [e["url"] for e in site_index["entries"] if not target_exists(built_site, e["url"])]
+    assert broken == []
+    ids = [e["id"] for e in site_index["entries"]]
+    assert len(ids) == len(set(ids)), "entry ids are unique"
+
+
+def test_tables_and_calculators_are_entries(site_index, built_site):
+    kinds = {e["kind"] for e in site_index["entries"]}
+    assert {"material", "table", "calculator"} <= kinds
+    tables = [e for e in site_index["entries"] if e["kind"] == "table"]
+    # every table section on every material page has an entry (the pages are the reference)
+    on_pages = set()
+    for page in (built_site / "materials").glob("*/index.html"):
+        html = page.read_text(encoding="utf-8")
+        for table_id in re.findall(r'<section id="([^"]+)" class="derived"', html):
+            on_pages.add(f"{page.parent.name}/{table_id}")
+    assert on_pages and on_pages == {e["id"] for e in tables}
+    references = [e for e in site_index["entries"] if e["id"] == "references"]
+    assert references and references[0]["title"] == "References"
+
+
+def test_numbers_are_si_and_match_the_data_files(site_index):
+    # copper.toml gives density in g/cm^3 and resistivity in its own unit: pint converts them here
+    raw = tomllib.loads((DATA_DIR / "materials" / "copper.toml").read_text(encoding="utf-8"))
+    copper = next(e for e in site_index["entries"] if e["id"] == "copper")
+    for name in ("density", "resistivity", "mean_free_path"):
+        text = raw["properties"][name]["value"]
+        expected = UREG.Quantity(text).to_base_units().magnitude
+        assert copper["props"][name] == pytest.approx(expected, rel=1e-12), name
+    # %IACS is carried as a fraction: 100 %IACS = 1/58 Ω·mm²/m (IEC 60028) -> iacs_20 * rho_20 = 1.7241e-8 Ω·m
+    assert copper["props"]["iacs_20"] * copper["props"]["rho_20"] == pytest.approx(1 / 58 * 1e-6, rel=1e-9)
+
+
+def test_index_is_repeatable_and_compact():
+    dataset = load_dataset(data_folders())
+    views = derive(dataset)
+    first = index_json(build_index(dataset, views, {}))
+    second = index_json(build_index(dataset, derive(dataset), {}))
+    assert first == second
+    assert b"\n" not in first[:-1] and b": " not in first[:200]
+
+
+def test_page_title_strips_the_site_name():
+    assert page_title("<html><title>Skin depth · Conductor Atlas</title></html>".encode()) == "Skin depth"
+    assert page_title(b"<html><title>A &amp; B</title></html>") == "A & B"
+    assert page_title(b"<html></html>") == ""
