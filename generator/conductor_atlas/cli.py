@@ -35,6 +35,12 @@ def build_parser() -> argparse.ArgumentParser:
     p_serve = sub.add_parser("serve", help="serve the built site on http://127.0.0.1")
     p_serve.add_argument("--dir", type=Path, default=Path("site"), metavar="DIR", help="site folder (default: site)")
     p_serve.add_argument("--port", type=int, default=8000, help="port (default: 8000)")
+    p_new = sub.add_parser("new-material", help="write a commented template for a new material file")
+    p_new.add_argument("id", help="the new material's id, e.g. shop-bronze-7")
+    p_new.add_argument("--dir", type=Path, default=Path("my-materials"), metavar="DIR",
+                       help="folder to write it in (default: my-materials); build with --data DIR")
+    p_new.add_argument("--class", dest="klass", default="copper-alloy", help="material class (default: copper-alloy)")
+
     add_calc_parser(sub)
     return parser
 
@@ -62,7 +68,14 @@ def cmd_serve(args: argparse.Namespace) -> int:
     return 0
 
 
-COMMANDS = {"build": cmd_build, "check": cmd_check, "serve": cmd_serve, "calc": run_calc}
+def cmd_new_material(args: argparse.Namespace) -> int:
+    from conductor_atlas.new_material import write_template
+    path = write_template(args.id, args.dir, args.klass)
+    print(f"Wrote {path}. Fill in the values and sources, then: conductor-atlas check --data {args.dir}")
+    return 0
+
+
+COMMANDS = {"new-material": cmd_new_material, "build": cmd_build, "check": cmd_check, "serve": cmd_serve, "calc": run_calc}
 
 
 def main(argv: list[str] | None = None) -> int:

@@ -154,7 +154,7 @@ def read_record(name: str, record: object, where: str, sources: set[str], proble
         problems.add(f"{where}.source", f"expected a source key (a string naming an entry of sources.toml), found {source!r}")
         ok = False
     elif source not in sources:
-        problems.add(f"{where}.source", f"unknown source key \"{source}\"; add it to data/sources.toml")
+        problems.add(f"{where}.source", f"unknown source key \"{source}\"; add it to data/sources.toml or to a sources.toml in the same --data folder")
         ok = False
     value = parse_quantity(record["value"], spec.unit, f"{where}.value", problems)
     low = parse_quantity(record["min"], spec.unit, f"{where}.min", problems) if "min" in record else None
@@ -204,7 +204,7 @@ def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
                      f"found {table['source']!r}")
         return None
     if table["source"] not in sources:
-        problems.add(f"{where}.source", f"unknown source key \"{table['source']}\"; add it to data/sources.toml")
+        problems.add(f"{where}.source", f"unknown source key \"{table['source']}\"; add it to data/sources.toml or to a sources.toml in the same --data folder")
         return None
     points = table["points"]
     if not isinstance(points, list) or len(points) < 2:
