@@ -117,6 +117,7 @@ def calculate_resistance(inputs, catalogue):
             ratio = ac_ratio(outcome, size, rho, f, m["mu_r"])
         except CoreError as problem:
             add_error(outcome, "frequency", problem.message)
+            outcome["results"] = {}
             return outcome
         add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
         add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))

@@ -35,7 +35,7 @@ def awg_number(name):
             return i - 3
     if re.match(r"^0+$", text) is not None:
         return 1 - len(text)
-    if re.match(r"^[0-9]+$", text) is None:
+    if re.match(r"^[0-9]+$", text) is None or len(text) > 3:
         raise CoreError("“" + name + "” is not an AWG gauge (use 4/0 … 56)", "size")
     n = 0
     for ch in text:
@@ -44,9 +44,9 @@ def awg_number(name):
 
 
 def awg_name(n):
-    """Gauge number -> text (-3 -> "4/0", 12 -> "12")."""
+    """Gauge number -> text (-3 -> "4/0", 0 -> "1/0", -6 -> "7/0", 12 -> "12")."""
     if n <= 0:
-        return AWG_NAMES[n + 3]
+        return str(1 - n) + "/0"
     return str(n)
 
 

@@ -9,10 +9,16 @@ from conductor_atlas.core.errors import CoreError
 
 
 def fold(text):
-    """Lower case, trimmed, inner runs of spaces collapsed."""
+    """Lower case, trimmed, inner runs of spaces collapsed; characters beyond U+FFFF dropped.
+
+    (No id or alias has one; JS counts them as two units, so edit distances would differ.)
+    """
     out = ""
     space = False
     for ch in str(text).strip().lower():
+        code = ord(ch)
+        if code >= 0xD800 and (code <= 0xDFFF or code > 0xFFFF):
+            continue
         if ch == " " or ch == "\t":
             space = True
         else:

@@ -8,7 +8,7 @@ Bad input never raises out of a calculator: the message goes under errors[field]
 """
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity
+from conductor_atlas.core.units import parse_quantity, portable_text
 from conductor_atlas.core.numfmt import format_fixed
 
 
@@ -67,7 +67,7 @@ def field_text(inputs, field):
         value = inputs[field]
         if value is None:
             return ""
-        return str(value).strip()
+        return portable_text(str(value))
     return ""
 
 

@@ -66,7 +66,11 @@ def skin_depth(rho, f, mu_r=1.0):
     _positive(rho, "rho", "resistivity")
     _positive(f, "f", "frequency")
     _positive(mu_r, "mu_r", "relative permeability")
-    return math.sqrt(rho / (math.pi * f * MU_0 * mu_r))
+    delta = math.sqrt(rho / (math.pi * f * MU_0 * mu_r))
+    if not (delta > 0.0):
+        # pi f mu_0 mu_r overflows to infinity near f = 1e308 Hz, and delta would be 0
+        raise CoreError("frequency is too high to compute a skin depth", "f")
+    return delta
 
 
 def surface_resistance(rho, f, mu_r=1.0):
@@ -301,7 +305,7 @@ def kelvin_resistance_ratio(x):
     Evaluated with the exp(-x/sqrt 2)-scaled functions, so it is finite for every x. Limits:
     1 + x^4 / 192 for small x; x / (2 sqrt 2) + 1/4 + 3 / (16 sqrt 2 x) for large x
     (that is a / (2 delta) + 1/4 + 3 delta / (32 a)). Measured against mpmath: < 2e-13
-    relative for 1e-3 <= x <= 1e4.
+    relative for 1e-3 <= x <= 1e4; above x = 1e4 the large-x limit is returned.
     Solid, straight, isolated, non-magnetic or linear-magnetic wire; no proximity effect.
 
     References
@@ -313,6 +317,11 @@ def kelvin_resistance_ratio(x):
         raise CoreError("x must be a finite number >= 0", "x")
     if x == 0.0:
         return 1.0
+    if x > 1e4:
+        # the scaled series loses accuracy beyond x ~ 1e5 (1e-9 relative at 1e8, the wrong sign
+        # from 1e17); the three-term limit above agrees with it to 2e-13 at x = 1e4, and its
+        # omitted term is of order 1 / x ** 2
+        return x / (2.0 * _SQRT2) + 0.25 + 3.0 / (16.0 * _SQRT2 * x)
     v = kelvin_scaled(x)
     return 0.5 * x * (v[0] * v[3] - v[1] * v[2]) / (v[2] * v[2] + v[3] * v[3])
 

@@ -225,6 +225,10 @@ def bloch_gruneisen_resistivity(T, rho0, A, theta):
     _check_temperature(T, "T")
     _check_temperature(theta, "theta")
     r = T / theta
+    if r > 1e50:
+        # r ** 5 would overflow (CPython raises, JS gives Infinity); here the high-T expansion
+        # in the Notes is exact to double precision (the next term is of order 1 / r ** 3)
+        return rho0 + A * (r / 4.0 - 1.0 / (72.0 * r))
     return rho0 + A * r ** 5 * bloch_gruneisen_integral(5.0, 1.0 / r)
 
 

@@ -136,9 +136,20 @@ KIND_WORDS = {
 }
 
 
+# Characters CPython's str.strip() and JS's String.trim() treat differently (C0/C1 controls such
+# as \x1c-\x1f and \x85 are whitespace only to Python, U+FEFF only to JS): dropped before any strip
+UNPORTABLE_CHARACTERS = r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f-\x9f\ufeff]"
+
+
+def portable_text(text):
+    """``text`` without control characters and U+FEFF, line breaks as spaces, stripped: the same
+    string in both runtimes (JS regex ``.`` also stops at \\r, U+2028 and U+2029; Python's only at \\n)."""
+    return re.sub(r"[\n\r\u2028\u2029]", " ", re.sub(UNPORTABLE_CHARACTERS, "", text)).strip()
+
+
 def normalise_text(text):
     """Unify the look-alike characters people type: unicode minus, micro, ohm, superscripts."""
-    out = text.strip()
+    out = portable_text(text)
     out = out.replace("−", "-").replace("–", "-")
     out = out.replace("µ", "u").replace("μ", "u")
     out = out.replace("Ω", "ohm").replace("Ω", "ohm")
