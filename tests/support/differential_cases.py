@@ -106,7 +106,7 @@ def calculator_cases():
 
 def all_cases():
     return (unit_cases() + geometry_cases() + numfmt_cases() + resistance_cases() + calculator_cases()
-            + search_cases() + model_cases())
+            + search_cases() + model_cases() + physics_cases())
 
 
 SEARCH_QUERIES = [
@@ -173,4 +173,42 @@ def model_cases():
     cases.append(("conductor_atlas.core.outcome", "kelvin_text", [363.15]))
     cases.append(("conductor_atlas.core.calc_common", "read_temperature",
                   [{"errors": {}, "warnings": []}, {"temperature": "90 °C"}, "temperature"]))
+    return cases
+
+
+def physics_cases():
+    """Direct cases for carriers, size effect, practice and the model selector."""
+    fe = "conductor_atlas.core.carriers"
+    se = "conductor_atlas.core.size_effect"
+    pr = "conductor_atlas.core.practice"
+    cases = []
+    for n in (2.65e28, 8.47e28, 18.1e28, 0.0, -1.0):
+        for fn in ("fermi_wavenumber", "fermi_energy", "fermi_velocity", "plasma_frequency", "rho_lambda_product"):
+            cases.append((fe, fn, [n]))
+        cases.append((fe, "relaxation_time", [1.7e-8, n]))
+        cases.append((fe, "mean_free_path", [1.7e-8, n]))
+        cases.append((fe, "drift_velocity", [4e6, n]))
+    cases.append((fe, "electron_density", [8960.0, 0.063546, 1.0]))
+    cases.append((fe, "wiedemann_franz_thermal_conductivity", [1.7e-8, 293.15]))
+    for kappa in (1e-3, 0.1, 1.0, 10.0, 1e3, 0.0):
+        for p in (0.0, 0.5, 1.0):
+            cases.append((se, "fuchs_sondheimer_ratio", [kappa, p]))
+    for alpha in (0.0, 0.01, 0.3, 3.0, -1.0):
+        cases.append((se, "mayadas_shatzkes_ratio", [alpha]))
+    for kappa, alpha in ((0.5, 0.43), (2.0, 0.1)):
+        cases.append((se, "film_resistivity_ratio", [kappa, 0.0, alpha]))
+    cases.append((se, "mayadas_shatzkes_alpha", [39.9e-9, 20e-9, 0.3]))
+    cases.append((pr, "resistance_method_temperature", [10.0, 293.15, 12.5, 234.5]))
+    cases.append((pr, "temperature_rise", [10.0, 293.15, 12.5, 298.15, 234.5]))
+    cases.append((pr, "inferred_zero_from_alpha", [0.00393, 293.15]))
+    cases.append((pr, "equal_resistance_area_ratio", [1.7241e-8, 2.8264e-8]))
+    cases.append((pr, "equal_resistance_diameter_ratio", [1.7241e-8, 2.8264e-8]))
+    cases.append((pr, "equal_resistance_mass_ratio", [1.7241e-8, 8890.0, 2.8264e-8, 2703.0]))
+    cases.append((pr, "voltage_drop_min_area", [1.7241e-8, 16.0, 30.0, 6.9, 2.0]))
+    catalogue = shipped_catalogue()
+    for material_id in ("copper", "copper-annealed", "platinum-pt385", "iron", "stainless-304"):
+        record = catalogue["materials"][material_id]
+        for t in (4.2, 77.0, 293.15, 600.0, 1500.0):
+            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen"):
+                cases.append(("conductor_atlas.core.material_models", "resistivity_at", [record, t, model]))
     return cases

@@ -1,0 +1,100 @@
+"""A user's walk through the served site in Chromium: home → search → material → table row deep
+link → calculator permalink, checking what a person sees at each step."""
+
+from __future__ import annotations
+
+from urllib.parse import quote
+
+import pytest
+
+from conductor_atlas.build import data_folders
+from conductor_atlas.core.calculators import calculate
+from conductor_atlas.derive import catalogue_of
+from conductor_atlas.load import load_dataset
+
+pytestmark = pytest.mark.browser
+
+
+@pytest.fixture(scope="module")
+def catalogue():
+    return catalogue_of(load_dataset(data_folders()))
+
+
+@pytest.fixture()
+def page(browser):
+    context = browser.new_context(viewport={"width": 834, "height": 1112})  # a 10-11" tablet, portrait
+    pg = context.new_page()
+    errors = []
+    pg.on("pageerror", lambda e: errors.append(str(e)))
+    pg.on("console", lambda m: errors.append(m.text) if m.type == "error" else None)
+    pg.errors = errors
+    yield pg
+    context.close()
+
+
+def test_home_search_material_row_and_permalink(page, served_site, catalogue):
+    # 1. home: lists the classes, the calculators and the caution
+    page.goto(f"{served_site}/index.html")
+    assert page.text_content("h1").strip() == "Conductor Atlas"
+    assert page.locator("#materials .material-list li").count() >= 40
+    assert page.locator("#calculators li").count() == 8
+    assert "not ampacity ratings" in page.text_content(".intro .caution")
+
+    # 2. search with a typo, pick the first hit with the keyboard
+    page.wait_for_selector("html.search-ready")
+    box = page.locator("form[data-search=popup] input[name=q]")
+    box.click()
+    page.keyboard.type("aluminum 1350")
+    page.wait_for_selector("form[data-search=popup] [role=option]")
+    first = page.text_content("form[data-search=popup] [role=option] .site-search-title")
+    assert "1350" in first
+    page.keyboard.press("ArrowDown")
+    with page.expect_navigation():
+        page.keyboard.press("Enter")
+    assert "/materials/aluminium-1350" in page.url
+
+    # 3. the material page: sourced property card and a derived table with the 90 °C row
+    assert page.text_content("h1").strip().startswith("Conductor aluminium 1350")
+    card = page.text_content("#properties table")
+    assert "61" in card and "iec60889" in card
+    row = page.locator("#resistivity-temperature--t-90c")
+    assert row.count() == 1
+    # linear model, IEC 60889 α = 0.00403 /K at 20 °C: ρ(90 °C) = 2.8265 × (1 + 0.00403 × 70) = 3.6238 µΩ·cm
+    assert row.locator("td").nth(2).text_content() == "3.6238"
+
+    # 4. the row's own link: following it scrolls to and highlights that row
+    href = row.locator("a.row-link").get_attribute("href")
+    assert href == "#resistivity-temperature--t-90c"
+    page.goto(page.url.split("#")[0] + href)
+    assert page.evaluate("document.querySelector(':target') && document.querySelector(':target').id") == \
+        "resistivity-temperature--t-90c"
+    assert page.locator("#resistivity-temperature--t-90c").is_visible()
+
+    # 5. a calculator permalink reopens the calculation, with the numbers of the Python core
+    inputs = {"material": "1350", "length": "120 m", "size": "95 mm2", "temperature": "75 °C", "current": "150 A"}
+    query = "&".join(f"{k}={quote(v)}" for k, v in inputs.items())
+    page.goto(f"{served_site}/calculators/resistance/index.html?{query}")
+    page.wait_for_selector("html.calc-ready")
+    expected = calculate("resistance", inputs, catalogue)
+    assert expected["errors"] == {}
+    for name in ("resistance", "voltage_drop", "power_loss"):
+        cell = page.locator(f"[data-result={name}]")
+        assert float(cell.get_attribute("data-value")) == pytest.approx(expected["results"][name]["value"],
+                                                                        rel=1e-12, abs=0)
+        assert cell.text_content() == expected["results"][name]["text"]
+    assert page.input_value("input[name=material]") == "1350"
+    assert "not an ampacity rating" in page.text_content(".calculator .caution")
+    assert page.errors == []
+
+
+def test_compare_page_sorts_by_a_column(page, served_site):
+    page.goto(f"{served_site}/compare/index.html")
+    page.wait_for_selector("table.sortable .sort-button")
+    first_by_rho = page.text_content("#compare-table tbody tr:first-child th a")
+    assert "Silver" in first_by_rho  # lowest resistivity at 20 °C of the shipped metals
+    page.click("th[data-sort-key=density] .sort-button")
+    densities = page.eval_on_selector_all(
+        "#compare-table tbody td:nth-child(5)", "tds => tds.map(td => td.dataset.sort).filter(v => v !== undefined)")
+    values = [float(v) for v in densities]
+    assert values == sorted(values)
+    assert page.errors == []
