@@ -164,3 +164,28 @@ def test_committed_png_icons_match_the_svg(browser, size):
     assert worst != -1, f"atlas-{size}.png is not {size}x{size}"
     # anti-aliasing may differ by a step or two between Chromium builds; a changed drawing differs by ~100+
     assert worst <= 16, f"atlas-{size}.png no longer matches atlas.svg: run .venv/bin/python -m tests.support.icons"
+
+
+def test_every_page_reads_from_file_urls(browser, built_site):
+    """A folder copied to a laptop: every page opens from file:// without an error (a module script
+    would be refused there, with a console error), tables are present, and each calculator starts
+    (the build's classic bundle, bundle.py). Features that need the served copy say so."""
+    context = browser.new_context()
+    page = context.new_page()
+    errors: list[str] = []
+    page.on("pageerror", lambda e: errors.append(f"{page.url}: uncaught {e}"))
+    page.on("console", lambda m: errors.append(f"{page.url}: {m.text}") if m.type == "error" else None)
+    pages = sorted(p for p in built_site.rglob("*.html"))
+    calculators = 0
+    for path in pages:
+        page.goto(path.as_uri(), wait_until="load")
+        assert page.evaluate("document.documentElement.classList.contains('from-file')"), path
+        assert page.locator(".from-file-note").is_visible(), f"{path}: no note about serving the site"
+        assert page.locator("script[type=module]").count() == 0, f"{path}: a module script cannot run from file://"
+        if page.locator("form[data-calculator]").count():
+            page.wait_for_selector("html.calc-ready", timeout=10_000)
+            assert not page.locator(".calculator .needs-server").first.is_visible()
+            calculators += 1
+    context.close()
+    assert len(pages) > 3 and calculators > 0
+    assert errors == [], "\n".join(errors[:20])
