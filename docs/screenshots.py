@@ -18,8 +18,8 @@ from conductor_atlas.serve import make_server  # noqa: E402
 ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
         "--disable-component-update", "--disable-sync"]
 SHOTS = [
-    ("material-light.png", "materials/copper-annealed/index.html?length=35%20m&size=2.5%20mm2&temperature=70%20%C2%B0C&current=20%20A#properties", "light", 834),
-    ("material-dark.png", "materials/copper-annealed/index.html?length=35%20m&size=2.5%20mm2&temperature=70%20%C2%B0C&current=20%20A#properties", "dark", 834),
+    ("material-light.png", "materials/copper-annealed/index.html?length=35%20m&size=2.5%20mm2&temperature=70%20%C2%B0C&current=20%20A", "light", 834),
+    ("material-dark.png", "materials/copper-annealed/index.html?length=35%20m&size=2.5%20mm2&temperature=70%20%C2%B0C&current=20%20A", "dark", 834),
     ("compare.png", "compare/index.html", "light", 1180),
 ]
 

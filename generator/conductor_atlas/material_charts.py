@@ -68,8 +68,9 @@ def temperature_chart(view: MaterialView) -> Chart | None:
     svg = line_chart(series, x_label="Temperature", x_unit="K", y_label="Resistivity", y_unit="µΩ·cm",
                      title=f"Resistivity of {m.name} against temperature", chart_id="chart-rho-t",
                      y_domain=(0.0, 0.0))
-    return Chart("chart-rho-t", "Resistivity against temperature: sourced points and the model the calculators use "
-                 "(gaps where no model holds)", svg)
+    what = "sourced points and the model the calculators use" if m.table is not None else \
+        "the model the calculators use, over the span where it holds"
+    return Chart("chart-rho-t", f"Resistivity against temperature: {what} (gaps where no model holds)", svg)
 
 
 def skin_depth_chart(view: MaterialView) -> Chart | None:
