@@ -72,3 +72,12 @@ def test_publish_replaces_its_own_site(tmp_path):
     assert (out / "b.html").read_bytes() == b"2"
     assert (out / MARKER).is_file()
     assert sorted(p.name for p in tmp_path.iterdir() if not p.name.endswith(".lock")) == ["site"]
+
+
+def test_publish_clears_leftovers_of_a_killed_build(tmp_path):
+    out = tmp_path / "site"
+    publish({"a.html": b"1"}, out)
+    (tmp_path / ".site.new-99999" / "x").mkdir(parents=True)
+    (tmp_path / ".site.old-99999").mkdir()
+    publish({"b.html": b"2"}, out)
+    assert sorted(p.name for p in tmp_path.iterdir() if not p.name.endswith(".lock")) == ["site"]

@@ -37,6 +37,11 @@ def publish(files: dict[str, bytes], out: Path) -> Path:
         except BlockingIOError as exc:
             raise BuildError(f"another build is writing {out} right now; wait for it to finish") from exc
         check_replaceable(out)
+        # leftovers of a build that was killed mid-publish: safe to remove while we hold the lock
+        for stale in out.parent.glob(f".{out.name}.new-*"):
+            shutil.rmtree(stale, ignore_errors=True)
+        for stale in out.parent.glob(f".{out.name}.old-*"):
+            shutil.rmtree(stale, ignore_errors=True)
         staging = out.parent / f".{out.name}.new-{os.getpid()}"
         if staging.exists():
             shutil.rmtree(staging)
