@@ -185,6 +185,31 @@ class Renderer:
 
     def render_site(self, dataset: DataSet, views: list[MaterialView]) -> dict[str, bytes]:
         out: dict[str, bytes] = {}
+        for view in views:
+            out.update(self.render_material(dataset, view))
+        out.update(self.render_listings(dataset, views))
+        return out
+
+    def render_material(self, dataset: DataSet, view: MaterialView) -> dict[str, bytes]:
+        """The files of one material: its page and its tables as CSV and JSON (nothing else reads them)."""
+        out: dict[str, bytes] = {}
+        m = view.material
+        base = f"materials/{m.id}"
+        used = [dataset.sources[k] for k in m.source_keys()]
+        catalogue = calc_catalogue([view.calc], [m])
+        charts = [{"id": c.id, "caption": c.caption, "svg": Markup(c.svg)} for c in material_charts(view)]
+        out[f"{base}/index.html"] = self.page(
+            "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view),
+            notes_html=markdown_safe(m.notes), sources=used, title=m.name,
+            calc_json=catalogue, charts=charts, class_title=CLASSES[m.klass], calc=calc_spec("resistance", {"material": m.id}))
+        for table in view.tables:
+            out[f"{base}/{table.id}.csv"] = table.to_csv().encode("utf-8")
+            out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")
+        return out
+
+    def render_listings(self, dataset: DataSet, views: list[MaterialView]) -> dict[str, bytes]:
+        """The pages that list or look up every material, and the pages with no material on them."""
+        out: dict[str, bytes] = {}
         groups = []
         for klass, title in CLASSES.items():
             members = [v for v in views if v.material.klass == klass]
@@ -192,19 +217,6 @@ class Renderer:
                 groups.append({"id": klass, "title": title, "views": members})
         out["index.html"] = self.page("index.html", "index.html", groups=groups, views=views,
                                       calcs=[calc_spec(name) for name in ordered_calculators()], title=SITE_NAME)
-        for view in views:
-            m = view.material
-            base = f"materials/{m.id}"
-            used = [dataset.sources[k] for k in m.source_keys()]
-            catalogue = calc_catalogue([view.calc], [m])
-            charts = [{"id": c.id, "caption": c.caption, "svg": Markup(c.svg)} for c in material_charts(view)]
-            out[f"{base}/index.html"] = self.page(
-                "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view),
-                notes_html=markdown_safe(m.notes), sources=used, title=m.name,
-                calc_json=catalogue, charts=charts, calc=calc_spec("resistance", {"material": m.id}))
-            for table in view.tables:
-                out[f"{base}/{table.id}.csv"] = table.to_csv().encode("utf-8")
-                out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")
         out["search/index.html"] = self.page("search.html", "search/index.html", title="Search")
         full_catalogue = calc_catalogue([v.calc for v in views], [v.material for v in views])
         choices = material_choices(views)
