@@ -37,3 +37,19 @@ def test_build_into_folder(tmp_path, capsys):
     assert main(["build", "--out", str(tmp_path / "out")]) == 0
     assert "Built" in capsys.readouterr().out
     assert (tmp_path / "out" / "index.html").is_file()
+
+
+def test_calc_help_lists_every_calculator_and_field():
+    result = run_cli("calc", "--help")
+    assert result.returncode == 0, result.stderr
+    for name in ("resistance", "resistivity"):
+        assert name in result.stdout
+    result = run_cli("calc", "resistivity", "--help")
+    assert result.returncode == 0 and "--temperature" in result.stdout and "%IACS" in result.stdout
+
+
+def test_calc_unknown_material_lists_nearest_and_exits_1():
+    result = run_cli("calc", "resistance", "--material", "coper", "--size", "2.5 mm2")
+    assert result.returncode == 1
+    assert "--material: unknown material “coper”; nearest: copper" in result.stderr
+    assert "Traceback" not in result.stderr

@@ -24,13 +24,14 @@ def add_calc_parser(sub) -> None:
     calcs.required = True
     for name in sorted(CALCULATORS):
         module = MODULES[name]
-        p = calcs.add_parser(name, help=module.SUMMARY, description=module.SUMMARY)
+        summary = module.SUMMARY.replace("%", "%%")  # argparse formats help text with %
+        p = calcs.add_parser(name, help=summary, description=summary)
         for field in module.FIELDS:
             label, hint = module.FIELD_INFO[field]
             default = module.DEFAULTS.get(field, "")
             extra = f" (default: {default})" if default else ""
             p.add_argument(option_name(field), dest=f"field_{field}", metavar="TEXT", default=None,
-                           help=f"{label}: {hint}{extra}")
+                           help=f"{label}: {hint}{extra}".replace("%", "%%"))
         p.add_argument("--json", action="store_true", help="print one JSON object")
         p.add_argument("--data", action="append", type=Path, default=[], metavar="DIR",
                        help="an extra folder of material files (repeatable)")
