@@ -35,7 +35,9 @@ def tree_digest(hashes: dict[str, str]) -> str:
 
 
 def build_in_process(out: Path, hash_seed: str, epoch: str) -> None:
-    env = dict(os.environ, PYTHONHASHSEED=hash_seed, SOURCE_DATE_EPOCH=epoch, TZ="UTC")
+    # each build gets its own empty cache, so neither reads what the other made (see cache.py)
+    env = dict(os.environ, PYTHONHASHSEED=hash_seed, SOURCE_DATE_EPOCH=epoch, TZ="UTC",
+               CONDUCTOR_ATLAS_CACHE=str(out.parent / "build-cache"))
     result = subprocess.run([sys.executable, "-m", "conductor_atlas", "build", "--out", str(out)],
                             capture_output=True, text=True, cwd=PROJECT_ROOT, env=env, timeout=600)
     assert result.returncode == 0, result.stderr

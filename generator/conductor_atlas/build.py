@@ -5,16 +5,18 @@ Everything is computed in memory first; only ``publish`` touches the output fold
 
 from __future__ import annotations
 
+import hashlib
 import time
 from dataclasses import dataclass
 from pathlib import Path
 
 from conductor_atlas import __version__
-from conductor_atlas.derive import derive
+from conductor_atlas.cache import BuildCache, folder_key
+from conductor_atlas.derive import derive_material
 from conductor_atlas.load import load_dataset
-from conductor_atlas.model import DataSet
+from conductor_atlas.model import DataSet, Material
 from conductor_atlas.offline import add_offline_files
-from conductor_atlas.paths import DATA_DIR, STATIC_DIR, TEMPLATES_DIR
+from conductor_atlas.paths import CACHE_DIR, DATA_DIR, STATIC_DIR, TEMPLATES_DIR
 from conductor_atlas.publish import publish
 from conductor_atlas.render import Renderer
 from conductor_atlas.search_index import search_index_files
@@ -40,11 +42,30 @@ def static_files() -> dict[str, bytes]:
             for p in sorted(STATIC_DIR.rglob("*")) if p.is_file()}
 
 
-def assemble(dataset: DataSet) -> dict[str, bytes]:
-    """Every output file of the site, in memory."""
-    views = derive(dataset)
-    files = Renderer(TEMPLATES_DIR, __version__).render_site(dataset, views)
-    files.update(search_index_files(dataset, views, files))
+def material_key(dataset: DataSet, m: Material) -> bytes:
+    """What one material's view and pages are made from: its record and the sources it cites."""
+    return repr((m, [dataset.sources[k] for k in m.source_keys()])).encode("utf-8")
+
+
+def assemble(dataset: DataSet, cache: BuildCache | None = None) -> dict[str, bytes]:
+    """Every output file of the site, in memory; parts whose inputs are unchanged come from ``cache``."""
+    cache = cache or BuildCache(None)
+    renderer = Renderer(TEMPLATES_DIR, __version__)
+    views, files, keys = [], {}, []
+    for m in dataset.materials:
+        key = material_key(dataset, m)
+        keys.append(key)
+
+        def make(m=m):
+            view = derive_material(m)
+            return view, renderer.render_material(dataset, view)
+
+        view, pages = cache.get(f"material:{m.id}", key, make)
+        views.append(view)
+        files.update(pages)
+    site_key = hashlib.sha256(b"\0".join(keys) + repr(list(dataset.sources.values())).encode()).digest()
+    files.update(cache.get("site:listings", site_key, lambda: renderer.render_listings(dataset, views)))
+    files.update(cache.get("site:search-index", site_key, lambda: search_index_files(dataset, views, files)))
     files.update(static_files())
     files.update(transpile_core())
     return add_offline_files(files)  # last: the service worker lists every other file
@@ -52,8 +73,10 @@ def assemble(dataset: DataSet) -> dict[str, bytes]:
 
 def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
     start = time.perf_counter()
-    dataset = load_dataset(data_folders(extra_data))
-    files = assemble(dataset)
+    cache = BuildCache(CACHE_DIR)
+    folders = data_folders(extra_data)
+    dataset = cache.get("site:data", folder_key(folders), lambda: load_dataset(folders))
+    files = assemble(dataset, cache)
     published = publish(files, out)
     return BuildReport(out=published, materials=len(dataset.materials), files=len(files),
                        bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start)

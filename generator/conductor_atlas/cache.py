@@ -1,0 +1,135 @@
+"""The build cache: loaded data, derived views and rendered pages, reused when their inputs are unchanged.
+
+Each entry is keyed by a SHA-256 of the *code version* (every file of this package and of
+templates/, and the versions of the libraries whose output reaches a page) and of the entry's own
+inputs:
+
+- ``data``: every file under each data folder (relative path and bytes) -> the loaded DataSet;
+- ``material:<id>``: the material record and the sources it cites -> its view and its pages;
+- ``site:*``: the pages that list every material (home, compare, calculators, search index ...)
+  -> keyed by the keys of all materials and the bibliography.
+
+So a build with nothing changed reads everything back; editing one material file remakes that
+material and the site-wide pages only. An entry is written to a temporary name and renamed into
+place, so concurrent builds never read half an entry; an unreadable entry is made again. The
+folder is ``paths.CACHE_DIR`` (``CONDUCTOR_ATLAS_CACHE`` moves it; delete it at will).
+Reads and writes only the cache folder; pure otherwise.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import io
+import os
+import pickle
+import platform
+import tempfile
+from importlib import metadata
+from pathlib import Path
+from types import MappingProxyType
+from typing import Callable, TypeVar
+
+from conductor_atlas.paths import CACHE_DIR, PACKAGE_DIR, TEMPLATES_DIR
+
+T = TypeVar("T")
+FORMAT = b"conductor-atlas build cache 1"
+LIBRARIES = ("jinja2", "markdown", "markupsafe", "pint", "numpy", "transcrypt")
+# What the last build in this process made and reused (labels); the benchmark reads it.
+LAST_STATS: dict[str, list[str]] = {"made": [], "reused": []}
+
+
+def _mapping_proxy(contents: dict) -> MappingProxyType:
+    return MappingProxyType(contents)
+
+
+class _Pickler(pickle.Pickler):
+    """Pickles the read-only mappings of the data model (MappingProxyType) as their contents."""
+
+    def reducer_override(self, obj):
+        if type(obj) is MappingProxyType:
+            return _mapping_proxy, (dict(obj),)
+        return NotImplemented
+
+
+def dumps(value) -> bytes:
+    buffer = io.BytesIO()
+    _Pickler(buffer, protocol=pickle.HIGHEST_PROTOCOL).dump(value)
+    return buffer.getvalue()
+
+
+def _library_version(name: str) -> str:
+    try:
+        return metadata.version(name)
+    except metadata.PackageNotFoundError:
+        return "absent"
+
+
+def code_version() -> bytes:
+    """A digest of everything besides the data that decides the output."""
+    digest = hashlib.sha256(FORMAT)
+    digest.update(platform.python_version().encode())
+    for name in LIBRARIES:
+        digest.update(f"{name}={_library_version(name)}\0".encode())
+    for root in (PACKAGE_DIR, TEMPLATES_DIR):
+        for path in sorted(p for p in root.rglob("*") if p.is_file() and "__pycache__" not in p.parts):
+            digest.update(path.relative_to(root).as_posix().encode() + b"\0")
+            digest.update(path.read_bytes())
+    return digest.digest()
+
+
+def folder_key(folders: list[Path]) -> bytes:
+    """Every file under each folder, in order: any edit, addition or removal changes the key."""
+    digest = hashlib.sha256()
+    for folder in folders:
+        digest.update(str(folder.resolve()).encode() + b"\0\0")
+        for path in sorted(p for p in folder.rglob("*") if p.is_file()):
+            digest.update(path.relative_to(folder).as_posix().encode() + b"\0")
+            digest.update(path.read_bytes())
+    return digest.digest()
+
+
+class BuildCache:
+    """``get(label, key, make)``: the stored value for ``key``, or ``make()`` stored for next time."""
+
+    def __init__(self, folder: Path | None = CACHE_DIR) -> None:
+        self.folder = None if folder is None else folder / "build"
+        self.version = code_version()
+        self.made: list[str] = []
+        self.reused: list[str] = []
+        LAST_STATS["made"], LAST_STATS["reused"] = self.made, self.reused
+
+    def _path(self, label: str, key: bytes) -> Path:
+        name = hashlib.sha256(self.version + label.encode("utf-8") + b"\0" + key).hexdigest()
+        return self.folder / name[:2] / f"{name}.pickle"
+
+    def get(self, label: str, key: bytes, make: Callable[[], T]) -> T:
+        if self.folder is None:
+            self.made.append(label)
+            return make()
+        path = self._path(label, key)
+        try:
+            value = pickle.loads(path.read_bytes())
+        except FileNotFoundError:
+            pass
+        except (pickle.UnpicklingError, EOFError, AttributeError, ImportError, TypeError, ValueError):
+            pass  # written by another version or damaged: make it again
+        else:
+            self.reused.append(label)
+            return value
+        value = make()
+        self.made.append(label)
+        try:
+            data = dumps(value)
+        except (pickle.PicklingError, TypeError, AttributeError):
+            return value  # not storable: correct, only not cached
+        self._store(path, data)
+        return value
+
+    def _store(self, path: Path, data: bytes) -> None:
+        try:
+            path.parent.mkdir(parents=True, exist_ok=True)
+            with tempfile.NamedTemporaryFile(dir=path.parent, prefix=".tmp-", delete=False) as handle:
+                handle.write(data)
+            os.replace(handle.name, path)
+        except OSError:
+            pass  # a cache that cannot be written only makes the next build slower
