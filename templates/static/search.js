@@ -233,6 +233,8 @@ if (window.location.protocol !== 'file:') {
       const typed = new URLSearchParams(window.location.search).get('q');
       if (typed) box.input.value = typed;
       box.ensureIndex().then(() => box.run(), () => {});
+    } else if (document.activeElement === box.input && box.input.value.trim() !== '') {
+      box.run();  // typed while this script was loading (static/search-loader.js)
     }
   }
   document.documentElement.classList.add('search-ready');
