@@ -1,0 +1,236 @@
+"""Browser figures, measured in Debian's Chromium driven by Playwright against a served build.
+
+- page weight: every response a page load receives, recorded through the DevTools protocol
+  (Network domain), with its body size raw and gzip-compressed (level 6, what a compressing web
+  server sends); responses answered from the browser cache transfer no body and are counted apart.
+  The service worker is blocked here so the figures are the page's own; the offline copy it would
+  download in the background after the first visit is reported separately by run.py.
+- calculator update: in the page, performance.now() from dispatching an input event on a number
+  field to the moment a result's data-value has changed, CPU throttled ×4 (Emulation domain).
+- search: the same for the header search box, once its index is loaded.
+- first contentful paint of a material page, fresh browser context, CPU throttled ×4.
+"""
+
+from __future__ import annotations
+
+import base64
+import gzip
+import statistics
+import threading
+from contextlib import contextmanager
+from pathlib import Path
+
+CHROMIUM = "/usr/bin/chromium"
+CHROMIUM_ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
+                 "--disable-background-networking", "--disable-component-update", "--disable-sync"]
+THROTTLE = 4
+
+# Runs in the page: change a number field of the form back and forth, time each update.
+CALC_TIMER = """
+async ({name, rounds}) => {
+  const form = document.querySelector(`form[data-calculator="${name}"]`);
+  if (!form) return {error: 'no form for ' + name};
+  const section = form.closest('section');
+  const snapshot = () => Array.from(section.querySelectorAll('[data-result]'))
+    .map((cell) => cell.dataset.value === undefined ? '' : cell.dataset.value).join('|');
+  const changed = (before) => new Promise((resolve) => {
+    if (snapshot() !== before) { resolve(performance.now()); return; }
+    const observer = new MutationObserver(() => {
+      if (snapshot() !== before) { observer.disconnect(); resolve(performance.now()); }
+    });
+    observer.observe(section, {subtree: true, attributes: true, attributeFilter: ['data-value']});
+    setTimeout(() => { observer.disconnect(); resolve(null); }, 2000);
+  });
+  const candidates = Array.from(form.querySelectorAll('input[type=text]'))
+    .filter((input) => /^\\d/.test(input.value.trim()));
+  for (const input of candidates) {
+    const original = input.value;
+    const match = original.trim().match(/^(\\d+(?:\\.\\d+)?)(.*)$/);
+    const other = String(Math.round(parseFloat(match[1]) * 1.1 * 1000 + 1) / 1000) + match[2];
+    const samples = [];
+    for (let i = 0; i < rounds; i++) {
+      const before = snapshot();
+      const start = performance.now();
+      input.value = i % 2 === 0 ? other : original;
+      input.dispatchEvent(new Event('input', {bubbles: true}));
+      const end = await changed(before);
+      if (end === null) break;
+      samples.push(end - start);
+      await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+    }
+    if (samples.length === rounds) return {field: input.name, samples};
+    input.value = original;
+    input.dispatchEvent(new Event('input', {bubbles: true}));
+  }
+  return {error: 'no number field of ' + name + ' changes a result'};
+}
+"""
+
+# Runs in the page: load the search index with a first query, then time each query.
+SEARCH_TIMER = """
+async ({queries, rounds}) => {
+  const input = document.querySelector('form[data-search] input[name=q]');
+  const list = input.form.querySelector('.site-search-results');
+  input.focus();
+  input.value = queries[0];
+  input.dispatchEvent(new Event('input', {bubbles: true}));
+  const deadline = performance.now() + 30000;
+  while (list.hidden && performance.now() < deadline) await new Promise((r) => setTimeout(r, 20));
+  if (list.hidden) return {error: 'the search box never showed results for ' + queries[0]};
+  const out = {};
+  for (const query of queries) {
+    const samples = [];
+    for (let i = 0; i < rounds; i++) {
+      input.value = '';
+      input.dispatchEvent(new Event('input', {bubbles: true}));
+      await new Promise((r) => setTimeout(r, 0));
+      const start = performance.now();
+      input.value = query;
+      input.dispatchEvent(new Event('input', {bubbles: true}));
+      const end = performance.now();
+      if (list.hidden) return {error: 'no results for ' + query};
+      samples.push(end - start);
+    }
+    out[query] = samples;
+  }
+  return {samples: out};
+}
+"""
+
+
+@contextmanager
+def served(folder: Path):
+    from conductor_atlas.serve import make_server
+    server = make_server(folder, port=0, quiet=True)
+    thread = threading.Thread(target=server.serve_forever, daemon=True)
+    thread.start()
+    try:
+        yield f"http://127.0.0.1:{server.server_address[1]}"
+    finally:
+        server.shutdown()
+        server.server_close()
+
+
+@contextmanager
+def chromium():
+    from playwright.sync_api import sync_playwright
+    with sync_playwright() as p:
+        browser = p.chromium.launch(executable_path=CHROMIUM, args=CHROMIUM_ARGS)
+        try:
+            yield browser
+        finally:
+            browser.close()
+
+
+class Recorder:
+    """Every network response of one page, through the DevTools protocol."""
+
+    def __init__(self, page) -> None:
+        self.page = page
+        self.cdp = page.context.new_cdp_session(page)
+        self.cdp.send("Network.enable")
+        self.responses: dict[str, dict] = {}
+        self.cdp.on("Network.responseReceived", self._response)
+        self.cdp.on("Network.requestServedFromCache", self._from_cache)
+        self.cdp.on("Network.loadingFinished", self._finished)
+
+    def _response(self, event) -> None:
+        r = event["response"]
+        self.responses[event["requestId"]] = {
+            "url": r["url"], "status": r["status"], "type": event.get("type", ""),
+            "cached": bool(r.get("fromDiskCache") or r.get("fromPrefetchCache") or r.get("fromServiceWorker")),
+            "done": False}
+
+    def _from_cache(self, event) -> None:
+        self.responses.setdefault(event["requestId"], {"url": "", "status": 0, "done": False})["cached"] = True
+
+    def _finished(self, event) -> None:
+        if event["requestId"] in self.responses:
+            self.responses[event["requestId"]]["done"] = True
+            self.responses[event["requestId"]]["wire"] = event.get("encodedDataLength", 0)
+
+    def start(self) -> None:
+        self.responses = {}
+
+    def summary(self, base: str) -> dict:
+        files = []
+        for request_id, r in sorted(self.responses.items(), key=lambda kv: kv[1]["url"]):
+            if not r["url"].startswith(base):
+                continue
+            entry = {"path": r["url"][len(base):], "status": r["status"], "cached": r.get("cached", False),
+                     "wire": r.get("wire", 0), "raw": 0, "gzip": 0}
+            if r["status"] == 200 and not entry["cached"] and r["done"]:
+                body = self.cdp.send("Network.getResponseBody", {"requestId": request_id})
+                data = base64.b64decode(body["body"]) if body["base64Encoded"] else body["body"].encode("utf-8")
+                if entry["wire"] >= len(data):  # the body came over the network (not a 304 revalidation)
+                    entry["raw"] = len(data)
+                    entry["gzip"] = len(gzip.compress(data, compresslevel=6, mtime=0))
+                else:
+                    entry["cached"] = True
+            files.append(entry)
+        return {"raw": sum(f["raw"] for f in files), "gzip": sum(f["gzip"] for f in files),
+                "wire": sum(f["wire"] for f in files),
+                "requests": len(files), "from_cache": sum(1 for f in files if f["cached"] or f["status"] == 304),
+                "files": files}
+
+
+def page_weight(browser, base: str, first: str, second: str) -> dict:
+    """Bytes of a first visit to ``first``, then of ``second`` with the browser cache warm."""
+    context = browser.new_context(service_workers="block")
+    page = context.new_page()
+    recorder = Recorder(page)
+    page.goto(f"{base}/{first}", wait_until="networkidle")
+    visit_one = recorder.summary(base + "/")
+    recorder.start()
+    page.goto(f"{base}/{second}", wait_until="networkidle")
+    visit_two = recorder.summary(base + "/")
+    context.close()
+    return {"first": {"page": first, **visit_one}, "second": {"page": second, **visit_two}}
+
+
+def throttled_page(browser, url: str):
+    context = browser.new_context(service_workers="block")
+    page = context.new_page()
+    cdp = context.new_cdp_session(page)
+    cdp.send("Emulation.setCPUThrottlingRate", {"rate": THROTTLE})
+    page.goto(url, wait_until="networkidle")
+    return context, page
+
+
+def calculator_times(browser, base: str, names: list[str], rounds: int) -> dict:
+    out = {}
+    for name in names:
+        context, page = throttled_page(browser, f"{base}/calculators/{name}/index.html")
+        page.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
+        result = page.evaluate(CALC_TIMER, {"name": name, "rounds": rounds})
+        context.close()
+        if "error" in result:
+            out[name] = {"error": result["error"]}
+        else:
+            out[name] = {"field": result["field"], "median_ms": statistics.median(result["samples"]),
+                         "samples_ms": result["samples"]}
+    return out
+
+
+def search_times(browser, base: str, queries: list[str], rounds: int) -> dict:
+    context, page = throttled_page(browser, f"{base}/index.html")
+    page.wait_for_selector("html.search-ready", state="attached", timeout=60000)
+    result = page.evaluate(SEARCH_TIMER, {"queries": queries, "rounds": rounds})
+    context.close()
+    if "error" in result:
+        return {"error": result["error"]}
+    per_query = {q: statistics.median(s) for q, s in result["samples"].items()}
+    return {"median_ms": statistics.median(per_query.values()), "worst_query_ms": max(per_query.values()),
+            "per_query_ms": per_query}
+
+
+def first_contentful_paint(browser, base: str, path: str, rounds: int) -> dict:
+    samples = []
+    for _ in range(rounds):
+        context, page = throttled_page(browser, f"{base}/{path}")
+        fcp = page.evaluate("() => { const e = performance.getEntriesByName('first-contentful-paint')[0];"
+                            " return e ? e.startTime : null; }")
+        context.close()
+        if fcp is not None:
+            samples.append(fcp)
+    return {"median_ms": statistics.median(samples) if samples else None, "samples_ms": samples}

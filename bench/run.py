@@ -1,0 +1,349 @@
+"""Conductor Atlas benchmark: build speed, scaling, page weight and in-browser speed, against targets.
+
+    .venv/bin/python bench/run.py [--quick] [--reps N] [--scales 10,50] [--out bench/results.json]
+                                  [--no-browser] [--keep DIR]
+
+Prints one table and writes JSON. Every figure is the median of --reps runs (``--quick``: one run,
+a ×2 scale, one calculator, so the test suite can check the script still works). Each timing is
+also given as a ratio to a floor measured in the same run, because absolute times drift on a
+shared machine:
+
+- builds: the floor is rendering the same pages with the same templates over views derived
+  beforehand, and writing the bytes (bench/worker.py floor); each build runs in a fresh process
+  with the build cache (CONDUCTOR_ATLAS_CACHE) in a temporary folder: empty for "cold";
+- browser: the floor is the same measurement on a page whose input handler only copies the
+  input into a data-value (no core), under the same ×4 CPU throttling.
+
+Temporary data sets (a copy of data/ with one file edited; ×N renamed copies) live in a temporary
+folder and are removed afterwards unless --keep is given. Nothing is written outside it but the
+JSON file.
+"""
+
+from __future__ import annotations
+
+import argparse
+import gzip
+import json
+import os
+import platform
+import shutil
+import statistics
+import subprocess
+import sys
+import tempfile
+import time
+from pathlib import Path
+
+BENCH_DIR = Path(__file__).resolve().parent
+ROOT = BENCH_DIR.parent
+sys.path.insert(0, str(BENCH_DIR))
+sys.path.insert(0, str(ROOT / "generator"))
+
+import dataset as bench_data  # noqa: E402  (bench/dataset.py)
+
+KB = 1000  # targets are in kB (10^3 bytes), the strict reading
+AGGREGATE_PREFIX = "site:"    # cache labels of the pages that list every material (see cache.py)
+CHANGED_ID = "copper"
+FIRST_PAGE = "materials/copper/index.html"
+SECOND_PAGE = "materials/aluminium/index.html"
+SEARCH_QUERIES = ["copper", "C17200", "nickl chrom", "resistivity < 3 uohm*cm"]
+CALC_FLOOR = """
+async ({rounds}) => {
+  const form = document.createElement('form');
+  const input = document.createElement('input');
+  const cell = document.createElement('dd');
+  form.append(input, cell);
+  document.body.append(form);
+  form.addEventListener('input', () => { cell.textContent = input.value; cell.dataset.value = input.value; });
+  const samples = [];
+  for (let i = 0; i < rounds; i++) {
+    const start = performance.now();
+    input.value = String(i);
+    input.dispatchEvent(new Event('input', {bubbles: true}));
+    if (cell.dataset.value !== String(i)) return {error: 'floor handler did not run'};
+    samples.push(performance.now() - start);
+    await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+  }
+  form.remove();
+  return {samples};
+}
+"""
+FLOOR_PAGE = "<!doctype html><html lang=en><meta charset=utf-8><title>floor</title><p>Floor page.</p></html>"
+
+
+def median(values):
+    values = [v for v in values if v is not None]
+    return statistics.median(values) if values else None
+
+
+def worker(mode: str, shipped: Path, extra: list[Path], out: Path, cache: Path) -> dict:
+    command = [sys.executable, str(BENCH_DIR / "worker.py"), mode, "--shipped", str(shipped), "--out", str(out)]
+    for folder in extra:
+        command += ["--data", str(folder)]
+    env = dict(os.environ, CONDUCTOR_ATLAS_CACHE=str(cache), PYTHONHASHSEED="0")
+    result = subprocess.run(command, capture_output=True, text=True, env=env, cwd=str(ROOT))
+    if result.returncode != 0:
+        raise SystemExit(f"bench: `{' '.join(command)}` failed:\n{result.stderr[-3000:]}")
+    return json.loads(result.stdout.strip().splitlines()[-1])
+
+
+def seed_transpile(source_cache: Path, target_cache: Path) -> None:
+    """A build cache holding only the transpiled core: data-dependent work stays cold."""
+    target_cache.mkdir(parents=True)
+    if (source_cache / "transpile").is_dir():
+        shutil.copytree(source_cache / "transpile", target_cache / "transpile")
+
+
+# ---------------------------------------------------------------- build
+def build_section(tmp: Path, reps: int) -> dict:
+    shipped = bench_data.copy_shipped(tmp / "data")
+    floors, cold, warm, changed = [], [], [], []
+    for rep in range(reps):
+        floors.append(worker("floor", shipped, [], tmp / f"floor-{rep}", tmp / "floor-cache"))
+        cache = tmp / f"cache-{rep}"
+        cold.append(worker("build", shipped, [], tmp / f"site-{rep}", cache))
+        warm.append(worker("build", shipped, [], tmp / f"site-{rep}", cache))
+        bench_data.edit_one_material(shipped, CHANGED_ID)
+        changed.append(worker("build", shipped, [], tmp / f"site-{rep}", cache))
+    floor_s = median(r["seconds"] for r in floors)
+    out = {
+        "floor_s": floor_s,
+        "cold_s": median(r["seconds"] for r in cold),
+        "warm_s": median(r["seconds"] for r in warm),
+        "changed_s": median(r["seconds"] for r in changed),
+        "materials": cold[0]["materials"], "files": cold[0]["files"],
+        "runs": {"floor": floors, "cold": cold, "warm": warm, "changed": changed},
+        "site": str(tmp / "site-0"), "cache": str(tmp / "cache-0"),
+    }
+    remade = changed[-1].get("remade")
+    out["changed_remade"] = remade
+    if remade is None:
+        out["changed_scope_ok"] = False
+        out["changed_scope"] = "no build cache: every page is rendered again"
+    else:
+        materials = [label for label in remade if not label.startswith(AGGREGATE_PREFIX)]
+        out["changed_scope_ok"] = all(label.endswith(f":{CHANGED_ID}") for label in materials) and len(remade) > 0
+        out["changed_scope"] = (f"{len(materials)} material part(s) ({', '.join(materials) or 'none'}) + "
+                                f"{len(remade) - len(materials)} site-wide part(s) remade, "
+                                f"{changed[-1].get('reused', 0)} reused")
+    return out
+
+
+# ---------------------------------------------------------------- scale
+def scale_section(tmp: Path, factors: list[int], reps: int, seed_cache: Path) -> dict:
+    out = {}
+    for factor in factors:
+        extra = bench_data.scaled_copies(tmp / f"x{factor}-data", factor)
+        runs = []
+        for rep in range(reps):
+            cache = tmp / f"x{factor}-cache-{rep}"
+            seed_transpile(seed_cache, cache)
+            runs.append(worker("build", ROOT / "data", [extra], tmp / f"x{factor}-site", cache))
+        floor = worker("floor", ROOT / "data", [extra], tmp / f"x{factor}-floor", tmp / "floor-cache")
+        out[factor] = {"seconds": median(r["seconds"] for r in runs),
+                       "peak_rss_mb": max(r["peak_rss_mb"] for r in runs),
+                       "floor_s": floor["seconds"], "materials": runs[0]["materials"], "files": runs[0]["files"],
+                       "site": str(tmp / f"x{factor}-site"), "runs": runs}
+        shutil.rmtree(tmp / f"x{factor}-floor", ignore_errors=True)
+    return out
+
+
+# ---------------------------------------------------------------- site files
+def gz(data: bytes) -> int:
+    return len(gzip.compress(data, compresslevel=6, mtime=0))
+
+
+def site_section(site: Path) -> dict:
+    files = {p.relative_to(site).as_posix(): p.read_bytes() for p in sorted(site.rglob("*")) if p.is_file()}
+    pages = {k: v for k, v in files.items() if k.endswith(".html")}
+    largest = max(pages, key=lambda k: len(pages[k]))
+    worker_text = files.get("sw.js", b"").decode("utf-8")
+    precached = [k for k in files if f'"{k}"' in worker_text]
+    return {"files": len(files), "total_raw": sum(map(len, files.values())),
+            "total_gzip": sum(gz(v) for v in files.values()),
+            "largest_page": largest, "largest_raw": len(pages[largest]), "largest_gzip": gz(pages[largest]),
+            "precache_files": len(precached), "precache_raw": sum(len(files[k]) for k in precached),
+            "precache_gzip": sum(gz(files[k]) for k in precached)}
+
+
+# ---------------------------------------------------------------- browser
+def browser_section(site: Path, big_site: Path | None, calculators: list[str], rounds: int, reps: int) -> dict:
+    import browser as bench_browser  # bench/browser.py; imports Playwright
+    out: dict = {}
+    with bench_browser.chromium() as chromium:
+        with bench_browser.served(site) as base:
+            out["weight"] = bench_browser.page_weight(chromium, base, FIRST_PAGE, SECOND_PAGE)
+            context, page = bench_browser.throttled_page(chromium, f"{base}/methods/index.html")
+            floor = page.evaluate(CALC_FLOOR, {"rounds": rounds})
+            context.close()
+            out["input_floor_ms"] = median(floor.get("samples", [None]))
+            out["calculators"] = bench_browser.calculator_times(chromium, base, calculators, rounds)
+            out["search"] = bench_browser.search_times(chromium, base, SEARCH_QUERIES, rounds)
+            out["fcp"] = bench_browser.first_contentful_paint(chromium, base, FIRST_PAGE, reps)
+            out["fcp_floor"] = fcp_floor(chromium, base, reps)
+        if big_site is not None:
+            with bench_browser.served(big_site) as base:
+                out["search_big"] = bench_browser.search_times(chromium, base, SEARCH_QUERIES, rounds)
+    return out
+
+
+def fcp_floor(chromium, base: str, reps: int) -> float | None:
+    """First contentful paint of a one-paragraph page from the same server, same throttling."""
+    import browser as bench_browser
+    samples = []
+    for _ in range(reps):
+        context = chromium.new_context(service_workers="block")
+        page = context.new_page()
+        page.route(f"{base}/__floor.html", lambda route: route.fulfill(body=FLOOR_PAGE, content_type="text/html"))
+        cdp = context.new_cdp_session(page)
+        cdp.send("Emulation.setCPUThrottlingRate", {"rate": bench_browser.THROTTLE})
+        page.goto(f"{base}/__floor.html", wait_until="load")
+        samples.append(page.evaluate("() => { const e = performance.getEntriesByName('first-contentful-paint')[0];"
+                                     " return e ? e.startTime : null; }"))
+        context.close()
+    return median(samples)
+
+
+# ---------------------------------------------------------------- report
+def ratio(a, b):
+    return None if a is None or not b else a / b
+
+
+def figures(results: dict) -> list[dict]:
+    rows = []
+
+    def add(section, name, value, unit, floor=None, target=None, ok=None, note=""):
+        rows.append({"section": section, "figure": name, "value": value, "unit": unit,
+                     "x_floor": ratio(value, floor) if floor is not None else None,
+                     "target": target, "status": None if ok is None else ("PASS" if ok else "MISS"), "note": note})
+
+    b = results.get("build")
+    if b:
+        f = b["floor_s"]
+        add("build", "render-and-write floor", f, "s", f)
+        add("build", "cold build (empty cache)", b["cold_s"], "s", f, "≤ 3× floor", b["cold_s"] <= 3 * f)
+        add("build", "warm build (nothing changed)", b["warm_s"], "s", f, "≤ 10 % of cold",
+            b["warm_s"] <= 0.10 * b["cold_s"], f"{100 * b['warm_s'] / b['cold_s']:.1f} % of cold")
+        add("build", f"rebuild after editing {CHANGED_ID}.toml", b["changed_s"], "s", f,
+            "only what depends on it", b["changed_scope_ok"], b["changed_scope"])
+    s = results.get("scale")
+    if s:
+        for factor, r in sorted(s.items(), key=lambda kv: int(kv[0])):
+            add("scale", f"×{factor} build ({r['materials']} materials)", r["seconds"], "s", r["floor_s"])
+            add("scale", f"×{factor} peak memory", r["peak_rss_mb"], "MB")
+        keys = sorted(s, key=int)
+        if len(keys) >= 2:
+            import math
+            lo, hi = keys[-2], keys[-1]
+            exponent = math.log(s[hi]["seconds"] / s[lo]["seconds"]) / math.log(int(hi) / int(lo))
+            add("scale", f"growth exponent ×{lo}→×{hi}", exponent, "", None, "≤ 1.1", exponent <= 1.1)
+    site = results.get("site")
+    if site:
+        add("weight", "total site", site["total_raw"] / KB, "kB raw", note=f"{site['total_gzip'] / KB:.0f} kB gzip, "
+            f"{site['files']} files")
+        add("weight", f"largest page ({site['largest_page']})", site["largest_raw"] / KB, "kB raw",
+            note=f"{site['largest_gzip'] / KB:.1f} kB gzip")
+        add("weight", "offline copy (service worker, after load)", site["precache_gzip"] / KB, "kB gzip",
+            note=f"{site['precache_raw'] / KB:.0f} kB raw, {site['precache_files']} files, in the background")
+    br = results.get("browser")
+    if br:
+        w = br["weight"]
+        add("weight", f"first visit {w['first']['page']}", w["first"]["gzip"] / KB, "kB gzip", None, "≤ 60 kB",
+            w["first"]["gzip"] <= 60 * KB, f"{w['first']['raw'] / KB:.1f} kB raw, {w['first']['requests']} requests")
+        add("weight", f"next page {w['second']['page']}", w["second"]["gzip"] / KB, "kB gzip", None, "≤ 15 kB",
+            w["second"]["gzip"] <= 15 * KB, f"{w['second']['raw'] / KB:.1f} kB raw, "
+            f"{w['second']['from_cache']} of {w['second']['requests']} requests from cache")
+        fl = br["input_floor_ms"]
+        add("browser", "input→data-value floor (no core)", fl, "ms", fl)
+        for name, r in br["calculators"].items():
+            if "error" in r:
+                add("browser", f"calculator {name}", None, "ms", None, "≤ 5 ms", False, r["error"])
+            else:
+                add("browser", f"calculator {name} ({r['field']})", r["median_ms"], "ms", fl, "≤ 5 ms",
+                    r["median_ms"] <= 5.0)
+        for key, label, limit in (("search", "search, shipped set", 10.0), ("search_big", "search, ×50 set", 50.0)):
+            r = br.get(key)
+            if r is None:
+                continue
+            if "error" in r:
+                add("browser", label, None, "ms", None, f"≤ {limit:g} ms", False, r["error"])
+            else:
+                add("browser", label + " (slowest query)", r["worst_query_ms"], "ms", fl, f"≤ {limit:g} ms",
+                    r["worst_query_ms"] <= limit, "per query: " + ", ".join(
+                        f"{q!r} {t:.1f}" for q, t in r["per_query_ms"].items()))
+        add("browser", f"first contentful paint {FIRST_PAGE}", br["fcp"]["median_ms"], "ms", br["fcp_floor"],
+            note=f"floor (one-paragraph page) {br['fcp_floor']:.0f} ms" if br["fcp_floor"] else "")
+    return rows
+
+
+def fmt(value) -> str:
+    if value is None:
+        return "—"
+    if isinstance(value, float):
+        return f"{value:.3g}" if abs(value) < 1000 else f"{value:.0f}"
+    return str(value)
+
+
+def print_table(rows: list[dict]) -> None:
+    head = ["figure", "value", "unit", "× floor", "target", "", "note"]
+    table = [[r["figure"], fmt(r["value"]), r["unit"], fmt(r["x_floor"]), r["target"] or "", r["status"] or "",
+              r["note"]] for r in rows]
+    widths = [max(len(str(row[i])) for row in table + [head]) for i in range(len(head) - 1)]
+    line = "  ".join(h.ljust(w) for h, w in zip(head, widths)) + "  " + head[-1]
+    print(line)
+    print("-" * min(len(line) + 20, 160))
+    section = None
+    for r, row in zip(rows, table):
+        if r["section"] != section and section is not None:
+            print()
+        section = r["section"]
+        print("  ".join(str(c).ljust(w) for c, w in zip(row, widths)) + "  " + row[-1])
+
+
+def main(argv: list[str] | None = None) -> int:
+    parser = argparse.ArgumentParser(description=__doc__.split("\n\n")[0])
+    parser.add_argument("--quick", action="store_true", help="one run, ×2 scale, one calculator (a smoke test)")
+    parser.add_argument("--reps", type=int, default=None, help="runs per figure (default 3; --quick: 1)")
+    parser.add_argument("--scales", default=None, help="scale factors, comma-separated (default 10,50)")
+    parser.add_argument("--out", type=Path, default=BENCH_DIR / "results.json")
+    parser.add_argument("--no-browser", action="store_true", help="skip the Chromium figures")
+    parser.add_argument("--keep", type=Path, default=None, help="keep the temporary data and sites in this folder")
+    args = parser.parse_args(argv)
+    reps = args.reps or (1 if args.quick else 3)
+    scales = [int(x) for x in (args.scales or ("2" if args.quick else "10,50")).split(",") if x.strip()]
+    rounds = 5 if args.quick else 21
+
+    from conductor_atlas.core.calculators import calculator_names
+    calculators = ["resistance"] if args.quick else calculator_names()
+    started = time.perf_counter()
+    tmp = Path(tempfile.mkdtemp(prefix="atlas-bench-")) if args.keep is None else args.keep
+    tmp.mkdir(parents=True, exist_ok=True)
+    results: dict = {"machine": {"python": platform.python_version(), "platform": platform.platform(),
+                                 "cpus": os.cpu_count(), "load_average": list(os.getloadavg())},
+                     "settings": {"reps": reps, "scales": scales, "rounds": rounds, "quick": args.quick}}
+    try:
+        print(f"bench: builds ({reps} run(s) each) …", file=sys.stderr, flush=True)
+        results["build"] = build_section(tmp, reps)
+        print(f"bench: scale {scales} …", file=sys.stderr, flush=True)
+        results["scale"] = scale_section(tmp, scales, reps, Path(results["build"]["cache"]))
+        site = Path(results["build"]["site"])
+        results["site"] = site_section(site)
+        if not args.no_browser:
+            print("bench: Chromium …", file=sys.stderr, flush=True)
+            big = Path(results["scale"][max(scales)]["site"]) if scales else None
+            results["browser"] = browser_section(site, big, calculators, rounds, reps)
+    finally:
+        if args.keep is None:
+            shutil.rmtree(tmp, ignore_errors=True)
+    results["seconds"] = time.perf_counter() - started
+    results["figures"] = figures(results)
+    print_table(results["figures"])
+    args.out.parent.mkdir(parents=True, exist_ok=True)
+    args.out.write_text(json.dumps(results, indent=1, ensure_ascii=False, default=str) + "\n", encoding="utf-8")
+    misses = [r["figure"] for r in results["figures"] if r["status"] == "MISS"]
+    print(f"\n{len(misses)} target(s) missed; JSON in {args.out} ({results['seconds']:.0f} s)")
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
