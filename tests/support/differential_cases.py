@@ -101,6 +101,81 @@ def calculator_cases():
     cases.append(("conductor_atlas.core.calculators", "calculate", ["nonsense", {}, catalogue]))
     for text in ("Cu", "cu", " IACS ", "annealed copper", "Standard annealed copper", "alu", "", "Xx"):
         cases.append(("conductor_atlas.core.lookup", "find_material", [catalogue, text, "material"]))
+    cases.extend(new_calculator_cases(catalogue))
+    return cases
+
+
+def new_calculator_cases(catalogue):
+    """The skin-effect, carriers, thin-film, temperature-rise, compare and sizing calculators, called
+    through their own modules (so each shipped module has cases) and once each through the registry."""
+    cases = []
+
+    def add(name, function, inputs):
+        cases.append(("conductor_atlas.core.calc_" + name, "calculate_" + name, [inputs, catalogue]))
+
+    for material in ("IACS", "Cu", "1350", "Fe", "ni", "stainless-304", "Pt385", "xx", ""):
+        for f, size, t in (("50 Hz", "240 mm2", "20 °C"), ("1 MHz", "d 1 mm", "90 °C"), ("10 kHz", "100 x 10 mm", ""),
+                           ("400 Hz", "", "77 K"), ("0 Hz", "", ""), ("1e308 Hz", "4/0 AWG", ""), ("-5 Hz", "abc", "x"),
+                           ("", "", ""), ("60 Hz", "12 AWG", "-300 °C")):
+            add("skin_effect", "", {"material": material, "frequency": f, "size": size, "temperature": t})
+    for material in ("Cu", "Ag", "Au", "Al", "Na", "K", "Fe", "W", "IACS", "film-copper", ""):
+        for extra in ({}, {"temperature": "77 K"}, {"current_density": "4 A/mm2"}, {"current": "10 A", "size": "1 mm2"},
+                      {"current": "10 A"}, {"current": "10 A", "current_density": "1 A/mm2"},
+                      {"current_density": "-1 A/mm2"}, {"temperature": "4.2 K", "model": "bloch-gruneisen"},
+                      {"size": "2.5 mm2"}):
+            add("carriers", "", {"material": material, **extra})
+    for material in ("film-copper", "Cu", "W", "film-ruthenium", "Ag", "IACS", "Fe", "xx"):
+        for extra in ({"thickness": "20 nm"}, {"thickness": "20 nm", "reflection": "0.3"},
+                      {"thickness": "5 nm", "specularity": "0.5", "reflection": "0.4", "grain_size": "10 nm"},
+                      {"thickness": "1 um", "specularity": "50 %", "temperature": "77 K"},
+                      {"thickness": "20 nm", "specularity": "1"}, {"thickness": "-1 nm"}, {"thickness": ""},
+                      {"thickness": "20 nm", "mean_free_path": "10 nm", "grain_size": "5 nm"},
+                      {"thickness": "1e-300 m"}, {"thickness": "1e300 m"}):
+            add("thin_film", "", {"material": material, **extra})
+    for material, k in (("IACS", ""), ("Cu", ""), ("1350", ""), ("Al", ""), ("Ag", ""), ("cu-ni-55-45", ""),
+                        ("steel-low-carbon", ""), ("", "234.5"), ("", "-225 °C"), ("", "234.5 K"), ("", "20 °C"),
+                        ("", ""), ("", "abc"), ("", "0"), ("Cu", "235"), ("xx", "")):
+        for r1, t1, r2, coolant in (("10 ohm", "20 °C", "12.5 ohm", ""), ("125 mohm", "25 °C", "160 mohm", "30 °C"),
+                                    ("10 ohm", "20 °C", "1 ohm", ""), ("0 ohm", "", "-1 ohm", "abc")):
+            add("temperature_rise", "", {"material": material, "k": k, "resistance_cold": r1, "temperature_cold": t1,
+                                         "resistance_hot": r2, "coolant": coolant})
+    for pair in (("IACS", "1350"), ("Cu", "Ag"), ("IACS", "cca-10"), ("1350", "IACS"), ("IACS", "IACS"),
+                 ("IACS", "chromium-zirconium-copper"), ("IACS", "xx"), ("", "")):
+        for size, t in (("", ""), ("35 mm2", "90 °C"), ("4/0 AWG", ""), ("2000 mm2", ""), ("d 2 mm", "77 K"),
+                        ("abc", "")):
+            add("compare", "", {"material": pair[0], "other": pair[1], "size": size, "temperature": t})
+    for material in ("IACS", "1350", "Cu", "xx"):
+        for extra in ({}, {"max_drop": "6.9 V", "supply": ""}, {"conductors": "3-phase", "supply": "400 V"},
+                      {"conductors": "1"}, {"conductors": "3"}, {"max_drop": "3"}, {"max_drop": "3 %", "supply": ""},
+                      {"max_drop": "300 V"}, {"length": "20 km", "current": "400 A"}, {"length": "-3 m", "current": "0 A"},
+                      {"max_drop": "150 %"}, {"length": "1 mm", "current": "1 mA", "max_drop": "10 V"}):
+            add("sizing", "", {"material": material, "length": "30 m", "current": "16 A", "max_drop": "3 %",
+                               "supply": "230 V", "conductors": "2", "temperature": "70 °C", **extra})
+    for name in ("skin-effect", "carriers", "thin-film", "temperature-rise", "compare", "sizing"):
+        cases.append(("conductor_atlas.core.calculators", "calculate", [name, {"material": "Cu"}, catalogue]))
+    sz = "conductor_atlas.core.size_effect"
+    for kappa in (1e-3, 0.05, 0.5, 3.0, 100.0):
+        for p in (0.0, 0.5):
+            cases.append((sz, "fuchs_sondheimer_ratio", [kappa, p]))
+            for alpha in (1e-6, 0.3, 5.0):
+                cases.append((sz, "film_resistivity_ratio", [kappa, p, alpha]))
+    cases.append((sz, "mayadas_shatzkes_ratio", [0.7]))
+    cases.append((sz, "mayadas_shatzkes_ratio", [20.0]))
+    fe = "conductor_atlas.core.carriers"
+    for n in (8.47e28, 2.65e28, 1.81e29):
+        for fn in ("fermi_energy", "fermi_velocity", "fermi_wavenumber", "plasma_frequency_hz", "rho_lambda_product"):
+            cases.append((fe, fn, [n]))
+        cases.append((fe, "mean_free_path", [1.7e-8, n]))
+        cases.append((fe, "relaxation_time", [1.7e-8, n]))
+    pr = "conductor_atlas.core.practice"
+    cases.append((pr, "resistance_method_temperature", [10.0, 293.15, 12.5, 234.5]))
+    cases.append((pr, "temperature_rise", [10.0, 293.15, 12.5, 298.15, 225.0]))
+    cases.append((pr, "voltage_drop_min_area", [1.7241e-8, 16.0, 30.0, 6.9, 2.0]))
+    cases.append((pr, "equal_resistance_mass_ratio", [1.7241e-8, 8890.0, 2.8264e-8, 2703.0]))
+    mm = "conductor_atlas.core.material_models"
+    for name in ("copper", "platinum-pt385", "aluminium-1350", "stainless-304"):
+        for t in (4.2, 77.0, 293.15, 600.0):
+            cases.append((mm, "resistivity_at", [catalogue["materials"][name], t, "auto"]))
     return cases
 
 

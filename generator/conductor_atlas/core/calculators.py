@@ -10,17 +10,35 @@ outcome["errors"][field].
 from conductor_atlas.core.outcome import add_error, new_outcome
 from conductor_atlas.core import calc_resistance
 from conductor_atlas.core import calc_resistivity
+from conductor_atlas.core import calc_skin_effect
+from conductor_atlas.core import calc_carriers
+from conductor_atlas.core import calc_thin_film
+from conductor_atlas.core import calc_temperature_rise
+from conductor_atlas.core import calc_compare
+from conductor_atlas.core import calc_sizing
 
 # name -> module; each module defines TITLE, SUMMARY, FIELDS, DEFAULTS, FIELD_INFO, RESULT_LABELS,
 # CAUTION and the calculate_* function registered below.
 MODULES = {
     "resistance": calc_resistance,
     "resistivity": calc_resistivity,
+    "skin-effect": calc_skin_effect,
+    "carriers": calc_carriers,
+    "thin-film": calc_thin_film,
+    "temperature-rise": calc_temperature_rise,
+    "compare": calc_compare,
+    "sizing": calc_sizing,
 }
 
 CALCULATORS = {
     "resistance": calc_resistance.calculate_resistance,
     "resistivity": calc_resistivity.calculate_resistivity,
+    "skin-effect": calc_skin_effect.calculate_skin_effect,
+    "carriers": calc_carriers.calculate_carriers,
+    "thin-film": calc_thin_film.calculate_thin_film,
+    "temperature-rise": calc_temperature_rise.calculate_temperature_rise,
+    "compare": calc_compare.calculate_compare,
+    "sizing": calc_sizing.calculate_sizing,
 }
 
 CALCULATOR_FIELDS = {}

@@ -6,6 +6,15 @@ conductor_atlas.transpile ships exactly the modules imported below (and checks e
 from conductor_atlas.core.calculators import calculate, CALCULATOR_FIELDS, FIELD_DEFAULTS
 from conductor_atlas.core.calc_resistance import calculate_resistance
 from conductor_atlas.core.calc_resistivity import calculate_resistivity
+from conductor_atlas.core.calc_skin_effect import calculate_skin_effect
+from conductor_atlas.core.calc_carriers import calculate_carriers
+from conductor_atlas.core.calc_thin_film import calculate_thin_film
+from conductor_atlas.core.calc_temperature_rise import calculate_temperature_rise
+from conductor_atlas.core.calc_compare import calculate_compare
+from conductor_atlas.core.calc_sizing import calculate_sizing
+from conductor_atlas.core.carriers import relaxation_time
+from conductor_atlas.core.size_effect import film_resistivity_ratio
+from conductor_atlas.core.practice import resistance_method_temperature
 from conductor_atlas.core.calc_common import read_material
 from conductor_atlas.core.outcome import new_outcome
 from conductor_atlas.core.lookup import find_material

@@ -1,0 +1,98 @@
+"""Calculator "skin-effect": skin depth, surface resistance and, for a size, the AC/DC ratio."""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core import resistance as dc
+from conductor_atlas.core import skin_effect as skin
+from conductor_atlas.core.numfmt import format_number, format_si
+from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
+                                          has_errors, kelvin_text, new_outcome, read_quantity)
+from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.calc_resistance import ac_ratio, read_size
+
+TITLE = "Skin effect"
+SUMMARY = "Skin depth, surface resistance and the AC/DC resistance ratio of a conductor at a frequency."
+FIELDS = ["material", "frequency", "size", "temperature", "model"]
+DEFAULTS = {"material": "IACS", "frequency": "50 Hz", "size": "240 mm2", "temperature": "20 °C", "model": "auto"}
+FIELD_INFO = {
+    "material": ["Material", "id, alias or symbol, e.g. IACS, 1350, Cu, Fe"],
+    "frequency": ["Frequency", "e.g. 50 Hz, 400 Hz, 100 kHz, 1 MHz"],
+    "size": ["Cross-section (optional)", "e.g. 240 mm², 4/0 AWG, d 8 mm, 100 x 10 mm: adds the AC/DC ratio"],
+    "temperature": ["Conductor temperature", "e.g. 20 °C, 90 degC, 363 K"],
+    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+}
+RESULT_LABELS = [
+    ["skin_depth", "Skin depth δ"], ["surface_resistance", "Surface resistance (per square)"],
+    ["ac_dc_ratio", "AC/DC resistance ratio"], ["resistance", "DC resistance per metre (Ω/m)"],
+    ["resistance_ac", "AC resistance per metre (Ω/m)"], ["depth_ratio", "Radius or half-thickness over δ"],
+    ["area", "Cross-section"], ["resistivity", "Resistivity at temperature"], ["temperature", "Temperature"],
+]
+CAUTION = ("An isolated straight conductor: proximity to other conductors, stranding and magnetic armour raise the "
+           "AC resistance further. A physics estimate, not a cable rating.")
+
+
+def half_thickness(size):
+    """The depth the current must reach from the surface: the radius, or half a bar's thickness [m]."""
+    if size["shape"] == "bar":
+        return size["thickness"] / 2.0
+    return size["diameter"] / 2.0
+
+
+def calculate_skin_effect(inputs, catalogue):
+    """Skin depth and AC resistance of a conductor at a frequency.
+
+    Fields: material; frequency (> 0); size (optional, geometry.parse_size); temperature
+    (default 20 °C); model. δ = sqrt(ρ / (π f μ0 μr)); R_s = ρ / δ (per square, for a
+    conductor much thicker than δ); with a size: R_dc per metre = ρ / A, R_ac/R_dc by the exact
+    Kelvin solution for round wire (or an area taken as round) and the bar approximation for
+    "w x t" bars (core.skin_effect), R_ac per metre = R_dc · ratio.
+    """
+    outcome = new_outcome("skin-effect", inputs)
+    m = read_material(outcome, inputs, catalogue, "material")
+    f = read_quantity(outcome, inputs, "frequency", "frequency", True)
+    size = None
+    if len(field_text(inputs, "size")) > 0:
+        size = read_size(outcome, inputs, "size")
+    t = read_temperature(outcome, inputs, "temperature")
+    if f is not None and not (f > 0):
+        add_error(outcome, "frequency", "must be greater than zero (at DC there is no skin effect)")
+    if has_errors(outcome):
+        return outcome
+    outcome["material"] = m["id"]
+    rho = material_resistivity(outcome, m, t, inputs)
+    if rho is None:
+        return outcome
+    mu_r = m["mu_r"]
+    if mu_r > 1.5:
+        add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(mu_r, 3)
+                    + "; in iron, steel and nickel it depends strongly on field strength, frequency and "
+                      "temperature (and falls to 1 above the Curie point), so read δ and R_ac as rough")
+    try:
+        delta = skin.skin_depth(rho, f, mu_r)
+        if not (delta > 0):
+            raise CoreError("frequency is too high to compute a skin depth", "frequency")
+        rs = skin.surface_resistance(rho, f, mu_r)
+        ratio = 0.0
+        if size is not None:
+            ratio = ac_ratio(outcome, size, rho, f, mu_r)
+    except CoreError as problem:
+        add_error(outcome, "frequency", problem.message)
+        return outcome
+    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
+    add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
+    add_result(outcome, "surface_resistance", rs, "Ω", format_si(rs, "Ω", 4) + " per square")
+    if size is not None:
+        area = size["area"]
+        r = dc.resistance(rho, 1.0, area)
+        add_result(outcome, "area", area, "m²", format_number(area * 1e6, 4) + " mm²")
+        add_result(outcome, "resistance", r, "Ω/m", format_si(r, "Ω", 4) + " per metre")
+        add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
+        add_result(outcome, "resistance_ac", r * ratio, "Ω/m", format_si(r * ratio, "Ω", 4) + " per metre")
+        depth = half_thickness(size) / delta
+        add_result(outcome, "depth_ratio", depth, "", format_number(depth, 4))
+        if depth < 3.0:
+            add_warning(outcome, "the surface resistance assumes a conductor much thicker than δ; here the current "
+                                 "reaches the middle (radius or half-thickness is " + format_number(depth, 3)
+                        + " δ), so use the AC resistance instead")
+    check_finite_results(outcome, "frequency")
+    return outcome

@@ -1,0 +1,189 @@
+"""Calculator "temperature-rise": a winding's temperature from its resistance rise (the resistance method)."""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core import practice
+from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.lookup import fold
+from conductor_atlas.core.numfmt import format_fixed, format_number
+from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
+                                          has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
+from conductor_atlas.core.calc_common import read_material
+from conductor_atlas.core.units import normalise_text, normalise_unit, parse_number, parse_quantity
+
+TITLE = "Winding temperature by the resistance method"
+SUMMARY = "Mean temperature and temperature rise of a winding from its cold and hot resistance."
+FIELDS = ["material", "resistance_cold", "temperature_cold", "resistance_hot", "coolant", "k"]
+DEFAULTS = {"material": "IACS", "resistance_cold": "10 ohm", "temperature_cold": "20 °C", "resistance_hot": "12.5 ohm",
+            "coolant": "", "k": ""}
+FIELD_INFO = {
+    "material": ["Winding material", "id, alias or symbol, e.g. IACS, Cu, 1350; may stay empty when k is given"],
+    "resistance_cold": ["Cold resistance R1", "e.g. 10 Ω, 125 mΩ, measured with the winding at a known temperature"],
+    "temperature_cold": ["Winding temperature at R1", "e.g. 20 °C: the winding (not just the room) must be at it"],
+    "resistance_hot": ["Hot resistance R2", "e.g. 12.5 Ω, measured at the end of the heat run"],
+    "coolant": ["Coolant temperature (optional)", "ambient or coolant at the end of the test, e.g. 25 °C; empty: "
+                                                  "the rise is over the cold temperature"],
+    "k": ["k (optional)", "inferred zero-resistance temperature below 0 °C, as a plain number: 234.5 means "
+                          "−234.5 °C (or type −234.5 °C); empty: from the material"],
+}
+RESULT_LABELS = [
+    ["temperature_hot", "Mean winding temperature (hot)"], ["temperature_rise", "Temperature rise"],
+    ["resistance_ratio", "Resistance ratio R2/R1"], ["k", "k used"],
+]
+CAUTION = ("The resistance method gives the mean winding temperature; hot spots run hotter. Measure R1 with the "
+           "winding at a uniform, known temperature and R2 as soon as possible after switching off.")
+
+# span where the linear R(T) behind the method is good for copper and aluminium (core.practice)
+LINEAR_FROM = ZERO_CELSIUS - 50.0
+LINEAR_TO = ZERO_CELSIUS + 200.0
+
+
+def read_k(outcome, inputs):
+    """k [K] typed in the "k" field, or None when empty (or wrong: then errors["k"] is set).
+
+    A plain number is the magnitude of the inferred zero below 0 °C ("234.5"); a temperature
+    must be below 0 °C ("−234.5 °C", "−390.1 °F"). "234.5 K" is refused as ambiguous.
+    """
+    text = field_text(inputs, "k")
+    if len(text) == 0:
+        return None
+    try:
+        parts = parse_number(normalise_text(text), "k")
+        unit = parts[1].strip()
+        if len(unit) == 0:
+            k = parts[0]
+        else:
+            if normalise_unit(unit) == "k":
+                raise CoreError("in kelvin is ambiguous: enter k as a plain number (234.5 for copper) or as the "
+                                "temperature in °C (−234.5 °C)", "k")
+            t = parse_quantity(text, "temperature", "k")
+            if not (t < ZERO_CELSIUS):
+                raise CoreError("as a temperature must lie below 0 °C (copper: −234.5 °C); as a plain number "
+                                "it is the magnitude (234.5)", "k")
+            k = ZERO_CELSIUS - t
+    except CoreError as problem:
+        add_error(outcome, "k", problem.message)
+        return None
+    if not (k > 0):
+        add_error(outcome, "k", "must be above 0 (copper 234.5, EC aluminium 225)")
+        return None
+    if not (k < 1e6):
+        add_error(outcome, "k", "is implausibly large; for copper it is 234.5, for EC aluminium 225")
+        return None
+    return k
+
+
+def is_copper(m, catalogue):
+    """Copper conductors (not clad wire, not alloys): the standard k = 234.5 applies."""
+    if not (m["klass"] == "conductor-grade" or m["klass"] == "pure-metal"):
+        return False
+    if "cu" in catalogue["aliases"] and catalogue["aliases"]["cu"] == m["id"]:
+        return True
+    return m["id"].find("copper") >= 0 and m["id"].find("clad") < 0
+
+
+def is_ec_aluminium(m, catalogue):
+    """EC (1350) conductor aluminium: the standard k = 225 applies."""
+    if m["klass"] != "conductor-grade":
+        return False
+    if m["id"].find("aluminium-1350") == 0:
+        return True
+    key = fold("EC aluminium")
+    return key in catalogue["aliases"] and catalogue["aliases"][key] == m["id"]
+
+
+def material_k(outcome, m, catalogue):
+    """k [K] for the material, with a warning that says where it comes from; None on error."""
+    if is_copper(m, catalogue):
+        add_warning(outcome, "k = 234.5 for copper, as IEEE Std 118 and IEEE Std 112 use it; IEC 60034-1 rounds it "
+                             "to 235 (from memory); enter k to use another value")
+        return practice.K_COPPER
+    if is_ec_aluminium(m, catalogue):
+        add_warning(outcome, "k = 225 for EC aluminium, as IEEE Std 118, IEEE Std 112 and IEC 60034-1 use it (from "
+                             "memory); enter k to use another value")
+        return practice.K_ALUMINIUM
+    if not (m["alpha"] > 0):
+        add_error(outcome, "material", "no positive temperature coefficient is on record for " + m["name"]
+                  + "; enter k")
+        return None
+    k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
+    add_warning(outcome, "k = " + format_number(k, 4) + " from the temperature coefficient of " + m["name"] + " (α = "
+                + format_number(m["alpha"], 4) + " /K at " + format_fixed(m["t_ref"] - ZERO_CELSIUS, 1)
+                + " °C): k = 1/α − t_ref; the standards give k for copper and aluminium only")
+    if m["alpha"] < 1e-3:
+        add_warning(outcome, "the resistance of " + m["name"] + " changes little with temperature (α below 0.001 /K), "
+                             "so small measurement errors in R1 and R2 give large temperature errors")
+    return k
+
+
+def calculate_temperature_rise(inputs, catalogue):
+    """Winding temperature and rise from a cold and a hot resistance measurement.
+
+    Fields: material (optional when k is given); resistance_cold R1; temperature_cold t1;
+    resistance_hot R2; coolant t_a (optional); k (optional: a plain number is the magnitude
+    below 0 °C, e.g. "234.5" = −234.5 °C; or a temperature below 0 °C).
+    t2 = (R2/R1)(k + t1) − k; rise = t2 − t_a, or t2 − t1 without a coolant temperature
+    (core.practice). k from the material when empty: 234.5 for copper conductors, 225 for EC
+    aluminium, else 1/α − t_ref from the material's own temperature coefficient.
+    """
+    outcome = new_outcome("temperature-rise", inputs)
+    k = read_k(outcome, inputs)
+    m = None
+    if len(field_text(inputs, "material")) > 0:
+        m = read_material(outcome, inputs, catalogue, "material")
+    elif len(field_text(inputs, "k")) == 0:
+        add_error(outcome, "material", "is empty: name the winding material (e.g. Cu, 1350) or enter k")
+    r1 = read_quantity(outcome, inputs, "resistance_cold", "resistance", True)
+    require_positive(outcome, "resistance_cold", r1, "the cold resistance")
+    t1 = read_quantity(outcome, inputs, "temperature_cold", "temperature", True)
+    if t1 is not None and not (t1 > 0):
+        add_error(outcome, "temperature_cold", "must be above absolute zero (−273.15 °C)")
+    r2 = read_quantity(outcome, inputs, "resistance_hot", "resistance", True)
+    require_positive(outcome, "resistance_hot", r2, "the hot resistance")
+    coolant = read_quantity(outcome, inputs, "coolant", "temperature", False)
+    if coolant is not None and not (coolant > 0):
+        add_error(outcome, "coolant", "must be above absolute zero (−273.15 °C)")
+    if has_errors(outcome):
+        return outcome
+    if k is None:
+        k = material_k(outcome, m, catalogue)
+        if k is None:
+            return outcome
+    else:
+        add_warning(outcome, "k = " + format_number(k, 5) + " as entered (inferred zero at "
+                    + format_number(-k, 5) + " °C)")
+    if m is not None:
+        outcome["material"] = m["id"]
+    if not (k + t1 - ZERO_CELSIUS > 0):
+        add_error(outcome, "temperature_cold", "lies below the inferred zero-resistance temperature −k = "
+                  + format_number(-k, 5) + " °C")
+        return outcome
+    try:
+        t2 = practice.resistance_method_temperature(r1, t1, r2, k)
+    except CoreError as problem:
+        add_error(outcome, "resistance_hot", problem.message)
+        return outcome
+    if not (t2 > 0):
+        add_error(outcome, "resistance_hot", "R2/R1 = " + format_number(r2 / r1, 4) + " would put the winding below "
+                  "absolute zero; check the two resistances and their units")
+        return outcome
+    base = t1
+    if coolant is not None:
+        base = coolant
+    rise = t2 - base
+    outcome["model"] = "resistance method, t2 = (R2/R1)(k + t1) − k"
+    add_result(outcome, "temperature_hot", t2, "K", kelvin_text(t2))
+    if coolant is not None:
+        add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the coolant ("
+                   + format_fixed(coolant - ZERO_CELSIUS, 1) + " °C)")
+    else:
+        add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the cold temperature ("
+                   + format_fixed(t1 - ZERO_CELSIUS, 1) + " °C)")
+    add_result(outcome, "resistance_ratio", r2 / r1, "", format_number(r2 / r1, 5))
+    add_result(outcome, "k", k, "K", format_number(k, 5) + " (inferred zero at " + format_number(-k, 5) + " °C)")
+    if t2 < LINEAR_FROM or t2 > LINEAR_TO:
+        add_warning(outcome, "the hot temperature lies outside −50 to 200 °C, where the linear R(T) behind the method "
+                             "is good for copper and aluminium")
+    if r2 < r1:
+        add_warning(outcome, "R2 is below R1: the winding was colder at the second measurement")
+    check_finite_results(outcome, "resistance_hot")
+    return outcome

@@ -1,0 +1,120 @@
+"""Calculator "skin-effect" against independent arithmetic and published values.
+
+References: the skin depth δ = sqrt(ρ / (π f μ0 μr)) and R_s = ρ / δ (Ramo, Whinnery & Van Duzer,
+Fields and Waves in Communication Electronics, 3rd ed., 1994, sec. 3.16), evaluated here with
+scipy.constants; the round-wire AC/DC ratio from scipy.special's Kelvin functions (the exact
+solution, e.g. Ramo et al. sec. 5.17).
+"""
+
+import math
+
+import pytest
+from scipy import constants, special
+
+from conductor_atlas.core.calc_skin_effect import CAUTION, calculate_skin_effect
+from tests.support.differential_cases import shipped_catalogue
+
+# scipy 1.17 carries CODATA 2022 mu_0 = 1.25663706127e-6, the core CODATA 2018 1.25663706212e-6:
+# 6.8e-10 apart, so δ differs by 3.4e-10 relative -> compare to 1e-9.
+MU0_REL = 1e-9
+IACS_RHO = 1.7241e-8  # ohm*m at 20 °C, IEC 60028 (standard annealed copper)
+
+
+@pytest.fixture(scope="module")
+def catalogue():
+    return shipped_catalogue()
+
+
+def value(outcome, name):
+    assert outcome["errors"] == {}, outcome["errors"]
+    return outcome["results"][name]["value"]
+
+
+def delta_ref(rho, f, mu_r=1.0):
+    return math.sqrt(rho / (math.pi * f * constants.mu_0 * mu_r))
+
+
+def kelvin_ratio_ref(radius, rho, f):
+    # R_ac/R_dc = (x/2) (ber x bei' x - bei x ber' x) / (ber'^2 x + bei'^2 x), x = sqrt(2) a / δ
+    x = math.sqrt(2.0) * radius / delta_ref(rho, f)
+    ber, bei, berp, beip = special.ber(x), special.bei(x), special.berp(x), special.beip(x)
+    return x / 2.0 * (ber * beip - bei * berp) / (berp ** 2 + beip ** 2)
+
+
+def test_copper_at_50_hz(catalogue):
+    out = calculate_skin_effect({"material": "IACS", "frequency": "50 Hz", "size": "240 mm2"}, catalogue)
+    assert value(out, "skin_depth") == pytest.approx(delta_ref(IACS_RHO, 50.0), rel=MU0_REL, abs=0)
+    # the often-printed round figure for copper at 50 Hz is "about 9.3 mm"; 2 figures -> 1 %
+    assert value(out, "skin_depth") == pytest.approx(9.3e-3, rel=0.01, abs=0)
+    assert out["results"]["skin_depth"]["text"] == "9.346 mm"
+    # DC resistance per metre rho / A (arithmetic), unit says per metre
+    assert value(out, "resistance") == pytest.approx(IACS_RHO / 240e-6, rel=1e-15, abs=0)
+    assert out["results"]["resistance"]["unit"] == "Ω/m"
+    radius = math.sqrt(240e-6 / math.pi)
+    assert value(out, "ac_dc_ratio") == pytest.approx(kelvin_ratio_ref(radius, IACS_RHO, 50.0), rel=1e-9, abs=0)
+    assert value(out, "resistance_ac") == pytest.approx(value(out, "resistance") * value(out, "ac_dc_ratio"),
+                                                        rel=1e-15, abs=0)
+    assert any("treated as one solid round wire" in w for w in out["warnings"])
+
+
+def test_thin_wire_at_1_mhz(catalogue):
+    # δ of copper at 1 MHz is printed as 66 µm in many tables (2 figures -> 1 %)
+    out = calculate_skin_effect({"material": "IACS", "frequency": "1 MHz", "size": "d 1 mm"}, catalogue)
+    assert value(out, "skin_depth") == pytest.approx(66e-6, rel=0.01, abs=0)
+    ratio = kelvin_ratio_ref(0.5e-3, IACS_RHO, 1e6)
+    assert value(out, "ac_dc_ratio") == pytest.approx(ratio, rel=1e-9, abs=0)
+    # high-frequency limit a / (2 δ) + 1/4 (Ramo et al.): within 1 % at a/δ = 7.6
+    assert ratio == pytest.approx(0.5e-3 / (2 * delta_ref(IACS_RHO, 1e6)) + 0.25, rel=0.01)
+    assert value(out, "depth_ratio") == pytest.approx(0.5e-3 / delta_ref(IACS_RHO, 1e6), rel=MU0_REL, abs=0)
+    assert value(out, "surface_resistance") == pytest.approx(math.sqrt(math.pi * 1e6 * constants.mu_0 * IACS_RHO),
+                                                             rel=MU0_REL, abs=0)
+
+
+def test_without_size_gives_depth_only(catalogue):
+    out = calculate_skin_effect({"material": "Cu", "frequency": "10 kHz", "size": ""}, catalogue)
+    assert set(out["results"]) == {"temperature", "resistivity", "skin_depth", "surface_resistance"}
+
+
+def test_hot_conductor_uses_its_resistivity(catalogue):
+    out = calculate_skin_effect({"material": "IACS", "frequency": "50 Hz", "temperature": "90 °C"}, catalogue)
+    rho90 = IACS_RHO * (1 + 0.00393 * 70.0)  # IEC 60028: alpha_20 = 0.00393 /K
+    assert value(out, "skin_depth") == pytest.approx(delta_ref(rho90, 50.0), rel=MU0_REL, abs=0)
+
+
+def test_magnetic_material_warns(catalogue):
+    out = calculate_skin_effect({"material": "Fe", "frequency": "50 Hz"}, catalogue)
+    mu_r = catalogue["materials"]["iron"]["mu_r"]
+    assert mu_r > 1.5
+    rho = value(out, "resistivity")
+    assert value(out, "skin_depth") == pytest.approx(delta_ref(rho, 50.0, mu_r), rel=MU0_REL, abs=0)
+    assert any("depends strongly on field strength" in w for w in out["warnings"])
+
+
+def test_bar_uses_the_approximation(catalogue):
+    out = calculate_skin_effect({"material": "IACS", "frequency": "50 Hz", "size": "100 x 10 mm"}, catalogue)
+    assert value(out, "ac_dc_ratio") > 1.0
+    assert value(out, "depth_ratio") == pytest.approx(5e-3 / value(out, "skin_depth"), rel=1e-15, abs=0)
+    assert any("approximation" in w for w in out["warnings"])
+
+
+@pytest.mark.parametrize("inputs, field, words", [
+    ({"frequency": "0 Hz"}, "frequency", "must be greater than zero"),
+    ({"frequency": "-5 Hz"}, "frequency", "must be greater than zero"),
+    ({"frequency": ""}, "frequency", "is empty"),
+    ({"frequency": "50 m"}, "frequency", "is a length"),
+    ({"frequency": "1e308 Hz"}, "frequency", "too high"),
+    ({"size": "abc"}, "size", "expected a number first"),
+    ({"material": "coper"}, "material", "unknown material"),
+    ({"temperature": "-300 °C"}, "temperature", "above absolute zero"),
+])
+def test_bad_input_names_the_field(catalogue, inputs, field, words):
+    base = {"material": "IACS", "frequency": "50 Hz", "size": "", "temperature": ""}
+    base.update(inputs)
+    out = calculate_skin_effect(base, catalogue)
+    assert field in out["errors"], out["errors"]
+    assert words in out["errors"][field]
+    assert out["results"] == {}
+
+
+def test_caution_names_proximity():
+    assert "proximity" in CAUTION

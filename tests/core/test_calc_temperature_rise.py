@@ -1,0 +1,140 @@
+"""Calculator "temperature-rise" (the resistance method) against worked arithmetic.
+
+t2 = (R2/R1)(k + t1) - k with k = 234.5 for copper and 225 for EC aluminium (IEEE Std 118 /
+IEEE Std 112; IEC 60034-1 uses 235 for copper; from memory, as core/practice.py records), or
+k = 1/alpha - t_ref from a material's own coefficient. Each expected value below is the
+formula worked by hand; temperatures go through K and back, so agreement is to ~1e-13 K.
+"""
+
+import json
+import subprocess
+import sys
+
+import pytest
+
+from conductor_atlas.core.calc_temperature_rise import calculate_temperature_rise
+from tests.support.differential_cases import shipped_catalogue
+
+T0 = 273.15
+
+
+@pytest.fixture(scope="module")
+def catalogue():
+    return shipped_catalogue()
+
+
+def run(catalogue, **fields):
+    inputs = {"material": "IACS", "resistance_cold": "10 ohm", "temperature_cold": "20 °C",
+              "resistance_hot": "12.5 ohm", "coolant": "", "k": ""}
+    inputs.update(fields)
+    return calculate_temperature_rise(inputs, catalogue)
+
+
+def value(outcome, name):
+    assert outcome["errors"] == {}, outcome["errors"]
+    return outcome["results"][name]["value"]
+
+
+def test_worked_example_copper(catalogue):
+    # R1 = 10.0 ohm at 20 °C, R2 = 12.5 ohm, copper: t2 = 1.25 * 254.5 - 234.5 = 83.625 °C
+    out = run(catalogue)
+    assert value(out, "temperature_hot") == pytest.approx(83.625 + T0, rel=0, abs=1e-9)
+    assert value(out, "temperature_rise") == pytest.approx(63.625, rel=0, abs=1e-9)
+    assert value(out, "k") == 234.5
+    assert out["results"]["temperature_hot"]["text"] == "83.6 °C (356.78 K)"
+    assert any("234.5" in w and "IEEE Std 118" in w and "IEC 60034-1" in w for w in out["warnings"])
+
+
+def test_rise_over_coolant(catalogue):
+    # same winding, coolant 25 °C at the end of the test: rise = 83.625 - 25 = 58.625 K
+    out = run(catalogue, coolant="25 °C")
+    assert value(out, "temperature_rise") == pytest.approx(58.625, rel=0, abs=1e-9)
+    assert "over the coolant" in out["results"]["temperature_rise"]["text"]
+
+
+def test_milliohm_winding_with_fahrenheit(catalogue):
+    # 125 mΩ at 68 °F (= 20 °C), 150 mΩ hot: t2 = 1.2 * 254.5 - 234.5 = 70.9 °C
+    out = run(catalogue, resistance_cold="125 mΩ", temperature_cold="68 °F", resistance_hot="150 mohm")
+    assert value(out, "temperature_hot") == pytest.approx(70.9 + T0, rel=0, abs=1e-9)
+
+
+def test_ec_aluminium_uses_225(catalogue):
+    # 1350: t2 = 1.25 * 245 - 225 = 81.25 °C
+    out = run(catalogue, material="1350")
+    assert value(out, "k") == 225.0
+    assert value(out, "temperature_hot") == pytest.approx(81.25 + T0, rel=0, abs=1e-9)
+
+
+@pytest.mark.parametrize("material", ["Cu", "copper-hard-drawn", "copper-oxygen-free", "tinned copper"])
+def test_copper_conductors_use_234_5(catalogue, material):
+    assert value(run(catalogue, material=material), "k") == 234.5
+
+
+def test_standard_k_matches_the_copper_coefficient(catalogue):
+    # IEC 60028 annealed copper alpha_20 = 0.00393 /K gives 1/alpha - 20 = 234.45, within 0.1 K of 234.5
+    record = catalogue["materials"]["copper-annealed"]
+    assert 1.0 / record["alpha"] - 20.0 == pytest.approx(234.5, rel=0, abs=0.1)
+
+
+def test_other_material_uses_its_alpha(catalogue):
+    # silver alpha = 0.0038 /K at 20 °C: k = 1/0.0038 - 20 = 243.157...; t2 = 1.25 (k + 20) - k
+    out = run(catalogue, material="Ag")
+    k = 1.0 / 0.0038 - 20.0
+    assert value(out, "k") == pytest.approx(k, rel=1e-14, abs=0)
+    assert value(out, "temperature_hot") == pytest.approx(1.25 * (k + 20.0) - k + T0, rel=1e-14, abs=0)
+    assert any("from the temperature coefficient" in w for w in out["warnings"])
+
+
+def test_clad_wire_is_not_treated_as_copper(catalogue):
+    out = run(catalogue, material="cca-10")
+    assert value(out, "k") == pytest.approx(1.0 / catalogue["materials"]["copper-clad-aluminium-10"]["alpha"] - 20.0,
+                                            rel=1e-14, abs=0)
+
+
+@pytest.mark.parametrize("k_text, k", [("235", 235.0), ("234,5", 234.5), ("-225 °C", 225.0), ("−234.5 °C", 234.5)])
+def test_typed_k(catalogue, k_text, k):
+    out = run(catalogue, material="", k=k_text)
+    assert value(out, "k") == pytest.approx(k, rel=1e-13, abs=0)
+    assert value(out, "temperature_hot") == pytest.approx(1.25 * (k + 20.0) - k + T0, rel=1e-13, abs=0)
+    assert out["material"] == ""
+
+
+def test_resistance_alloy_warns(catalogue):
+    out = run(catalogue, material="cu-ni-55-45", resistance_hot="10.01 ohm")
+    assert any("changes little with temperature" in w for w in out["warnings"])
+
+
+@pytest.mark.parametrize("fields, field, words", [
+    ({"material": "", "k": ""}, "material", "or enter k"),
+    ({"material": "coper"}, "material", "unknown material"),
+    ({"material": "cu-mn-ni"}, "material", "no positive temperature coefficient"),
+    ({"k": "234.5 K"}, "k", "in kelvin is ambiguous"),
+    ({"k": "20 °C"}, "k", "must lie below 0 °C"),
+    ({"k": "0"}, "k", "must be above 0"),
+    ({"k": "abc"}, "k", "expected a number first"),
+    ({"resistance_cold": "0 ohm"}, "resistance_cold", "greater than zero"),
+    ({"resistance_cold": "10"}, "resistance_cold", "needs a unit"),
+    ({"resistance_hot": "12 V"}, "resistance_hot", "is a voltage"),
+    ({"temperature_cold": ""}, "temperature_cold", "is empty"),
+    ({"temperature_cold": "-260 °C"}, "temperature_cold", "below the inferred zero"),
+    ({"coolant": "-300 °C"}, "coolant", "absolute zero"),
+])
+def test_bad_input_names_the_field(catalogue, fields, field, words):
+    out = run(catalogue, **fields)
+    assert field in out["errors"], out["errors"]
+    assert words in out["errors"][field]
+    assert out["results"] == {}
+
+
+def test_command_line_json():
+    result = subprocess.run([sys.executable, "-m", "conductor_atlas", "calc", "temperature-rise", "--material", "Cu",
+                             "--resistance-cold", "10 ohm", "--temperature-cold", "20 degC",
+                             "--resistance-hot", "12.5 ohm", "--json"], capture_output=True, text=True)
+    assert result.returncode == 0, result.stderr
+    payload = json.loads(result.stdout)
+    assert payload["results"]["temperature_hot"]["value"] == pytest.approx(356.775, rel=0, abs=1e-9)
+    bad = subprocess.run([sys.executable, "-m", "conductor_atlas", "calc", "temperature-rise", "--k", "234.5 K"],
+                         capture_output=True, text=True)
+    assert bad.returncode == 1
+    assert "--k: in kelvin is ambiguous" in bad.stderr
+    assert "Traceback" not in bad.stderr

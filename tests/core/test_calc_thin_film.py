@@ -1,0 +1,116 @@
+"""Calculator "thin-film" against scipy.integrate on the printed integrals and their limits.
+
+References: Sondheimer, E. H., Adv. Phys. 1, 1 (1952), eq. 9 (Fuchs-Sondheimer) and its
+thick-film limit eq. 11; Mayadas, A. F., Shatzkes, M., Phys. Rev. B 1, 1382 (1970), eq. 5 and 10.
+The quad references are those of tests/core/test_size_effect.py (the printed forms).
+"""
+
+import pytest
+
+from conductor_atlas.core.calc_resistivity import calculate_resistivity
+from conductor_atlas.core.calc_thin_film import calculate_thin_film
+from tests.core.test_size_effect import _combined_reference, _fs_reference
+from tests.support.differential_cases import shipped_catalogue
+
+
+@pytest.fixture(scope="module")
+def catalogue():
+    return shipped_catalogue()
+
+
+def value(outcome, name):
+    assert outcome["errors"] == {}, outcome["errors"]
+    return outcome["results"][name]["value"]
+
+
+def test_fuchs_sondheimer_with_a_typed_mean_free_path(catalogue):
+    # d = l = 39 nm -> kappa = 1; the core agrees with quad to ~1e-13 (test_size_effect) -> 1e-11
+    out = calculate_thin_film({"material": "film-copper", "thickness": "39 nm", "mean_free_path": "39 nm",
+                               "specularity": "0"}, catalogue)
+    ratio = _fs_reference(1.0, 0.0)
+    assert value(out, "thickness_ratio") == pytest.approx(1.0, rel=1e-15, abs=0)
+    assert value(out, "film_ratio") == pytest.approx(ratio, rel=1e-11, abs=0)
+    rho = value(out, "resistivity")
+    assert value(out, "film_resistivity") == pytest.approx(rho * ratio, rel=1e-11, abs=0)
+    assert value(out, "sheet_resistance") == pytest.approx(rho * ratio / 39e-9, rel=1e-11, abs=0)
+    assert "grain_parameter" not in out["results"]
+
+
+def test_specularity_as_percent(catalogue):
+    out = calculate_thin_film({"material": "film-copper", "thickness": "10 nm", "mean_free_path": "40 nm",
+                               "specularity": "50 %"}, catalogue)
+    assert value(out, "film_ratio") == pytest.approx(_fs_reference(0.25, 0.5), rel=1e-11, abs=0)
+
+
+def test_thick_film_limit(catalogue):
+    # Sondheimer eq. 11: 1 + 3/(8 kappa); error O(kappa^-2), at kappa = 1000 measured 1.4e-7 -> 2e-7
+    out = calculate_thin_film({"material": "film-copper", "thickness": "40 um", "mean_free_path": "40 nm"}, catalogue)
+    assert value(out, "film_ratio") == pytest.approx(1 + 3 / 8000, rel=2e-7, abs=0)
+
+
+def test_grain_boundaries_default_grain_size(catalogue):
+    # D = d = 20 nm, l = 40 nm, R = 0.3: alpha = (l/D) R/(1-R) = 6/7 (MS eq. 5); kappa = 0.5;
+    # nested quad on MS eq. 10 agrees with the core to 1.1e-12 (test_size_effect) -> 1e-10
+    out = calculate_thin_film({"material": "film-copper", "thickness": "20 nm", "mean_free_path": "40 nm",
+                               "reflection": "0.3"}, catalogue)
+    alpha = 2.0 * 0.3 / 0.7
+    assert value(out, "grain_parameter") == pytest.approx(alpha, rel=1e-15, abs=0)
+    assert value(out, "film_ratio") == pytest.approx(_combined_reference(0.5, 0.0, alpha), rel=1e-10, abs=0)
+    assert any("grain size taken equal to the film thickness" in w for w in out["warnings"])
+
+
+def test_grain_size_given(catalogue):
+    out = calculate_thin_film({"material": "film-copper", "thickness": "40 nm", "mean_free_path": "40 nm",
+                               "reflection": "0.5", "grain_size": "20 nm", "specularity": "0.5"}, catalogue)
+    assert value(out, "grain_parameter") == pytest.approx(2.0, rel=1e-15, abs=0)
+    assert value(out, "film_ratio") == pytest.approx(_combined_reference(1.0, 0.5, 2.0), rel=1e-10, abs=0)
+    assert not any("grain size taken equal" in w for w in out["warnings"])
+
+
+def test_record_mean_free_path_scaled_with_rho_lambda(catalogue):
+    # film-copper carries l = 39.9 nm at 295 K (Gall 2016); at 77 K l = 39.9 nm * rho(295 K) / rho(77 K)
+    record = catalogue["materials"]["film-copper"]
+    out = calculate_thin_film({"material": "film-copper", "thickness": "100 nm", "temperature": "77 K"}, catalogue)
+    rho_295 = calculate_resistivity({"material": "film-copper", "temperature": "295 K"}, catalogue)
+    rho_77 = calculate_resistivity({"material": "film-copper", "temperature": "77 K"}, catalogue)
+    expected = record["mean_free_path"] * rho_295["results"]["resistivity"]["value"] / \
+        rho_77["results"]["resistivity"]["value"]
+    assert value(out, "mean_free_path") == pytest.approx(expected, rel=1e-14, abs=0)
+    assert any("ρ·ℓ held constant" in w for w in out["warnings"])
+
+
+def test_free_electron_mean_free_path_when_none_is_recorded(catalogue):
+    out = calculate_thin_film({"material": "Na", "thickness": "50 nm"}, catalogue)
+    assert value(out, "mean_free_path") > 0
+    assert any("free-electron value" in w for w in out["warnings"])
+
+
+def test_thinner_is_worse(catalogue):
+    ratios = [value(calculate_thin_film({"material": "film-copper", "thickness": d}, catalogue), "film_ratio")
+              for d in ("5 nm", "20 nm", "100 nm", "1 um")]
+    assert ratios == sorted(ratios, reverse=True)
+    assert ratios[-1] > 1.0
+
+
+@pytest.mark.parametrize("inputs, field, words", [
+    ({"specularity": "1"}, "specularity", "at least 0 and below 1"),
+    ({"specularity": "-0.1"}, "specularity", "at least 0 and below 1"),
+    ({"reflection": "1.5"}, "reflection", "at least 0 and below 1"),
+    ({"thickness": "-1 nm"}, "thickness", "greater than zero"),
+    ({"thickness": ""}, "thickness", "is empty"),
+    ({"thickness": "20 A"}, "thickness", "is a current"),
+    ({"grain_size": "0 nm", "reflection": "0.3"}, "grain_size", "greater than zero"),
+    ({"mean_free_path": "-3 nm"}, "mean_free_path", "greater than zero"),
+    ({"material": "IACS"}, "mean_free_path", "no mean free path is on record for Standard annealed copper"),
+    ({"thickness": "1e-300 m"}, "thickness", "thinner than one atomic layer"),
+    ({"thickness": "0.05 nm"}, "thickness", "thinner than one atomic layer"),
+    ({"thickness": "1e308 km"}, "thickness", "too large"),
+    ({"thickness": "1 nm", "mean_free_path": "1 m"}, "mean_free_path", "is below 1×10⁻⁶"),
+])
+def test_bad_input_names_the_field(catalogue, inputs, field, words):
+    base = {"material": "film-copper", "thickness": "20 nm"}
+    base.update(inputs)
+    out = calculate_thin_film(base, catalogue)
+    assert field in out["errors"], out["errors"]
+    assert words in out["errors"][field]
+    assert out["results"] == {}
