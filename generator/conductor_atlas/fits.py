@@ -35,7 +35,8 @@ def phonon_basis(temperatures: np.ndarray, theta: float) -> np.ndarray:
 def fit_bloch_gruneisen(temperatures, resistivities, theta_guess: float) -> BlochGruneisenFit | None:
     """Fit ρ0 ≥ 0, A > 0 and Θ to a ρ(T) table by relative least squares.
 
-    For each Θ on a grid (0.5…1.6 × the Debye temperature, then refined), ρ0 and A solve a
+    For each trial Θ (a 12-point scan of 0.5…1.6 × the Debye temperature, then golden-section
+    refinement), ρ0 and A solve a
     linear least-squares problem weighted by 1/ρ_i (so cryogenic points count as much as hot
     ones); the Θ with the smallest weighted residual wins. Returns None for fewer than 5 points
     or an unphysical result (A ≤ 0).
@@ -57,13 +58,24 @@ def fit_bloch_gruneisen(temperatures, resistivities, theta_guess: float) -> Bloc
         resid = (rho0 + a * g) / rho - 1.0
         return float(np.sum(resid ** 2)), rho0, a
 
-    grid = np.linspace(0.5 * theta_guess, 1.6 * theta_guess, 45)
+    # coarse scan for the basin, then golden-section refinement inside the bracketing cells
+    grid = np.linspace(0.5 * theta_guess, 1.6 * theta_guess, 12)
     scores = [solve(th)[0] for th in grid]
-    best = float(grid[int(np.argmin(scores))])
-    step = float(grid[1] - grid[0])
-    fine = np.linspace(max(best - step, 1.0), best + step, 41)
-    fine_scores = [solve(th)[0] for th in fine]
-    theta = float(fine[int(np.argmin(fine_scores))])
+    k = int(np.argmin(scores))
+    lo, hi = float(grid[max(k - 1, 0)]), float(grid[min(k + 1, len(grid) - 1)])
+    ratio = (5 ** 0.5 - 1) / 2
+    a_, b_ = hi - ratio * (hi - lo), lo + ratio * (hi - lo)
+    fa, fb = solve(a_)[0], solve(b_)[0]
+    for _ in range(24):  # bracket shrinks by 0.618 each step: 24 steps -> 1e-5 of its width
+        if fa < fb:
+            hi, b_, fb = b_, a_, fa
+            a_ = hi - ratio * (hi - lo)
+            fa = solve(a_)[0]
+        else:
+            lo, a_, fa = a_, b_, fb
+            b_ = lo + ratio * (hi - lo)
+            fb = solve(b_)[0]
+    theta = 0.5 * (lo + hi)
     _, rho0, a = solve(theta)
     if not a > 0:
         return None

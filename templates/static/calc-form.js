@@ -107,8 +107,11 @@ export function start(calculateWith, makeDict) {
   for (const form of document.querySelectorAll('form[data-calculator]')) {
     const catalogue = readCatalogue(form);
     fillFromQuery(form);
-    form.addEventListener('input', () => { run(form, catalogue); writeQuery(form); });
-    form.addEventListener('change', () => { run(form, catalogue); writeQuery(form); });
+    // The address follows the inputs, but not on every keystroke: replaceState is costly on tablets.
+    let pending = 0;
+    const remember = () => { clearTimeout(pending); pending = setTimeout(() => writeQuery(form), 250); };
+    form.addEventListener('input', () => { run(form, catalogue); remember(); });
+    form.addEventListener('change', () => { run(form, catalogue); clearTimeout(pending); writeQuery(form); });
     form.addEventListener('submit', (event) => event.preventDefault());
     run(form, catalogue);
   }

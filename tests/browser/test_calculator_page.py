@@ -61,7 +61,8 @@ def test_typed_inputs_match_python(page, served_site, catalogue, material_id, in
         assert float(shown[name]) == pytest.approx(result["value"], rel=1e-12, abs=0)
         assert page.text_content(f"[data-result={name}]") == result["text"]
     assert "resistance" in shown and shown["resistance"] is not None
-    # the inputs are mirrored in the URL so a link reopens the calculation
+    # the inputs are mirrored in the URL so a link reopens the calculation (after a short pause in typing)
+    page.wait_for_timeout(500)
     for name, text in inputs.items():
         assert quote(text, safe="").replace("%20", "+") in page.url or quote(text) in page.url
     assert page.errors == []

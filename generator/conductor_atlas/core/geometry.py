@@ -26,6 +26,14 @@ IEC60228_SIZES_MM2 = [
 
 AWG_NAMES = ["4/0", "3/0", "2/0", "1/0"]
 
+# compiled once (Transcrypt's re translates an uncompiled pattern on every call)
+ZEROS = re.compile(r"^0+$")
+DIGITS = re.compile(r"^[0-9]+$")
+AWG_FIRST = re.compile(r"^(?:awg|ga)\s*#?\s*([0-9/]+)$", re.IGNORECASE)
+AWG_LAST = re.compile(r"^#?\s*([0-9/]+)\s*(?:awg|ga)$", re.IGNORECASE)
+DIAMETER = re.compile(r"^(?:d|dia|diameter|ø|⌀|Ø)\s*=?\s*(.+)$", re.IGNORECASE)
+BAR = re.compile(r"^([0-9.,eE+-]+)\s*[x×*]\s*([0-9.,eE+-]+)\s*(.*)$")
+
 
 def awg_number(name):
     """AWG gauge text -> gauge number n ("4/0" -> -3, "1/0" -> 0, "0000" -> -3, "12" -> 12)."""
@@ -33,9 +41,9 @@ def awg_number(name):
     for i in range(len(AWG_NAMES)):
         if text == AWG_NAMES[i]:
             return i - 3
-    if re.match(r"^0+$", text) is not None:
+    if ZEROS.match(text) is not None:
         return 1 - len(text)
-    if re.match(r"^[0-9]+$", text) is None or len(text) > 3:
+    if DIGITS.match(text) is None or len(text) > 3:
         raise CoreError("“" + name + "” is not an AWG gauge (use 4/0 … 56)", "size")
     n = 0
     for ch in text:
@@ -121,21 +129,21 @@ def parse_size(text, field="size"):
         raise CoreError("is empty: enter a size (e.g. 2.5 mm², 12 AWG, d 1.6 mm, 40 x 5 mm)", field)
     raw = normalise_text(str(text))
     compact = raw.strip()
-    awg = re.match(r"^(?:awg|ga)\s*#?\s*([0-9/]+)$", compact, re.IGNORECASE)
+    awg = AWG_FIRST.match(compact)
     if awg is None:
-        awg = re.match(r"^#?\s*([0-9/]+)\s*(?:awg|ga)$", compact, re.IGNORECASE)
+        awg = AWG_LAST.match(compact)
     if awg is not None:
         n = awg_number(awg.group(1))
         d = awg_diameter(n)
         return size_record("round", awg_area(n), awg_name(n) + " AWG", d, 0.0, 0.0)
-    diameter = re.match(r"^(?:d|dia|diameter|ø|⌀|Ø)\s*=?\s*(.+)$", compact, re.IGNORECASE)
+    diameter = DIAMETER.match(compact)
     if diameter is not None:
         d = parse_quantity(diameter.group(1), "length", field)
         if not (d > 0):
             raise CoreError("diameter must be greater than zero", field)
         return size_record("round", usable_area(round_area(d), field), "ø " + diameter.group(1).strip(), d,
                            0.0, 0.0)
-    bar = re.match(r"^([0-9.,eE+-]+)\s*[x×*]\s*([0-9.,eE+-]+)\s*(.*)$", compact)
+    bar = BAR.match(compact)
     if bar is not None:
         unit = bar.group(3).strip()
         if len(unit) == 0:

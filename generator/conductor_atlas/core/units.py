@@ -139,12 +139,20 @@ KIND_WORDS = {
 # Characters CPython's str.strip() and JS's String.trim() treat differently (C0/C1 controls such
 # as \x1c-\x1f and \x85 are whitespace only to Python, U+FEFF only to JS): dropped before any strip
 UNPORTABLE_CHARACTERS = r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f-\x9f\ufeff]"
+# Patterns are compiled once: Transcrypt's re translates a pattern to JS on every uncompiled call,
+# which was most of a calculator update in the browser.
+UNPORTABLE_PATTERN = re.compile(UNPORTABLE_CHARACTERS)
+LINE_BREAKS = re.compile(r"[\n\r\u2028\u2029]")
+SPACED_STAR = re.compile(r"\s*\*\s*")
+SPACED_SLASH = re.compile(r"\s*/\s*")
+SPACES = re.compile(r"\s+")
+SECOND_SEPARATOR = re.compile(r"^[.,][0-9]")
 
 
 def portable_text(text):
     """``text`` without control characters and U+FEFF, line breaks as spaces, stripped: the same
     string in both runtimes (JS regex ``.`` also stops at \\r, U+2028 and U+2029; Python's only at \\n)."""
-    return re.sub(r"[\n\r\u2028\u2029]", " ", re.sub(UNPORTABLE_CHARACTERS, "", text)).strip()
+    return LINE_BREAKS.sub(" ", UNPORTABLE_PATTERN.sub("", text)).strip()
 
 
 def normalise_text(text):
@@ -164,9 +172,9 @@ def normalise_unit(unit_text):
     unit = unit_text.strip()
     if unit in CASE_SENSITIVE:
         return CASE_SENSITIVE[unit]
-    unit = re.sub(r"\s*\*\s*", "*", unit)
-    unit = re.sub(r"\s*/\s*", "/", unit)
-    unit = re.sub(r"\s+", "*", unit)
+    unit = SPACED_STAR.sub("*", unit)
+    unit = SPACED_SLASH.sub("/", unit)
+    unit = SPACES.sub("*", unit)
     unit = unit.lower()
     unit = unit.replace("ohms", "ohm")
     unit = unit.replace("deg*c", "degc").replace("deg*f", "degf")
@@ -187,7 +195,7 @@ def parse_number(text, field):
         raise CoreError("expected a number first, found “" + text + "”", field)
     number_text = match.group(1)
     rest = match.group(2)
-    if re.match(r"^[.,][0-9]", rest) is not None:
+    if SECOND_SEPARATOR.match(rest) is not None:
         raise CoreError("“" + text + "” mixes a decimal comma and a decimal point, or has two separators; "
                         "write it as 1234.5 or 1234,5", field)
     if number_text.find(",") >= 0:
