@@ -66,7 +66,8 @@ def run_calc(args: argparse.Namespace) -> int:
     module = MODULES[args.calculator]
     labels = dict(module.RESULT_LABELS)
     width = max((len(labels.get(k, k)) for k in outcome["results"]), default=10)
-    print(f"{module.TITLE}: {outcome['material']}" + (f" ({outcome['model']})" if outcome["model"] else ""))
+    title = module.TITLE + (f": {outcome['material']}" if outcome["material"] else "")
+    print(title + (f" ({outcome['model']})" if outcome["model"] else ""))
     for name, result in outcome["results"].items():
         print(f"  {labels.get(name, name).ljust(width)}  {result['text']}")
     for warning in outcome["warnings"]:
