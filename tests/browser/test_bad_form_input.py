@@ -29,18 +29,6 @@ EXTREME = {
 }
 
 
-@pytest.fixture()
-def page(browser):
-    context = browser.new_context(viewport={"width": 900, "height": 1200})
-    pg = context.new_page()
-    errors = []
-    pg.on("pageerror", lambda e: errors.append(str(e)))
-    pg.on("console", lambda m: errors.append(m.text) if m.type == "error" else None)
-    pg.errors = errors
-    yield pg
-    context.close()
-
-
 def visible_text_without(pg, typed):
     """The page's rendered text, with the person's own typing (echoed in messages) taken out."""
     return pg.inner_text("body").replace(typed, "")

@@ -21,18 +21,6 @@ def catalogue():
     return calc_catalogue([v.calc for v in views], [v.material for v in views])
 
 
-@pytest.fixture()
-def page(browser):
-    context = browser.new_context(viewport={"width": 900, "height": 1200})
-    pg = context.new_page()
-    errors = []
-    pg.on("pageerror", lambda e: errors.append(str(e)))
-    pg.on("console", lambda m: errors.append(m.text) if m.type == "error" else None)
-    pg.errors = errors
-    yield pg
-    context.close()
-
-
 def result_values(pg):
     return pg.eval_on_selector_all(
         "[data-result]", "els => Object.fromEntries(els.map(e => [e.dataset.result, e.dataset.value ?? null]))")

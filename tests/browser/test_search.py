@@ -11,18 +11,6 @@ BOX = "form[data-search=popup] input[name=q]"
 OPTIONS = "form[data-search=popup] [role=option]"
 
 
-@pytest.fixture()
-def page(browser):
-    context = browser.new_context(viewport={"width": 900, "height": 1200})
-    pg = context.new_page()
-    errors = []
-    pg.on("pageerror", lambda e: errors.append(str(e)))
-    pg.on("console", lambda m: errors.append(m.text) if m.type == "error" else None)
-    pg.errors = errors
-    yield pg
-    context.close()
-
-
 def focus_search(pg, served_site):
     pg.goto(f"{served_site}/index.html")
     pg.wait_for_selector("html.search-ready")

@@ -20,19 +20,8 @@ def catalogue():
     return catalogue_of(load_dataset(data_folders()))
 
 
-@pytest.fixture()
-def page(browser):
-    context = browser.new_context(viewport={"width": 834, "height": 1112})  # a 10-11" tablet, portrait
-    pg = context.new_page()
-    errors = []
-    pg.on("pageerror", lambda e: errors.append(str(e)))
-    pg.on("console", lambda m: errors.append(m.text) if m.type == "error" else None)
-    pg.errors = errors
-    yield pg
-    context.close()
-
-
-def test_home_search_material_row_and_permalink(page, served_site, catalogue):
+def test_home_search_material_row_and_permalink(tablet_page, served_site, catalogue):
+    page = tablet_page
     # 1. home: lists the classes, the calculators and the caution
     page.goto(f"{served_site}/index.html")
     assert page.text_content("h1").strip() == "Conductor Atlas"
@@ -87,7 +76,8 @@ def test_home_search_material_row_and_permalink(page, served_site, catalogue):
     assert page.errors == []
 
 
-def test_compare_page_sorts_by_a_column(page, served_site):
+def test_compare_page_sorts_by_a_column(tablet_page, served_site):
+    page = tablet_page
     page.goto(f"{served_site}/compare/index.html")
     page.wait_for_selector("table.sortable .sort-button")
     first_by_rho = page.text_content("#compare-table tbody tr:first-child th a")
