@@ -215,3 +215,14 @@ def test_wrong_icon_size_and_clashes_are_build_errors():
 
 def test_precache_list_is_relative():
     assert all(not p.startswith("/") for p in precache_list(add_offline_files(small_site())))
+
+
+def test_compaction_drops_indent_and_comment_lines_but_not_strings():
+    from conductor_atlas.bundle import compact_lines
+    # plain code: indentation and whole-line comments go, code stays in order
+    assert compact_lines(["  // note", "  const a = 1;", "", "\treturn a;"]) == ["const a = 1;", "return a;"]
+    # a backslash-continued string keeps its next line exactly
+    assert compact_lines(["const s = 'a\\", "   b';"]) == ["const s = 'a\\", "   b';"]
+    # a template literal anywhere in code: nothing is touched
+    lines = ["const t = `x", "   y`;"]
+    assert compact_lines(lines) == lines
