@@ -14,6 +14,7 @@ from conductor_atlas.core.material_models import resistivity_at
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.derive import T20, MaterialView
 from conductor_atlas.schema import CLASSES
+from conductor_atlas.tables import Column, Row, Table
 
 IACS_DENSITY = 8890.0  # kg/m³, IEC 60028 density of standard annealed copper
 
@@ -82,3 +83,18 @@ def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
         )
         rows.append(CompareRow(v.material.id, v.material.name, CLASSES[v.material.klass], cells))
     return rows
+
+
+def compare_table(rows: list[CompareRow]) -> Table:
+    """The compare page's table for CSV/JSON download (same numbers, display units in headers)."""
+    columns = (Column("material", "Material id", "", numeric=False), Column("name", "Material", "", numeric=False),
+               Column("class", "Class", "", numeric=False)) + tuple(Column(k, label, unit) for k, label, unit in COLUMNS)
+    out = []
+    for r in rows:
+        values = (r.id, r.name, r.klass) + tuple(c.value if c.value is not None else float("nan") for c in r.cells)
+        out.append(Row(r.id, values, tuple(str(v) for v in values)))
+    return Table(id="all-materials", title="All materials at 20 °C",
+                 model="ρ and α at 20 °C by each material's model; %IACS = 100·ρ_IACS/ρ; conductivity per mass = "
+                       "%IACS × 8.89 g/cm³ / density; δ = √(ρ/(π·f·μ0·μr))",
+                 validity="20 °C; empty cells where a material has no value on record",
+                 sources=("iec60028",), columns=columns, rows=tuple(out))

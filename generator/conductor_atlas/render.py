@@ -17,7 +17,7 @@ import markdown.treeprocessors
 
 from markupsafe import Markup
 
-from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows
+from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows, compare_table
 from conductor_atlas.core.calculators import MODULES, calculator_names
 from conductor_atlas.derive import CELSIUS, MaterialView, calc_catalogue
 from conductor_atlas.material_charts import material_charts
@@ -227,8 +227,12 @@ class Renderer:
             out[f"calculators/{spec['name']}/index.html"] = self.page(
                 "calculator.html", f"calculators/{spec['name']}/index.html", calc=spec, calc_json=full_catalogue,
                 choices=choices, title=spec["title"])
+        rows = compare_rows(views)
+        table = compare_table(rows)
+        out["compare/all-materials.csv"] = table.to_csv().encode("utf-8")
+        out["compare/all-materials.json"] = table.to_json().encode("utf-8")
         out["compare/index.html"] = self.page(
-            "compare.html", "compare/index.html", rows=compare_rows(views), columns=COMPARE_COLUMNS,
+            "compare.html", "compare/index.html", rows=rows, columns=COMPARE_COLUMNS,
             title="Compare materials",
             calc=calc_spec("compare", datalist="material-choices") if "compare" in MODULES else None,
             calc_json=full_catalogue, choices=choices)

@@ -10,6 +10,7 @@ from __future__ import annotations
 import csv
 import io
 import json
+import math
 from dataclasses import dataclass
 
 from conductor_atlas.core.numfmt import format_plain
@@ -62,9 +63,17 @@ class Table:
             "validity": self.validity,
             "sources": list(self.sources),
             "columns": [{"key": c.key, "label": c.label, "unit": c.unit} for c in self.columns],
-            "rows": [{"row_id": r.id, **{c.key: v for c, v in zip(self.columns, r.values)}} for r in self.rows],
+            "rows": [{"row_id": r.id, **{c.key: json_value(v) for c, v in zip(self.columns, r.values)}}
+                     for r in self.rows],
         }
         return json.dumps(payload, ensure_ascii=False, indent=1, sort_keys=False) + "\n"
+
+
+def json_value(v):
+    """A cell for JSON: non-finite numbers (no value on record) become null, never NaN."""
+    if isinstance(v, float) and not math.isfinite(v):
+        return None
+    return v
 
 
 def temperature_row_id(celsius: float) -> str:

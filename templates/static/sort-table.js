@@ -24,6 +24,7 @@ function sortTable(table, index, ascending) {
 for (const table of document.querySelectorAll('table.sortable')) {
   const headers = Array.from(table.tHead.rows[0].cells);
   headers.forEach((th, index) => {
+    if (th.hasAttribute('data-no-sort')) return;
     const button = document.createElement('button');
     button.type = 'button';
     button.className = 'sort-button';

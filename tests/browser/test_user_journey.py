@@ -88,3 +88,34 @@ def test_compare_page_sorts_by_a_column(tablet_page, served_site):
     values = [float(v) for v in densities]
     assert values == sorted(values)
     assert page.errors == []
+
+
+def test_compare_link_opens_two_materials_with_their_chart(tablet_page, served_site, catalogue):
+    page = tablet_page
+    inputs = {"material": "IACS", "other": "1350", "size": "35 mm2"}
+    query = "&".join(f"{k}={quote(v)}" for k, v in inputs.items())
+    page.goto(f"{served_site}/compare/index.html?{query}")
+    page.wait_for_selector("html.calc-ready")
+    expected = calculate("compare", {**inputs, "temperature": "20 °C"}, catalogue)
+    assert expected["errors"] == {}
+    # IEC 60889 / IEC 60028: equal resistance needs 1/0.610 = 1.64 times the copper area in 1350
+    shown = float(page.get_attribute("[data-result=area_ratio]", "data-value"))
+    assert shown == pytest.approx(expected["results"]["area_ratio"]["value"], rel=1e-12, abs=0)
+    assert shown == pytest.approx(1 / 0.610, rel=2e-3)
+    chart = page.locator("#compare-chart")
+    assert chart.is_visible()
+    assert chart.locator("path.chart-line").count() == 2
+    legend = chart.locator("svg text").all_text_contents()
+    assert "Standard annealed copper" in legend and any("1350" in t for t in legend)
+    assert page.errors == []
+
+
+def test_row_link_copies_the_address(browser, served_site):
+    context = browser.new_context(permissions=["clipboard-read", "clipboard-write"])
+    page = context.new_page()
+    page.goto(f"{served_site}/materials/copper-annealed/index.html")
+    page.click("#resistivity-temperature--t-90c a.row-link")
+    page.wait_for_selector("#copy-link-status:not(:empty)")
+    copied = page.evaluate("navigator.clipboard.readText()")
+    assert copied.endswith("/materials/copper-annealed/index.html#resistivity-temperature--t-90c")
+    context.close()
