@@ -89,9 +89,14 @@ function draw(figure, series) {
   figure.hidden = false;
 }
 
+let drawnFor = null;  // the two material texts the chart shows: redraw only when they change
+
 function chartFor(inputs, catalogue) {
   const figure = document.getElementById('compare-chart');
   if (!figure) return;
+  const key = (inputs.material || '') + '\u0000' + (inputs.other || '');
+  if (key === drawnFor) return;
+  drawnFor = key;
   const series = [];
   for (const field of ['material', 'other']) {
     try {
