@@ -8,6 +8,7 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_warning, ch
                                           has_errors, kelvin_text, new_outcome, read_quantity)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
 from conductor_atlas.core.calc_resistance import read_size
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Conduction electrons"
 SUMMARY = ("Free-electron density, relaxation time, mean free path, Fermi energy and velocity, mobility and drift "
@@ -18,7 +19,7 @@ DEFAULTS = {"material": "Cu", "temperature": "20 °C", "model": "auto", "current
 FIELD_INFO = {
     "material": ["Material", "a metal with a tabulated conduction-electron density, e.g. Cu, Ag, Au, Al, Na"],
     "temperature": ["Temperature", "e.g. 20 °C, 77 K, 4.2 K"],
-    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+    "model": MODEL_FIELD_INFO,
     "current_density": ["Current density (optional)", "e.g. 4 A/mm²: adds the drift velocity"],
     "current": ["Current (optional)", "e.g. 16 A, with a cross-section instead of a current density"],
     "size": ["Cross-section (with a current)", "e.g. 2.5 mm², 12 AWG, d 1.6 mm"],

@@ -7,6 +7,7 @@ from conductor_atlas.core.outcome import (add_result, add_warning, check_finite_
                                           kelvin_text, new_outcome)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
 from conductor_atlas.core.calc_resistance import mass_text, read_size
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Compare two materials at equal resistance"
 SUMMARY = "Cross-section, diameter and mass another material needs to match a conductor's resistance."
@@ -18,7 +19,7 @@ FIELD_INFO = {
     "size": ["Size of the reference conductor (optional)", "e.g. 35 mm², 4/0 AWG, d 2 mm, 40 x 5 mm: adds the "
                                                            "other material's equal-resistance size"],
     "temperature": ["Temperature of both", "e.g. 20 °C, 90 degC"],
-    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+    "model": MODEL_FIELD_INFO,
 }
 RESULT_LABELS = [
     ["area_ratio", "Area ratio A2/A1 (equal resistance)"], ["diameter_ratio", "Diameter ratio d2/d1"],

@@ -8,6 +8,7 @@ from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Resistance of a conductor run"
 SUMMARY = "DC and AC resistance, voltage drop, I²R loss and mass of a conductor at its temperature."
@@ -22,7 +23,7 @@ FIELD_INFO = {
     "temperature": ["Conductor temperature", "e.g. 20 °C, 90 degC, 363 K, 194 °F"],
     "current": ["Current (optional)", "e.g. 16 A, 250 mA"],
     "frequency": ["Frequency (optional)", "e.g. 50 Hz, 400 Hz, 100 kHz: adds skin depth and AC resistance"],
-    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+    "model": MODEL_FIELD_INFO,
 }
 # results shown on the page, in order: [name, label]
 RESULT_LABELS = [

@@ -5,6 +5,7 @@ from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.outcome import (add_result, check_finite_results, has_errors, kelvin_text, new_outcome)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
 from conductor_atlas.core.material_models import choose_model
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Resistivity at a temperature"
 SUMMARY = "Resistivity, conductivity, %IACS and the local temperature coefficient by the model that fits."
@@ -13,7 +14,7 @@ DEFAULTS = {"material": "Cu", "temperature": "20 °C", "model": "auto"}
 FIELD_INFO = {
     "material": ["Material", "id, alias or symbol, e.g. Cu, Ag, 1350, Pt385"],
     "temperature": ["Temperature", "e.g. 20 °C, 77 K, 600 °C"],
-    "model": ["Model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+    "model": MODEL_FIELD_INFO,
 }
 RESULT_LABELS = [
     ["resistivity", "Resistivity"], ["conductivity", "Conductivity"], ["iacs_percent", "Conductivity (%IACS)"],

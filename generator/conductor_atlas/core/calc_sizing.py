@@ -11,6 +11,7 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_warning, ch
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
 from conductor_atlas.core.units import normalise_text, parse_number, parse_quantity
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Conductor size for a voltage-drop limit"
 SUMMARY = "Smallest cross-section, and the next metric and AWG size, that keep the voltage drop within a limit."
@@ -26,7 +27,7 @@ FIELD_INFO = {
     "conductors": ["Circuit", "2: two-wire DC or single-phase (out and back); 1: the length is already the whole "
                               "conductor; 3-phase: balanced three-phase, line-to-line drop (√3)"],
     "temperature": ["Conductor temperature", "the operating temperature at full load, e.g. 70 °C"],
-    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+    "model": MODEL_FIELD_INFO,
 }
 RESULT_LABELS = [
     ["min_area", "Minimum cross-section"], ["next_metric_size", "Next metric size (IEC 60228)"],

@@ -8,6 +8,7 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_warning, ch
                                           has_errors, kelvin_text, new_outcome, read_quantity)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
 from conductor_atlas.core.calc_resistance import ac_ratio, read_size
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Skin effect"
 SUMMARY = "Skin depth, surface resistance and the AC/DC resistance ratio of a conductor at a frequency."
@@ -18,7 +19,7 @@ FIELD_INFO = {
     "frequency": ["Frequency", "e.g. 50 Hz, 400 Hz, 100 kHz, 1 MHz"],
     "size": ["Cross-section (optional)", "e.g. 240 mm², 4/0 AWG, d 8 mm, 100 x 10 mm: adds the AC/DC ratio"],
     "temperature": ["Conductor temperature", "e.g. 20 °C, 90 degC, 363 K"],
-    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+    "model": MODEL_FIELD_INFO,
 }
 RESULT_LABELS = [
     ["skin_depth", "Skin depth δ"], ["surface_resistance", "Surface resistance (per square)"],

@@ -7,6 +7,7 @@ from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Thin-film resistivity"
 SUMMARY = ("Resistivity of a thin film from surface scattering (Fuchs–Sondheimer) and, with a reflection "
@@ -26,7 +27,7 @@ FIELD_INFO = {
     "temperature": ["Temperature", "e.g. 20 °C, 77 K"],
     "mean_free_path": ["Bulk mean free path (optional)", "e.g. 39 nm, at the film temperature; empty: from the "
                                                          "material's record"],
-    "model": ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"],
+    "model": MODEL_FIELD_INFO,
 }
 RESULT_LABELS = [
     ["film_resistivity", "Film resistivity"], ["film_ratio", "Film over bulk resistivity"],

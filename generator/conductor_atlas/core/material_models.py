@@ -26,6 +26,9 @@ MODEL_LABELS = {
 
 MODEL_CHOICES = ["auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen"]
 
+# The "model" field of every calculator form: [label, hint]
+MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"]
+
 
 def has_linear(m):
     return m["alpha"] != 0
