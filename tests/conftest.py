@@ -15,6 +15,13 @@ IN_CI = os.environ.get("CI") == "true"
 
 
 @pytest.fixture(scope="session")
+def catalogue():
+    """The calculators' catalogue of the shipped data (shared by the whole run; read only)."""
+    from tests.support.differential_cases import shipped_catalogue
+    return shipped_catalogue()
+
+
+@pytest.fixture(scope="session")
 def transpiled_files():
     from conductor_atlas.transpile import transpile_core
     return transpile_core()

@@ -2,23 +2,13 @@
 
 from __future__ import annotations
 
-import json
 from urllib.parse import quote
 
 import pytest
 
-from conductor_atlas.build import data_folders
 from conductor_atlas.core.calculators import calculate
-from conductor_atlas.derive import calc_catalogue, derive
-from conductor_atlas.load import load_dataset
 
 pytestmark = pytest.mark.browser
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    views = derive(load_dataset(data_folders()))
-    return calc_catalogue([v.calc for v in views], [v.material for v in views])
 
 
 def result_values(pg):

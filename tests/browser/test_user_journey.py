@@ -7,17 +7,9 @@ from urllib.parse import quote
 
 import pytest
 
-from conductor_atlas.build import data_folders
 from conductor_atlas.core.calculators import calculate
-from conductor_atlas.derive import catalogue_of
-from conductor_atlas.load import load_dataset
 
 pytestmark = pytest.mark.browser
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    return catalogue_of(load_dataset(data_folders()))
 
 
 def test_home_search_material_row_and_permalink(tablet_page, served_site, catalogue):

@@ -13,19 +13,9 @@ import pytest
 from scipy import constants
 
 from conductor_atlas.core.calc_carriers import calculate_carriers
-from tests.support.differential_cases import shipped_catalogue
+from tests.support.outcomes import result_value as value
 
 ME_REL = 3e-9  # m_e (1.4e-9) and epsilon_0 (6.8e-10) differ between CODATA 2018 and 2022
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    return shipped_catalogue()
-
-
-def value(outcome, name):
-    assert outcome["errors"] == {}, outcome["errors"]
-    return outcome["results"][name]["value"]
 
 
 def test_copper_against_ashcroft_mermin_table_2_1(catalogue):

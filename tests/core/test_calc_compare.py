@@ -11,19 +11,9 @@ import math
 import pytest
 
 from conductor_atlas.core.calc_compare import calculate_compare
-from tests.support.differential_cases import shipped_catalogue
+from tests.support.outcomes import result_value as value
 
 RHO_CU = 1.7241e-8
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    return shipped_catalogue()
-
-
-def value(outcome, name):
-    assert outcome["errors"] == {}, outcome["errors"]
-    return outcome["results"][name]["value"]
 
 
 def test_copper_against_ec_aluminium(catalogue):

@@ -10,14 +10,9 @@ import math
 import pytest
 
 from conductor_atlas.core.calc_sizing import CAUTION, calculate_sizing
-from tests.support.differential_cases import shipped_catalogue
+from tests.support.outcomes import result_value as value
 
 RHO_70 = 1.7241e-8 * (1 + 0.00393 * 50.0)
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    return shipped_catalogue()
 
 
 def run(catalogue, **fields):
@@ -25,11 +20,6 @@ def run(catalogue, **fields):
               "conductors": "2", "temperature": "70 °C", "model": ""}
     inputs.update(fields)
     return calculate_sizing(inputs, catalogue)
-
-
-def value(outcome, name):
-    assert outcome["errors"] == {}, outcome["errors"]
-    return outcome["results"][name]["value"]
 
 
 def test_single_phase_worked_example(catalogue):

@@ -12,22 +12,12 @@ import pytest
 from scipy import constants, special
 
 from conductor_atlas.core.calc_skin_effect import CAUTION, calculate_skin_effect
-from tests.support.differential_cases import shipped_catalogue
+from tests.support.outcomes import result_value as value
 
 # scipy 1.17 carries CODATA 2022 mu_0 = 1.25663706127e-6, the core CODATA 2018 1.25663706212e-6:
 # 6.8e-10 apart, so δ differs by 3.4e-10 relative -> compare to 1e-9.
 MU0_REL = 1e-9
 IACS_RHO = 1.7241e-8  # ohm*m at 20 °C, IEC 60028 (standard annealed copper)
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    return shipped_catalogue()
-
-
-def value(outcome, name):
-    assert outcome["errors"] == {}, outcome["errors"]
-    return outcome["results"][name]["value"]
 
 
 def delta_ref(rho, f, mu_r=1.0):

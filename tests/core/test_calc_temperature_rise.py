@@ -13,14 +13,9 @@ import sys
 import pytest
 
 from conductor_atlas.core.calc_temperature_rise import calculate_temperature_rise
-from tests.support.differential_cases import shipped_catalogue
+from tests.support.outcomes import result_value as value
 
 T0 = 273.15
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    return shipped_catalogue()
 
 
 def run(catalogue, **fields):
@@ -28,11 +23,6 @@ def run(catalogue, **fields):
               "resistance_hot": "12.5 ohm", "coolant": "", "k": ""}
     inputs.update(fields)
     return calculate_temperature_rise(inputs, catalogue)
-
-
-def value(outcome, name):
-    assert outcome["errors"] == {}, outcome["errors"]
-    return outcome["results"][name]["value"]
 
 
 def test_worked_example_copper(catalogue):

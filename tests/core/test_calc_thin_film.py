@@ -10,17 +10,7 @@ import pytest
 from conductor_atlas.core.calc_resistivity import calculate_resistivity
 from conductor_atlas.core.calc_thin_film import calculate_thin_film
 from tests.core.test_size_effect import _combined_reference, _fs_reference
-from tests.support.differential_cases import shipped_catalogue
-
-
-@pytest.fixture(scope="module")
-def catalogue():
-    return shipped_catalogue()
-
-
-def value(outcome, name):
-    assert outcome["errors"] == {}, outcome["errors"]
-    return outcome["results"][name]["value"]
+from tests.support.outcomes import result_value as value
 
 
 def test_fuchs_sondheimer_with_a_typed_mean_free_path(catalogue):

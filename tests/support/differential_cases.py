@@ -6,18 +6,21 @@ test fails when a core module reachable from core/web.py has no case at all.
 
 from __future__ import annotations
 
+import functools
 import random
 
 from conductor_atlas.core.units import UNITS
 
+@functools.lru_cache(maxsize=1)
 def shipped_catalogue():
-    """The calculators' catalogue of the shipped data set (real records, as the pages embed them)."""
+    """The calculators' catalogue of the shipped data set (real records, as the pages embed them).
+
+    Built once per test run and shared: nothing may modify it.
+    """
     from conductor_atlas.build import data_folders
-    from conductor_atlas.derive import calc_catalogue, derive
+    from conductor_atlas.derive import catalogue_of
     from conductor_atlas.load import load_dataset
-    dataset = load_dataset(data_folders())
-    views = derive(dataset)
-    return calc_catalogue([v.calc for v in views], [v.material for v in views])
+    return catalogue_of(load_dataset(data_folders()))
 
 
 def unit_cases():
