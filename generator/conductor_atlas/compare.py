@@ -9,8 +9,7 @@ from dataclasses import dataclass
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.material_models import resistivity_at
+from conductor_atlas.core.material_models import local_temperature_coefficient
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.derive import T20, MaterialView
 from conductor_atlas.schema import CLASSES
@@ -51,16 +50,10 @@ def cell(value: float | None, scale: float, sig: int) -> Cell:
     return Cell(value * scale, format_number(value * scale, sig))
 
 
-def local_alpha(record: dict, rho_20: float) -> float | None:
-    """α at 20 °C, (dρ/dT)/ρ(20 °C) by a ±0.5 K central difference of the auto model."""
-    try:
-        lo = resistivity_at(record, T20 - 0.5, "auto")
-        hi = resistivity_at(record, T20 + 0.5, "auto")
-    except CoreError:
-        return None
-    if lo["warnings"] or hi["warnings"]:
-        return None
-    return (hi["rho"] - lo["rho"]) / 1.0 / rho_20
+def local_alpha(record: dict) -> float | None:
+    """α at 20 °C by the core's local coefficient; None where no model holds there without a warning."""
+    alpha, warnings = local_temperature_coefficient(record, T20, "auto")
+    return None if warnings else alpha
 
 
 def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
@@ -74,7 +67,7 @@ def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
         cells = (
             cell(rho, 1e8, 4),
             cell(dc.iacs_percent(rho), 1.0, 3),
-            cell(local_alpha(record, rho), 1.0, 3),
+            cell(local_alpha(record), 1.0, 3),
             cell(density, 1e-3, 4),
             cell(mass_iacs, 1.0, 3),
             cell(mfp, 1e9, 3),

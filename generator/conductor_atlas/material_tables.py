@@ -9,7 +9,7 @@ from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import size_effect as film
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.geometry import IEC60228_SIZES_MM2, awg_area, awg_name
+from conductor_atlas.core.geometry import IEC60228_SIZES_MM2, awg_area, awg_name, diameter_from_area
 from conductor_atlas.core.material_models import MODEL_LABELS, resistivity_at
 from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_plain
@@ -172,7 +172,7 @@ def ac_ratio_table(m: Material, record: dict) -> Table | None:
     columns += [Column(frequency_row_id(f).replace("-", "_"), f"R_ac/R_dc at {frequency_text(f)}", "") for f in AC_FREQUENCIES]
     rows = []
     for row_id, label, area in sizes:
-        d = (4.0 * area / 3.141592653589793) ** 0.5
+        d = diameter_from_area(area)
         ratios = [skin.round_wire_resistance_ratio(d / 2.0, rho, f, mu_r) for f in AC_FREQUENCIES]
         rows.append(Row(row_id, (label, d * 1e3, *ratios),
                         (label, format_number(d * 1e3, 4, True), *[format_number(r, 4, True) for r in ratios])))

@@ -2,10 +2,10 @@
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import (add_result, check_finite_results, has_errors, kelvin_text, new_outcome)
+from conductor_atlas.core.outcome import (add_result, check_finite_results, field_text, has_errors, kelvin_text,
+                                          new_outcome)
 from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
-from conductor_atlas.core.material_models import choose_model
-from conductor_atlas.core.material_models import MODEL_FIELD_INFO
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO, local_temperature_coefficient
 
 TITLE = "Resistivity at a temperature"
 SUMMARY = "Resistivity, conductivity, %IACS and the local temperature coefficient by the model that fits."
@@ -22,15 +22,13 @@ RESULT_LABELS = [
 ]
 CAUTION = "Values follow the named model and its sources; outside a model's range the result carries a warning."
 
-STEP = 0.5  # [K] half-width of the central difference for the local coefficient
-
-
 def calculate_resistivity(inputs, catalogue):
     """Resistivity of a material at a temperature by the model that fits there.
 
     Results: resistivity [Ω·m], conductivity [S/m], iacs_percent (100·ρ_IACS/ρ, comparing at the
     given temperature against annealed copper at 20 °C), temperature_coefficient: the local
-    α(T) = (dρ/dT)/ρ(T) by a central difference of ±0.5 K with the same model.
+    α(T) = (dρ/dT)/ρ(T) by material_models.local_temperature_coefficient (none when only a
+    reference value is on record).
     """
     outcome = new_outcome("resistivity", inputs)
     m = read_material(outcome, inputs, catalogue, "material")
@@ -45,22 +43,9 @@ def calculate_resistivity(inputs, catalogue):
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "conductivity", 1.0 / rho, "S/m", format_number(1e-6 / rho, 4) + " MS/m")
     add_result(outcome, "iacs_percent", dc.iacs_percent(rho), "%", format_number(dc.iacs_percent(rho), 4) + " %IACS")
-    if t > STEP + 1.0:
-        quiet = {"warnings": [], "errors": {}, "results": {}, "model": ""}
-        below = material_resistivity(quiet, m, t - STEP, {"model": outcome_model_key(inputs, m, t)})
-        above = material_resistivity(quiet, m, t + STEP, {"model": outcome_model_key(inputs, m, t)})
-        if below is not None and above is not None:
-            alpha = (above - below) / (2.0 * STEP) / rho
-            add_result(outcome, "temperature_coefficient", alpha, "1/K", format_number(alpha, 4) + " /K")
+    alpha = local_temperature_coefficient(m, t, field_text(inputs, "model"))[0]
+    if alpha is not None:
+        add_result(outcome, "temperature_coefficient", alpha, "1/K", format_number(alpha, 4) + " /K")
     check_finite_results(outcome, "temperature")
     return outcome
 
-
-def outcome_model_key(inputs, m, t):
-    """The model key the main evaluation used, so the derivative uses the same one."""
-    model = "auto"
-    if "model" in inputs and len(str(inputs["model"]).strip()) > 0:
-        model = str(inputs["model"]).strip()
-    if model == "auto":
-        return choose_model(m, t)
-    return model

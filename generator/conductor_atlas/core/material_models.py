@@ -6,7 +6,8 @@ Bloch–Grüneisen fit to that table (bg_rho0, bg_a, bg_theta, bg_t_min, bg_t_ma
 Callendar–Van Dusen coefficients (cvd_a, cvd_b, cvd_c) for platinum sensor metals.
 
 ``resistivity_at`` returns {"rho": [Ω·m], "model": key, "label": text, "warnings": [...]};
-"auto" picks, in order: linear inside its span; Callendar–Van Dusen inside −200…850 °C;
+"auto" picks, in order: Callendar–Van Dusen inside −200…850 °C (the defining equation of a
+platinum sensor metal wins over its mean α); linear inside its span;
 the table inside its range (interpolated, flagged); the Bloch–Grüneisen fit inside its fitted
 range; else the nearest model with a warning. Never silent outside a model's range.
 """
@@ -85,10 +86,10 @@ def cvd_ratio(m, t):
 
 def choose_model(m, t):
     """The model "auto" uses at temperature t [K]."""
-    if has_linear(m) and in_linear_span(m, t):
-        return "linear"
     if has_cvd(m) and in_cvd_range(t):
         return "callendar-van-dusen"
+    if has_linear(m) and in_linear_span(m, t):
+        return "linear"
     if in_table(m, t):
         return "table"
     if in_bg_range(m, t):
@@ -151,3 +152,33 @@ def resistivity_at(m, t, model):
     else:
         raise CoreError("unknown model “" + model + "”; choose one of: " + ", ".join(MODEL_CHOICES), "model")
     return {"rho": rho, "model": key, "label": MODEL_LABELS[key], "warnings": warnings}
+
+
+COEFFICIENT_STEP = 0.5  # [K] half-width of the central difference for the local coefficient
+
+
+def local_temperature_coefficient(m, t, model):
+    """Local temperature coefficient α(T) = (dρ/dT)/ρ(T), [1/K], or None.
+
+    dρ/dT by a central difference of ±0.5 K with one model throughout: ``model``, or for "auto"
+    the model "auto" picks at t (so the difference never straddles two models). None when that
+    model has no temperature dependence ("reference": only a value at one temperature is on
+    record) or cannot be evaluated at t ± 0.5 K. Returns [alpha, warnings of the three evaluations].
+    """
+    key = model
+    if key == "auto" or len(key) == 0:
+        key = choose_model(m, t)
+    if key == "reference" or not (t > COEFFICIENT_STEP):
+        return [None, []]
+    try:
+        below = resistivity_at(m, t - COEFFICIENT_STEP, key)
+        here = resistivity_at(m, t, key)
+        above = resistivity_at(m, t + COEFFICIENT_STEP, key)
+    except CoreError:
+        return [None, []]
+    warnings = []
+    for found in [below, here, above]:
+        for w in found["warnings"]:
+            warnings.append(w)
+    alpha = (above["rho"] - below["rho"]) / (2.0 * COEFFICIENT_STEP) / here["rho"]
+    return [alpha, warnings]
