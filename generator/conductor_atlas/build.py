@@ -20,7 +20,7 @@ from conductor_atlas.paths import CACHE_DIR, DATA_DIR, STATIC_DIR, TEMPLATES_DIR
 from conductor_atlas.publish import publish
 from conductor_atlas.render import Renderer
 from conductor_atlas.search_index import search_index_files
-from conductor_atlas.transpile import transpile_core
+from conductor_atlas.transpile import PendingTranspile
 
 
 @dataclass(frozen=True)
@@ -47,8 +47,13 @@ def material_key(dataset: DataSet, m: Material) -> bytes:
     return repr((m, [dataset.sources[k] for k in m.source_keys()])).encode("utf-8")
 
 
-def assemble(dataset: DataSet, cache: BuildCache | None = None) -> dict[str, bytes]:
-    """Every output file of the site, in memory; parts whose inputs are unchanged come from ``cache``."""
+def assemble(dataset: DataSet, cache: BuildCache | None = None,
+             transpile: PendingTranspile | None = None) -> dict[str, bytes]:
+    """Every output file of the site, in memory; parts whose inputs are unchanged come from ``cache``.
+
+    ``transpile``: a transpile of the core already running (``build`` starts it before loading);
+    without one, the core is transpiled (or read from the cache) at the end.
+    """
     cache = cache or BuildCache(None)
     renderer = Renderer(TEMPLATES_DIR, __version__)
     views, files, keys = [], {}, []
@@ -67,16 +72,21 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None) -> dict[str, byt
     files.update(cache.get("site:listings", site_key, lambda: renderer.render_listings(dataset, views)))
     files.update(cache.get("site:search-index", site_key, lambda: search_index_files(dataset, views, files)))
     files.update(static_files())
-    files.update(transpile_core())
+    if transpile is None:
+        with PendingTranspile() as pending:
+            files.update(pending.result())
+    else:
+        files.update(transpile.result())
     return add_offline_files(files)  # last: the service worker lists every other file
 
 
 def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
     start = time.perf_counter()
-    cache = BuildCache(CACHE_DIR)
-    folders = data_folders(extra_data)
-    dataset = cache.get("site:data", folder_key(folders), lambda: load_dataset(folders))
-    files = assemble(dataset, cache)
+    with PendingTranspile() as transpile:  # runs beside loading, deriving and rendering
+        cache = BuildCache(CACHE_DIR)
+        folders = data_folders(extra_data)
+        dataset = cache.get("site:data", folder_key(folders), lambda: load_dataset(folders))
+        files = assemble(dataset, cache, transpile)
     published = publish(files, out)
     return BuildReport(out=published, materials=len(dataset.materials), files=len(files),
                        bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start)
