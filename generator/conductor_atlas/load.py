@@ -6,6 +6,7 @@ Reads files only; writes nothing. Every problem found in any file is collected a
 
 from __future__ import annotations
 
+import functools
 import math
 import re
 import tomllib
@@ -26,6 +27,19 @@ ID_PATTERN = re.compile(r"^[a-z0-9]+(?:-[a-z0-9]+)*$")
 SOURCE_KINDS = {"standard", "handbook", "paper", "textbook", "datasheet", "practice", "demo"}
 # Pure non-magnetic metals must have ρ rising with T; magnetic ones may show kinks near Curie.
 MAGNETIC = {"relative_permeability", "curie_temperature"}
+
+
+@functools.lru_cache(maxsize=None)
+def parsed_units(text: str) -> pint.Unit:
+    """pint's units for a unit text; parsing is most of pint's cost and the texts repeat, so each
+    distinct text is parsed once. Raises pint's own exceptions for text that is not a unit."""
+    return UREG.Quantity(1.0, text).units
+
+
+def convert(magnitude: float, unit_text: str, target: str) -> float:
+    """``magnitude unit_text`` expressed in ``target`` by pint (offset units such as degC included);
+    the same registry call ``Quantity.to`` makes, so the result is identical."""
+    return float(UREG.convert(magnitude, parsed_units(unit_text), parsed_units(target)))
 
 
 class Problems:
@@ -88,19 +102,20 @@ def parse_quantity(text: object, unit: str, where: str, problems: Problems) -> f
         problems.add(where, f"expected a number then a unit, such as \"1.72e-8 ohm*m\", found \"{text}\""
                      + (" (nan and inf are not finite numbers)" if NON_FINITE.match(text) else ""))
         return None
-    unit_text = match.group(2).strip()
+    unit_text = match.group(2).strip() or "dimensionless"
     try:
-        quantity = UREG.Quantity(float(match.group(1)), unit_text or "dimensionless")
+        parsed_units(unit_text)
     except Exception as exc:  # pint raises many types for bad unit text; all are a user's typo
-        problems.add(where, f"cannot read the unit \"{unit_text}\" of \"{text}\" ({type(exc).__name__})")
+        problems.add(where, f"cannot read the unit \"{match.group(2).strip()}\" of \"{text}\" ({type(exc).__name__})")
         return None
-    if not unit_text and not UREG.Quantity(1, unit).dimensionless:
+    if unit_text == "dimensionless" and not parsed_units(unit).dimensionless:
         problems.add(where, f"\"{text}\" has no unit; expected a value in {unit}")
         return None
     try:
-        value = float(quantity.to(unit).magnitude)
+        value = convert(float(match.group(1)), unit_text, unit)
     except pint.DimensionalityError:
-        problems.add(where, f"expected a value in {unit}, found \"{text}\" (units of {quantity.dimensionality})")
+        problems.add(where, f"expected a value in {unit}, found \"{text}\" "
+                     f"(units of {parsed_units(unit_text).dimensionality})")
         return None
     if not math.isfinite(value):
         problems.add(where, f"expected a finite number, found \"{text}\"")
@@ -120,8 +135,7 @@ def parse_temperature(text: object, where: str, problems: Problems) -> float | N
     try:
         if match is None:
             raise ValueError(text)
-        quantity = UREG.Quantity(float(match.group(1)), match.group(2).strip() or "K")
-        kelvin = float(quantity.to("K").magnitude)
+        kelvin = convert(float(match.group(1)), match.group(2).strip() or "K", "K")
     except Exception:
         problems.add(where, f"expected a temperature such as \"20 degC\" or \"293.15 K\", found \"{text}\"")
         return None
@@ -212,7 +226,7 @@ def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
         return None
     t_unit, r_unit = table["temperature_unit"], table["resistivity_unit"]
     try:
-        UREG.Quantity(1.0, r_unit).to("ohm * m")
+        convert(1.0, r_unit, "ohm * m")
     except Exception:
         problems.add(f"{where}.resistivity_unit", f"expected a resistivity unit such as \"uohm*cm\", found \"{r_unit}\"")
         return None
@@ -225,11 +239,11 @@ def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
             problems.add(here, f"expected [temperature, resistivity] as two numbers, found {pair!r}")
             return None
         try:
-            t = float(UREG.Quantity(float(pair[0]), t_unit).to("K").magnitude)
+            t = convert(float(pair[0]), t_unit, "K")
         except Exception:
             problems.add(f"{where}.temperature_unit", f"expected a temperature unit such as \"K\" or \"degC\", found \"{t_unit}\"")
             return None
-        rho = float(UREG.Quantity(float(pair[1]), r_unit).to("ohm * m").magnitude)
+        rho = convert(float(pair[1]), r_unit, "ohm * m")
         if not (math.isfinite(t) and math.isfinite(rho)):
             problems.add(here, f"expected finite numbers, found {pair!r}")
             return None
