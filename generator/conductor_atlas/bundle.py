@@ -111,7 +111,10 @@ def evaluation_order(entry: str, modules: dict[str, Module]) -> list[str]:
     return order
 
 
-def load_graph(files: dict[str, bytes], entry: str) -> dict[str, Module]:
+def load_graph(files: dict[str, bytes], entry: str, parsed: dict[str, Module] | None = None) -> dict[str, Module]:
+    """The modules ``entry`` reaches; ``parsed`` (path -> Module) is shared between bundles of one
+    file set so each module is read once (modules are not changed after parsing)."""
+    parsed = {} if parsed is None else parsed
     modules: dict[str, Module] = {}
     pending = [entry]
     while pending:
@@ -120,14 +123,18 @@ def load_graph(files: dict[str, bytes], entry: str) -> dict[str, Module]:
             continue
         if path not in files:
             raise BuildError(f"classic bundle of {entry}: {path} is imported but is not a file of the site")
-        modules[path] = parse_module(path, files[path].decode("utf-8"))
+        if path not in parsed:
+            parsed[path] = parse_module(path, files[path].decode("utf-8"))
+        modules[path] = parsed[path]
         pending.extend(target for target, _ in modules[path].imports)
     return modules
 
 
-def bundle(files: dict[str, bytes], entry: str) -> bytes:
-    """One classic script that runs ``entry`` (a site path such as "static/calc.js") and its imports."""
-    modules = load_graph(files, entry)
+def bundle(files: dict[str, bytes], entry: str, parsed: dict[str, Module] | None = None) -> bytes:
+    """One classic script that runs ``entry`` (a site path such as "static/calc.js") and its imports.
+
+    ``parsed``: modules already parsed from the same ``files`` (see ``load_graph``)."""
+    modules = load_graph(files, entry, parsed)
     order = evaluation_order(entry, modules)
     position = {path: i for i, path in enumerate(order)}
     out = [f"// Conductor Atlas: {entry} and the modules it imports, joined by the build into one classic",

@@ -45,7 +45,8 @@ def classic_bundles(files: dict[str, bytes]) -> dict[str, bytes]:
     """A classic-script twin for every module script in static/ (module = has import/export lines)."""
     entries = [p for p in sorted(files) if p.startswith("static/") and p.endswith(".js")
                and not p.endswith(".classic.js") and MODULE_LINE.search(files[p])]
-    return {classic_name(p): bundle(files, p) for p in entries}
+    parsed: dict = {}  # each module parsed once for all bundles
+    return {classic_name(p): bundle(files, p, parsed) for p in entries}
 
 
 def png_size(data: bytes, path: str) -> tuple[int, int]:
