@@ -78,3 +78,34 @@ def test_a_damaged_entry_is_made_again(tmp_path, own_cache, extra_folder):
     report = build(tmp_path / "site", [extra_folder])
     assert len(cache.LAST_STATS["made"]) == report.materials + len(SITE_PARTS)
     shutil.rmtree(own_cache)
+
+
+def test_prune_removes_least_recently_used_entries_but_none_this_build_used(tmp_path):
+    import os
+    store = cache.BuildCache(tmp_path)
+    paths = {}
+    for i in range(6):  # entry i holds (i + 1) kB, and was last used at time 1e6 + i
+        store.get(f"old:{i}", b"k", lambda i=i: bytes(1000) * (i + 1))
+        paths[i] = store._path(f"old:{i}", b"k")
+        os.utime(paths[i], (1_000_000 + i, 1_000_000 + i))
+    fresh = cache.BuildCache(tmp_path)
+    assert fresh.get("old:0", b"k", lambda: b"never made") == bytes(1000)  # the oldest, read again now
+    removed = fresh.prune(limit_bytes=8000)
+    # about 21 kB in all; oldest first, skipping old:0 (used by this build): old:1 … old:4 go, leaving 7 kB
+    assert sorted(removed) == sorted(paths[i] for i in (1, 2, 3, 4))
+    assert sorted(fresh.folder.glob("*/*.pickle")) == sorted([paths[0], paths[5]])
+
+
+def test_old_transpiled_cores_are_pruned(tmp_path):
+    import os
+    from conductor_atlas import transpile
+    folder = tmp_path / "transpile"
+    for i in range(6):
+        done = folder / f"core{i}"
+        done.mkdir(parents=True)
+        (done / "COMPLETE").write_text("x\n")
+        os.utime(done / "COMPLETE", (1_000_000 + i, 1_000_000 + i))
+    unfinished = folder / "scratch"
+    unfinished.mkdir()
+    transpile.prune_transpiled(folder, keep=folder / "core0", newest=2)
+    assert sorted(p.name for p in folder.iterdir()) == ["core0", "core4", "core5", "scratch"]

@@ -88,5 +88,6 @@ def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
         dataset = cache.get("site:data", folder_key(folders), lambda: load_dataset(folders))
         files = assemble(dataset, cache, transpile)
     published = publish(files, out)
+    cache.prune()
     return BuildReport(out=published, materials=len(dataset.materials), files=len(files),
                        bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start)

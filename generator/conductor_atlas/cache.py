@@ -12,7 +12,9 @@ inputs:
 So a build with nothing changed reads everything back; editing one material file remakes that
 material and the site-wide pages only. An entry is written to a temporary name and renamed into
 place, so concurrent builds never read half an entry; an unreadable entry is made again. The
-folder is ``paths.CACHE_DIR`` (``CONDUCTOR_ATLAS_CACHE`` moves it; delete it at will).
+folder is ``paths.CACHE_DIR`` (``CONDUCTOR_ATLAS_CACHE`` moves it; delete it at will). After a
+build, ``prune`` keeps the folder under ``LIMIT_BYTES`` by removing the entries read or written
+longest ago, never one this build used.
 Reads and writes only the cache folder; pure otherwise.
 """
 
@@ -34,6 +36,9 @@ from conductor_atlas.paths import CACHE_DIR, PACKAGE_DIR, TEMPLATES_DIR
 T = TypeVar("T")
 FORMAT = b"conductor-atlas build cache 1"
 LIBRARIES = ("jinja2", "markdown", "markupsafe", "pint", "numpy", "transcrypt")
+# Size the entry folder may reach before the oldest entries go: about 40 builds of the shipped data
+# (6 MB each). Common practice (no source): a cache bounded by size, least recently used out first.
+LIMIT_BYTES = 250 * 1000 * 1000
 # What the last build in this process made and reused (labels); the benchmark reads it.
 LAST_STATS: dict[str, list[str]] = {"made": [], "reused": []}
 
@@ -96,6 +101,7 @@ class BuildCache:
         self.version = code_version()
         self.made: list[str] = []
         self.reused: list[str] = []
+        self.used: set[Path] = set()
         LAST_STATS["made"], LAST_STATS["reused"] = self.made, self.reused
 
     def _path(self, label: str, key: bytes) -> Path:
@@ -107,8 +113,10 @@ class BuildCache:
             self.made.append(label)
             return make()
         path = self._path(label, key)
+        self.used.add(path)
         try:
             value = pickle.loads(path.read_bytes())
+            os.utime(path)  # recently used: pruned last
         except FileNotFoundError:
             pass
         except (pickle.UnpicklingError, EOFError, AttributeError, ImportError, TypeError, ValueError):
@@ -133,3 +141,30 @@ class BuildCache:
             os.replace(handle.name, path)
         except OSError:
             pass  # a cache that cannot be written only makes the next build slower
+
+    def prune(self, limit_bytes: int = LIMIT_BYTES) -> list[Path]:
+        """Remove the least recently used entries until the folder holds at most ``limit_bytes``;
+        entries this build used stay. Returns the removed paths."""
+        if self.folder is None or not self.folder.is_dir():
+            return []
+        entries = []
+        for path in self.folder.glob("*/*.pickle"):
+            try:
+                info = path.stat()
+            except OSError:
+                continue
+            entries.append((info.st_mtime, path, info.st_size))
+        total = sum(size for _, _, size in entries)
+        removed = []
+        for _, path, size in sorted(entries):
+            if total <= limit_bytes:
+                break
+            if path in self.used:
+                continue
+            try:
+                path.unlink()
+            except OSError:
+                continue
+            total -= size
+            removed.append(path)
+        return removed

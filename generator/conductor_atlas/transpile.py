@@ -24,6 +24,7 @@ from conductor_atlas.errors import BuildError
 from conductor_atlas.paths import CACHE_DIR, CORE_DIR, PACKAGE_DIR
 
 FLAGS = ["-b", "-n", "-k"]
+KEEP_TRANSPILED = 3  # older transpiled cores kept besides the current one (0.5 MB each)
 ENTRY = CORE_DIR / "web.py"
 RUNTIME_FILES = ["org.transcrypt.__runtime__.js", "re.js", "re.translate.js", "math.js"]
 TIMESTAMP_LINE = re.compile(rb"^// Transcrypt'ed from Python, [^\n]*\n")
@@ -83,6 +84,14 @@ def run_transcrypt(out_dir: Path) -> None:
     check_written(out_dir, result.returncode, result.stdout + result.stderr)
 
 
+def prune_transpiled(folder: Path, keep: Path, newest: int = KEEP_TRANSPILED) -> None:
+    """Keep ``keep`` and the ``newest`` other finished transpiles (by time); remove older ones."""
+    done = [p for p in folder.iterdir() if p != keep and (p / "COMPLETE").is_file()]
+    done.sort(key=lambda p: (p / "COMPLETE").stat().st_mtime, reverse=True)
+    for old in done[newest:]:
+        shutil.rmtree(old, ignore_errors=True)
+
+
 class PendingTranspile:
     """A transpile started in the background; ``result()`` waits for it and returns its files.
 
@@ -129,6 +138,8 @@ class PendingTranspile:
         if self.cached.exists():
             shutil.rmtree(self.cached)
         staged.rename(self.cached)
+        prune_transpiled(self.cached.parent, keep=self.cached)
+
 
     def close(self) -> None:
         if self.process is not None:
