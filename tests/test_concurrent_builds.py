@@ -133,3 +133,19 @@ def test_two_cli_builds_at_once(tmp_path):
 
     # builds are reproducible, so one complete site is exactly a fresh build's tree
     assert hashes(out) == hashes(reference)
+
+
+def test_a_second_build_is_refused_before_it_loads_anything(tmp_path, monkeypatch):
+    from conductor_atlas import build as build_module
+    from conductor_atlas.publish import output_lock
+
+    def must_not_load(folders):
+        raise AssertionError("the refused build loaded the data set")
+
+    monkeypatch.setattr(build_module, "load_dataset", must_not_load)
+    monkeypatch.setattr(build_module, "CACHE_DIR", tmp_path / "cache")
+    out = tmp_path / "site"
+    with output_lock(out):  # another build holds the folder (a second open file description)
+        with pytest.raises(BuildError, match=REFUSAL):
+            build_module.build(out)
+    assert not out.exists()

@@ -17,7 +17,7 @@ from conductor_atlas.load import load_dataset
 from conductor_atlas.model import DataSet, Material
 from conductor_atlas.offline import add_offline_files
 from conductor_atlas.paths import CACHE_DIR, DATA_DIR, STATIC_DIR, TEMPLATES_DIR
-from conductor_atlas.publish import publish
+from conductor_atlas.publish import check_replaceable, output_lock, publish
 from conductor_atlas.render import Renderer
 from conductor_atlas.search_index import search_index_files
 from conductor_atlas.transpile import PendingTranspile
@@ -82,12 +82,15 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
 
 def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
     start = time.perf_counter()
-    with PendingTranspile() as transpile:  # runs beside loading, deriving and rendering
-        cache = BuildCache(CACHE_DIR)
-        folders = data_folders(extra_data)
-        dataset = cache.get("site:data", folder_key(folders), lambda: load_dataset(folders))
-        files = assemble(dataset, cache, transpile)
-    published = publish(files, out)
+    # The output lock is taken first: a second build into the same folder is refused at once.
+    with output_lock(out) as folder:
+        check_replaceable(folder)
+        with PendingTranspile() as transpile:  # runs beside loading, deriving and rendering
+            cache = BuildCache(CACHE_DIR)
+            folders = data_folders(extra_data)
+            dataset = cache.get("site:data", folder_key(folders), lambda: load_dataset(folders))
+            files = assemble(dataset, cache, transpile)
+        published = publish(files, folder, lock_held=True)
     cache.prune()
     return BuildReport(out=published, materials=len(dataset.materials), files=len(files),
                        bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start)
