@@ -4,6 +4,8 @@ validity and sources. Row ids come from the row's defining value, so links survi
 
 from __future__ import annotations
 
+import functools
+
 from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import size_effect as film
@@ -45,6 +47,7 @@ def quiet_rho(record: dict, t: float) -> tuple[float, str] | None:
     return found["rho"], found["model"]
 
 
+@functools.lru_cache(maxsize=None)  # the same few values for every material
 def frequency_text(f: float) -> str:
     for scale, prefix in ((1e9, "G"), (1e6, "M"), (1e3, "k")):
         if f >= scale:
@@ -52,10 +55,12 @@ def frequency_text(f: float) -> str:
     return f"{format_number(f, 3)} Hz"
 
 
+@functools.lru_cache(maxsize=None)  # the same few values for every material
 def frequency_row_id(f: float) -> str:
     return "f-" + format_plain(f, 6).replace(".", "p").replace("-", "m")
 
 
+@functools.lru_cache(maxsize=None)  # the same few values for every material
 def size_row_id(mm2: float) -> str:
     return "s-" + format_plain(mm2, 6).replace(".", "p") + "mm2"
 

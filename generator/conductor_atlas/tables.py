@@ -8,6 +8,7 @@ defining value (e.g. "t-40c" for −40 °C), so they survive a rebuild and a cha
 from __future__ import annotations
 
 import csv
+import functools
 import io
 import json
 import math
@@ -76,6 +77,7 @@ def json_value(v):
     return v
 
 
+@functools.lru_cache(maxsize=None)  # the same few values for every material
 def temperature_row_id(celsius: float) -> str:
     """Stable row id for a temperature in °C: -40 -> "t-m40c", 20 -> "t-20c", 2.5 -> "t-2p5c"."""
     text = format_plain(abs(celsius), 6).replace(".", "p")
