@@ -1,4 +1,8 @@
-"""search-index.json: one entry per material, table and page; every link resolves in the built site."""
+"""search-index.json: one entry per material, table and page; every link resolves in the built site.
+
+The file holds the index already prepared for search (core.search.prepare_index), read back here
+with ``shipped_entries``; searching the parsed file must give what searching the entries gives.
+"""
 
 from __future__ import annotations
 
@@ -13,14 +17,28 @@ from conductor_atlas.build import data_folders
 from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import DATA_DIR
-from conductor_atlas.search_index import build_index, index_json, page_title
+from conductor_atlas.core.search import INDEX_FORMAT, search, search_entries
+from conductor_atlas.search_index import build_index, index_json, page_title, shipped_entries, shipped_index
 
 UREG = pint.UnitRegistry()
 
 
 @pytest.fixture(scope="module")
-def site_index(built_site):
+def shipped(built_site):
     return json.loads((built_site / "search-index.json").read_text(encoding="utf-8"))
+
+
+@pytest.fixture(scope="module")
+def built_entries(built_site):
+    """The index entries of the built site, made again in memory from the data and its rendered pages."""
+    dataset = load_dataset(data_folders())
+    files = {p.relative_to(built_site).as_posix(): p.read_bytes() for p in built_site.rglob("*.html")}
+    return build_index(dataset, derive(dataset), files)["entries"]
+
+
+@pytest.fixture(scope="module")
+def site_index(shipped):
+    return {"entries": shipped_entries(shipped)}
 
 
 def target_exists(built_site, url):
@@ -78,10 +96,33 @@ def test_numbers_are_si_and_match_the_data_files(site_index):
 def test_index_is_repeatable_and_compact():
     dataset = load_dataset(data_folders())
     views = derive(dataset)
-    first = index_json(build_index(dataset, views, {}))
-    second = index_json(build_index(dataset, derive(dataset), {}))
+    first = index_json(shipped_index(build_index(dataset, views, {})))
+    second = index_json(shipped_index(build_index(dataset, derive(dataset), {})))
     assert first == second
     assert b"\n" not in first[:-1] and b": " not in first[:200]
+
+
+def test_the_file_needs_no_preparation(shipped):
+    # the browser turns only the top-level object into a dict: everything below must be lists and scalars
+    assert shipped["format"] == INDEX_FORMAT
+    assert shipped["materials"] == len(load_dataset(data_folders()).materials)
+
+    def dicts_below(value, where):
+        if isinstance(value, dict):
+            return [where]
+        if isinstance(value, list):
+            return [found for i, item in enumerate(value) for found in dicts_below(item, f"{where}[{i}]")]
+        return []
+    nested = [found for key, value in shipped.items() for found in dicts_below(value, key)]
+    assert nested[:5] == []
+
+
+@pytest.mark.parametrize("query", ["copper", "cooper", "C17200", "nickl chrom", "skin depth copper", "iacs > 90",
+                                   "resistivity < 3 uohm*cm", "copper alloy, iacs > 50", "references", "zzzz"])
+def test_searching_the_parsed_file_equals_searching_the_entries(shipped, built_entries, query):
+    # what the browser does (search on the parsed JSON) against preparing the build's entries in memory:
+    # JSON must carry every float, None and flag of the prepared index unchanged
+    assert search(shipped, query, 8) == search_entries(built_entries, query, 8)
 
 
 def test_page_title_strips_the_site_name():

@@ -5,6 +5,9 @@ as the property card shows it), one per derived table, and one per other page of
 (calculators, compare, references ...), read from the rendered pages' <title>. When the site has
 no calculator pages, the calculator embedded in each material page gets an entry instead.
 
+search-index.json holds these entries already prepared by ``core.search.prepare_index`` (lists of
+words, postings and records, no per-entry objects), so the browser searches the parsed file as it is.
+
 Pure: takes the data set, the derived views and the rendered files; returns bytes. Writes nothing.
 """
 
@@ -16,13 +19,12 @@ import re
 from typing import Mapping, Sequence
 
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.search import FILTERS
+from conductor_atlas.core.search import E_ALIASES, E_ID, E_KIND, E_MATERIAL, E_TITLE, E_URL, prepare_index
 from conductor_atlas.derive import MaterialView
 from conductor_atlas.model import DataSet
 from conductor_atlas.render import CARD_UNITS, SITE_NAME
 from conductor_atlas.schema import CLASSES, PROPERTIES
 
-INDEX_FORMAT = 1
 INDEX_PATH = "search-index.json"
 TITLE_TAG = re.compile(r"<title>(.*?)</title>", re.S)
 H1_TAG = re.compile(r"<h1[^>]*>(.*?)</h1>", re.S)
@@ -136,7 +138,7 @@ def embedded_calculator_entries(views: Sequence[MaterialView], files: Mapping[st
 
 
 def build_index(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[str, bytes]) -> dict:
-    """The whole index as plain data: {"format", "filters", "entries"}."""
+    """The whole index as plain data: {"materials": count, "entries": [entry dict]}."""
     entries = [material_entry(v) for v in views]
     for view in views:
         entries.extend(table_entries(view))
@@ -144,8 +146,26 @@ def build_index(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[
     entries.extend(pages)
     if not any(e["kind"] == "calculator" for e in pages):
         entries.extend(embedded_calculator_entries(views, files))
-    filters = [{"property": spec[0], "label": spec[1], "words": spec[2], "unit": spec[5]} for spec in FILTERS]
-    return {"format": INDEX_FORMAT, "materials": len(dataset.materials), "filters": filters, "entries": entries}
+    return {"materials": len(dataset.materials), "entries": entries}
+
+
+def shipped_index(index: dict) -> dict:
+    """What search-index.json holds: the entries prepared for search, and the number of materials."""
+    return {**prepare_index(index["entries"]), "materials": index["materials"]}
+
+
+def shipped_entries(shipped: dict) -> list[dict]:
+    """The entries of a parsed search-index.json as dicts (id, kind, title, url, aliases, props): for checks."""
+    out = []
+    for record in shipped["entries"]:
+        entry = {"id": record[E_ID], "kind": shipped["kinds"][record[E_KIND]], "title": record[E_TITLE],
+                 "url": record[E_URL], "aliases": record[E_ALIASES], "props": {}}
+        if record[E_MATERIAL] >= 0:
+            for name, column in zip(shipped["properties"], shipped["values"]):
+                if column[record[E_MATERIAL]] is not None:
+                    entry["props"][name] = column[record[E_MATERIAL]]
+        out.append(entry)
+    return out
 
 
 def index_json(index: dict) -> bytes:
@@ -155,4 +175,4 @@ def index_json(index: dict) -> bytes:
 
 def search_index_files(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[str, bytes]) -> dict[str, bytes]:
     """{"search-index.json": bytes} for the publish stage."""
-    return {INDEX_PATH: index_json(build_index(dataset, views, files))}
+    return {INDEX_PATH: index_json(shipped_index(build_index(dataset, views, files)))}

@@ -1,8 +1,10 @@
 // Conductor Atlas search glue: turns each search form into a combobox and shows what the core finds.
 // The matching, the filters and their unit parsing live in the core (conductor_atlas.core.search);
 // this file only fetches search-index.json, passes typed text to the core and builds the list.
+// The build writes the index already prepared (core.search.prepare_index: lists only below the top
+// level), so the parsed file is searched as it is and each keystroke is searched synchronously.
 // Typed text and index text reach the page through textContent only, never as markup.
-import {prepare_index, search} from '../js/conductor_atlas.core.search.js';
+import {INDEX_FORMAT, search} from '../js/conductor_atlas.core.search.js';
 import {dict} from '../js/org.transcrypt.__runtime__.js';
 
 // The site root: every search form carries it (data-root, relative to the page) from the build.
@@ -11,19 +13,9 @@ const SITE_ROOT = new URL(FIRST_FORM ? FIRST_FORM.dataset.root : './', window.lo
 const POPUP_LIMIT = 8;
 const PAGE_LIMIT = 60;
 const KIND_LABEL = {material: 'Material', table: 'Table', calculator: 'Calculator', page: 'Page'};
+const ANNOUNCE_PAUSE = 350;  // ms without typing before the live region reads the count
 
 let indexPromise = null;
-
-// JSON objects become Transcrypt dicts, as the core expects (arrays stay arrays).
-function toPy(value) {
-  if (Array.isArray(value)) return value.map(toPy);
-  if (value !== null && typeof value === 'object') {
-    const out = {};
-    for (const key of Object.keys(value)) out[key] = toPy(value[key]);
-    return dict(out);
-  }
-  return value;
-}
 
 function loadIndex() {
   if (indexPromise === null) {
@@ -32,9 +24,22 @@ function loadIndex() {
         if (!response.ok) throw new Error('HTTP ' + response.status);
         return response.json();
       })
-      .then((data) => prepare_index(toPy(data.entries)));
+      .then((data) => {
+        if (data === null || data.format !== INDEX_FORMAT) {
+          throw new Error('search-index.json is not in format ' + INDEX_FORMAT + '; rebuild the site');
+        }
+        return dict(data);  // the one dict of the index: a Transcrypt dict, as the core expects
+      });
   }
   return indexPromise;
+}
+
+function setText(node, text) {
+  if (node.textContent !== text) node.textContent = text;
+}
+
+function setAttribute(node, name, value) {
+  if (node.getAttribute(name) !== value) node.setAttribute(name, value);
 }
 
 function plural(n, word) {
@@ -53,6 +58,10 @@ class SearchBox {
     this.active = -1;
     this.index = null;
     this.announceTimer = 0;
+    this.announceText = '';
+    this.announceAt = 0;
+    this.pool = [];  // one <li> per result place, made once and refilled while typing
+    this.shown = 0;  // how many of them are in the list
     this.input.setAttribute('role', 'combobox');
     this.input.setAttribute('aria-autocomplete', 'list');
     this.input.setAttribute('aria-expanded', 'false');
@@ -64,6 +73,10 @@ class SearchBox {
     this.input.addEventListener('blur', () => { if (this.mode === 'popup') this.close(); });
     // keep the focus in the input while a result is clicked
     this.list.addEventListener('mousedown', (event) => event.preventDefault());
+    this.list.addEventListener('click', (event) => {
+      const item = event.target.closest('[role=option]');
+      if (item) this.open(this.pool.indexOf(item));
+    });
     form.addEventListener('submit', (event) => {
       if (this.mode === 'page') { event.preventDefault(); this.open(this.active); }
     });
@@ -98,8 +111,12 @@ class SearchBox {
     this.results = outcome.results;
     this.active = -1;
     this.input.removeAttribute('aria-activedescendant');
-    this.list.replaceChildren();
-    outcome.results.forEach((result, i) => this.list.appendChild(this.option(result, i)));
+    const count = outcome.results.length;
+    outcome.results.forEach((result, i) => this.fill(this.option(i), result));
+    if (count !== this.shown) {
+      this.list.replaceChildren(...this.pool.slice(0, count));
+      this.shown = count;
+    }
     const lines = [];
     for (const problem of outcome.errors) lines.push(problem);
     for (const f of outcome.filters) lines.push('Filter: ' + f.text);
@@ -112,44 +129,64 @@ class SearchBox {
     this.message.classList.toggle('is-error', outcome.errors.length > 0);
     const empty = this.input.value.trim() === '';
     const hasResults = outcome.results.length > 0;
-    this.list.hidden = !hasResults;
-    this.input.setAttribute('aria-expanded', hasResults ? 'true' : 'false');
+    if (this.list.hidden === hasResults) this.list.hidden = !hasResults;
+    setAttribute(this.input, 'aria-expanded', hasResults ? 'true' : 'false');
     if (empty) this.showMessage('');
     this.announce(empty ? '' : (outcome.errors.length ? outcome.errors.join(' ')
       : plural(outcome.total, 'result') + (hasResults ? '. First: ' + outcome.results[0].title + '.' : '.')
         + (outcome.note ? ' ' + outcome.note : '')));
   }
 
-  option(result, i) {
-    const item = document.createElement('li');
-    item.id = this.list.id + '-' + i;
-    item.setAttribute('role', 'option');
-    item.setAttribute('aria-selected', 'false');
-    item.dataset.url = result.url;
-    item.className = 'site-search-option kind-' + result.kind;
-    const kind = document.createElement('span');
-    kind.className = 'site-search-kind';
-    kind.textContent = KIND_LABEL[result.kind] || result.kind;
-    const title = document.createElement('span');
-    title.className = 'site-search-title';
-    title.textContent = result.title;
-    const snippet = document.createElement('span');
-    snippet.className = 'site-search-snippet';
-    snippet.textContent = result.snippet;
-    item.append(kind, title, snippet);
-    item.addEventListener('click', () => this.open(i));
-    return item;
+  // The option element for result place i, made on first use (its id stays with the place).
+  option(i) {
+    if (i >= this.pool.length) {
+      const item = document.createElement('li');
+      item.id = this.list.id + '-' + i;
+      item.setAttribute('role', 'option');
+      item.setAttribute('aria-selected', 'false');
+      for (const part of ['kind', 'title', 'snippet']) {
+        const span = document.createElement('span');
+        span.className = 'site-search-' + part;
+        item.appendChild(span);
+      }
+      this.pool.push(item);
+    }
+    return this.pool[i];
+  }
+
+  // Only what differs from the place's previous result is written (DOM writes are the slow part).
+  fill(item, result) {
+    setAttribute(item, 'aria-selected', 'false');
+    if (item.dataset.url !== result.url) item.dataset.url = result.url;
+    const className = 'site-search-option kind-' + result.kind;
+    if (item.className !== className) item.className = className;
+    const parts = item.children;
+    setText(parts[0], KIND_LABEL[result.kind] || result.kind);
+    setText(parts[1], result.title);
+    setText(parts[2], result.snippet);
   }
 
   showMessage(text) {
-    this.message.textContent = text;
-    this.message.hidden = text === '';
+    setText(this.message, text);
+    if (this.message.hidden !== (text === '')) this.message.hidden = text === '';
   }
 
   announce(text) {
-    // wait for a pause in typing so a screen reader is not flooded with counts
-    window.clearTimeout(this.announceTimer);
-    this.announceTimer = window.setTimeout(() => { this.status.textContent = text; }, 350);
+    // wait for a pause in typing (ANNOUNCE_PAUSE without a new text) so a screen reader is not
+    // flooded with counts; one timer, moved on when it fires early, not one per keystroke
+    this.announceText = text;
+    this.announceAt = performance.now();
+    if (this.announceTimer === 0) this.announceTimer = window.setTimeout(() => this.announceLater(), ANNOUNCE_PAUSE);
+  }
+
+  announceLater() {
+    const wait = this.announceAt + ANNOUNCE_PAUSE - performance.now();
+    if (wait > 1) {
+      this.announceTimer = window.setTimeout(() => this.announceLater(), wait);
+      return;
+    }
+    this.announceTimer = 0;
+    this.status.textContent = this.announceText;
   }
 
   move(step) {

@@ -42,6 +42,14 @@ def test_checker_names_each_forbidden_construct(snippet, words):
     assert found[0].startswith("probe.py:")
 
 
+def test_checker_flags_keywords_into_a_nokwargs_region():
+    code = ("# __pragma__ ('nokwargs')\ndef fast(a, b):\n    return a + b\n# __pragma__ ('kwargs')\n"
+            "def slow(a, b=1):\n    return fast(a, b=b)\n")
+    found = violations(code, "probe.py")
+    assert found == ["probe.py:6: keyword argument to fast, defined in a nokwargs region: Transcrypt ignores it there"]
+    assert "default argument" in violations("# __pragma__ ('nokwargs')\ndef f(a=1):\n    return a\n", "p.py")[0]
+
+
 def test_checker_accepts_plain_core_code():
     code = ("import math\nfrom conductor_atlas.core.errors import CoreError\n"
             "def area(d):\n    return math.pi * d * d / 4.0\n")

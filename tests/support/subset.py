@@ -8,6 +8,7 @@ review: container truthiness (write ``len(x) == 0``) and iterating a dict direct
 from __future__ import annotations
 
 import ast
+import re
 
 ALLOWED_MODULES = {"math", "re"}
 CORE_PREFIX = "conductor_atlas.core"
@@ -176,7 +177,42 @@ class SubsetChecker(ast.NodeVisitor):
         self.generic_visit(node)
 
 
+PRAGMA = re.compile(r"^\s*#\s*__pragma__\s*\(\s*'(nokwargs|kwargs)'\s*\)")
+
+
+def nokwargs_lines(source: str) -> set[int]:
+    """Line numbers inside ``# __pragma__ ('nokwargs')`` ... ``# __pragma__ ('kwargs')`` regions."""
+    inside = False
+    lines = set()
+    for number, line in enumerate(source.splitlines(), start=1):
+        found = PRAGMA.match(line)
+        if found:
+            inside = found.group(1) == "nokwargs"
+        elif inside:
+            lines.add(number)
+    return lines
+
+
+def nokwargs_violations(tree: ast.AST, source: str, filename: str) -> list[str]:
+    """In a nokwargs region Transcrypt drops keyword arguments silently: its functions take no
+    defaults, and no call in the file passes them a keyword."""
+    region = nokwargs_lines(source)
+    names = set()
+    found = []
+    for node in ast.walk(tree):
+        if isinstance(node, ast.FunctionDef) and node.lineno in region:
+            names.add(node.name)
+            if node.args.defaults:
+                found.append(f"{filename}:{node.lineno}: default argument in a nokwargs region (positional calls only)")
+    for node in ast.walk(tree):
+        if isinstance(node, ast.Call) and isinstance(node.func, ast.Name) and node.func.id in names and node.keywords:
+            found.append(f"{filename}:{node.lineno}: keyword argument to {node.func.id}, defined in a nokwargs region: "
+                         "Transcrypt ignores it there")
+    return found
+
+
 def violations(source: str, filename: str) -> list[str]:
     checker = SubsetChecker(filename)
-    checker.visit(ast.parse(source, filename=filename))
-    return checker.found
+    tree = ast.parse(source, filename=filename)
+    checker.visit(tree)
+    return checker.found + nokwargs_violations(tree, source, filename)

@@ -1,9 +1,14 @@
 """Site search: text matching tolerant of case, accents and small typos, plus property filters.
 
-Runs in the browser (transpiled) on the entries of search-index.json, which
-``conductor_atlas.search_index`` writes at build time. Pure functions, plain lists and dicts.
+Runs in the browser (transpiled) on search-index.json, which ``conductor_atlas.search_index``
+writes at build time with ``prepare_index``: the entries as lists (see E_*), the vocabulary with
+each word's letters as bits, and per word its postings (entry, field), so the browser parses the
+file and searches it with no preparation and no per-entry dicts. A query compares each query word
+with the vocabulary (most words are passed over on their letters alone), walks the postings of the
+words it matches, and scores only the entries those reach, fully only while they can still be
+among the results shown. Pure functions, plain lists and dicts.
 
-An index entry is a dict:
+An index entry (the input of ``prepare_index``) is a dict:
     {"id", "kind" ("material" | "table" | "calculator" | "page"), "title", "url" (from the site root),
      "summary", "aliases": [str], "class_title", "material" (name, for tables/calculators),
      "keywords": [str], "props": {name: SI float}, "facts": {name: [label, text]}}
@@ -35,6 +40,7 @@ Problems become messages in the outcome, never exceptions.
 
 import math
 import re
+from math import floor  # a plain binding: math.floor is a property look-up in JS
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.units import parse_quantity, known_units, normalise_text, NUMBER_PATTERN, SI_UNIT
@@ -62,6 +68,24 @@ NON_ASCII = re.compile(r"[^\x00-\x7f]")
 # the fields of an entry, in the order that wins a tie between equally good matches
 FIELD_RANK = {"title": 0, "aliases": 1, "id": 2, "material": 3, "class_title": 4, "keywords": 5, "summary": 6}
 FIELD_NAMES = ["title", "aliases", "id", "material", "class_title", "keywords", "summary"]
+FIELD_WEIGHT = [1.0, 1.0, 0.9, 0.8, 0.5, 0.5, 0.3]  # by field rank
+RANK_STEP = 8  # a posting code is (position step) × RANK_STEP + field rank
+INDEX_FORMAT = 2  # of the prepared index (search-index.json)
+DIGIT_BIT = 1 << 26  # in a word's letter mask (letter_mask): the word has a digit
+LETTER_BITS = DIGIT_BIT - 1  # the bits of a-z
+
+# The fields of an entry's record in the prepared index (a list, not a dict: see prepare_index)
+E_ID = 0
+E_KIND = 1  # its number in the index's "kinds"
+E_TITLE = 2
+E_URL = 3
+E_SUMMARY = 4
+E_CLASS = 5
+E_ALIASES = 6
+E_FACTS = 7  # [[property key, label, text as the card shows it], ...]
+E_EXACT = 8  # the lengths of the compact id, title and aliases
+E_TITLE_WORDS = 9  # the title's distinct words as vocabulary numbers
+E_MATERIAL = 10  # the entry's number among the materials (its place in each "values" column), or -1
 DIGITS = "0123456789"
 STOP_WORDS = ["the", "of", "a", "an", "for", "in", "at", "vs", "with", "to", "and", "or", "on"]
 
@@ -160,10 +184,16 @@ def typo_budget(size):
     return 2
 
 
+# Functions from here to the next "kwargs" pragma run for every index word or reached entry of a
+# query: Transcrypt gives them no keyword-argument prologue (a look at `arguments` on every call,
+# slower than their bodies in the browser). Call them with positional arguments only (and give
+# them no defaults); tests/core/test_subset.py checks that.
+# __pragma__ ('nokwargs')
 def osa_distance(a, b, limit):
     """Optimal-string-alignment distance of a and b, or limit + 1 once it must exceed ``limit``.
 
-    Counts insertions, deletions, substitutions and swaps of two adjacent characters.
+    Counts insertions, deletions, substitutions and swaps of two adjacent characters. Plain
+    comparisons instead of min(): the browser runs this for every index word a query word meets.
     """
     la = len(a)
     lb = len(b)
@@ -175,13 +205,20 @@ def osa_distance(a, b, limit):
         previous.append(j)
         before.append(j)
     for i in range(1, la + 1):
+        ca = a[i - 1]
         current = [i]
         row_min = i
         for j in range(1, lb + 1):
-            cost = 0 if a[i - 1] == b[j - 1] else 1
-            best = min(previous[j] + 1, current[j - 1] + 1, previous[j - 1] + cost)
-            if i > 1 and j > 1 and a[i - 1] == b[j - 2] and a[i - 2] == b[j - 1]:
-                best = min(best, before[j - 2] + 1)
+            cb = b[j - 1]
+            best = previous[j - 1]
+            if ca != cb:
+                best += 1
+            if previous[j] + 1 < best:
+                best = previous[j] + 1
+            if current[j - 1] + 1 < best:
+                best = current[j - 1] + 1
+            if i > 1 and j > 1 and ca == b[j - 2] and a[i - 2] == cb and before[j - 2] + 1 < best:
+                best = before[j - 2] + 1
             current.append(best)
             if best < row_min:
                 row_min = best
@@ -200,12 +237,17 @@ def token_match(query_word, word):
 
     Exact 1.0; prefix 0.7 + 0.3 × (share of the word typed); fuzzy 0.45 (1 typo) or 0.3 (2 typos).
     """
+    return word_match(query_word, word, not (has_digit(query_word) or has_digit(word)))
+
+
+def word_match(query_word, word, fuzzy):
+    """``token_match`` with the digit test done by the caller (``fuzzy`` False: exact or prefix only)."""
     if query_word == word:
         return [1.0, 0]
     size = len(query_word)
     if size >= 2 and len(word) > size and word.startswith(query_word):
         return [0.7 + 0.3 * size / len(word), 0]
-    if has_digit(query_word) or has_digit(word):
+    if not fuzzy:
         return [0.0, 0]
     budget = typo_budget(size)
     if budget == 0:
@@ -214,10 +256,18 @@ def token_match(query_word, word):
     if typos > budget and len(word) > size + 1:
         # a word still being typed, with a typo: compare with the word's start
         typos = osa_distance(query_word, word[0:size + 1], budget)
-        typos = min(typos, osa_distance(query_word, word[0:size], budget))
+        if typos > 1:
+            # the word's first ``size`` characters are not the query word (no prefix match), so
+            # they are at least one typo away: only a count above one can improve
+            shorter = osa_distance(query_word, word[0:size], budget)
+            if shorter < typos:
+                typos = shorter
     if typos <= budget:
         return [0.6 - 0.15 * typos, typos]
     return [0.0, 0]
+
+
+# __pragma__ ('kwargs')
 
 
 # ---------------------------------------------------------------------------------------------
@@ -260,70 +310,129 @@ def cached_tokens(cache, text):
     return found
 
 
-def add_words(words, order, cache, text, weight, field):
-    """Add each word of ``text`` to ``words`` (word -> [weight, field]) keeping the highest weight.
+def add_words(words, order, cache, text, rank):
+    """Add each word of ``text`` to ``words`` (word -> field rank), keeping the first field's rank.
 
-    ``order`` lists the words in first-seen order: JS objects list keys that look like numbers
-    ("65") first, so dict order is never relied on.
+    The fields are added in rank order and their weights never grow with the rank, so the first
+    field a word appears in is also its heaviest. ``order`` lists the words in first-seen order:
+    JS objects list keys that look like numbers ("65") first, so dict order is never relied on.
     """
     for word in cached_tokens(cache, text):
-        if word in words:
-            if words[word][0] >= weight:
-                continue
-        else:
+        if not (word in words):
             order.append(word)
-        words[word] = [weight, field]
+            words[word] = rank
 
 
 def prepare_entry(entry, cache):
-    """The searchable form of one index entry: its words with field weights and its exact keys."""
+    """[the entry's record (see E_*) with its kind and title words as text, its words, their field ranks]."""
     words = {}
     order = []
     title_words = []
     for word in cached_tokens(cache, field_text(entry, "title")):
         if not (word in title_words):
             title_words.append(word)
-    add_words(words, order, cache, field_text(entry, "title"), 1.0, "title")
+    add_words(words, order, cache, field_text(entry, "title"), FIELD_RANK["title"])
     for alias in field_list(entry, "aliases"):
-        add_words(words, order, cache, alias, 1.0, "aliases")
-    add_words(words, order, cache, field_text(entry, "id"), 0.9, "id")
-    add_words(words, order, cache, field_text(entry, "material"), 0.8, "material")
-    add_words(words, order, cache, field_text(entry, "class_title"), 0.5, "class_title")
+        add_words(words, order, cache, alias, FIELD_RANK["aliases"])
+    add_words(words, order, cache, field_text(entry, "id"), FIELD_RANK["id"])
+    add_words(words, order, cache, field_text(entry, "material"), FIELD_RANK["material"])
+    add_words(words, order, cache, field_text(entry, "class_title"), FIELD_RANK["class_title"])
     for text in field_list(entry, "keywords"):
-        add_words(words, order, cache, text, 0.5, "keywords")
-    add_words(words, order, cache, field_text(entry, "summary"), 0.3, "summary")
-    exact = ["".join(cached_tokens(cache, field_text(entry, "id"))),
-             "".join(cached_tokens(cache, field_text(entry, "title")))]
+        add_words(words, order, cache, text, FIELD_RANK["keywords"])
+    add_words(words, order, cache, field_text(entry, "summary"), FIELD_RANK["summary"])
+    # the lengths of the compact id, title and aliases: search compacts only the keys as long as the query
+    exact = [len("".join(cached_tokens(cache, field_text(entry, "id")))),
+             len("".join(cached_tokens(cache, field_text(entry, "title"))))]
+    aliases = []
     for alias in field_list(entry, "aliases"):
-        exact.append("".join(cached_tokens(cache, alias)))
-    kind = field_text(entry, "kind")
-    word_list = []
+        exact.append(len("".join(cached_tokens(cache, alias))))
+        aliases.append(str(alias))
+    facts = []
+    given = field_dict(entry, "facts")
+    for key in given.keys():
+        facts.append([key, given[key][0], given[key][1]])
+    record = [field_text(entry, "id"), field_text(entry, "kind"), field_text(entry, "title"),
+              field_text(entry, "url"), field_text(entry, "summary"), field_text(entry, "class_title"), aliases,
+              facts, exact, title_words, -1]
+    ranks = []
     for word in order:
-        word_list.append([word, words[word][0], words[word][1]])
-    return {"entry": entry, "words": word_list, "title_words": title_words,
-            "title_text": " ".join(title_words), "exact": exact, "kind": kind}
+        ranks.append(words[word])
+    return [record, order, ranks]
 
 
 def prepare_index(entries):
-    """Prepare every entry once (at page load); ``search`` then runs on the result.
+    """The searchable form of the index entries, built once (at build time: search-index.json is this).
 
-    ``postings`` maps each index word to [entry position, field weight, field rank] for every entry
-    that contains it, so a query visits only the entries its words can match.
+    Only lists, strings, numbers, booleans and None below the top level, so the browser uses the
+    parsed JSON as it is (no preparation, no dicts to make):
+    {"format", "entries": [record (E_*)], "kinds": [kind], "vocabulary": [word],
+     "letters": [letter_mask of each word], "postings": [[code] per word],
+     "material_positions": [entry position of each material],
+     "properties": [the FILTERS keys, then any other key of the entries' props],
+     "values": [[SI value or None per material] per property]}.
+    A posting code is the entry's position minus that of the word's previous posting (0 before
+    the first), times RANK_STEP, plus the rank of the word's heaviest field in that entry.
     """
-    prepared = []
-    postings = {}
-    words = []
+    records = []
+    kinds = []
+    kind_numbers = {}
+    vocabulary = []
+    numbers = {}
+    postings = []
+    last = []
+    materials = []
+    properties = []
+    values = []
+    for spec in FILTERS:
+        properties.append(spec[0])
+    for entry in entries:
+        props = field_dict(entry, "props")
+        for key in props.keys():
+            if not (key in properties):
+                properties.append(key)
+    for name in properties:
+        values.append([])
     cache = {}
     for position in range(len(entries)):
-        item = prepare_entry(entries[position], cache)
-        for pair in item["words"]:
-            if not (pair[0] in postings):
-                postings[pair[0]] = []
-                words.append(pair[0])
-            postings[pair[0]].append([position, pair[1], FIELD_RANK[pair[2]]])
-        item["words"] = len(item["words"])
-        prepared.append(item)
-    return {"entries": prepared, "vocabulary": words, "postings": postings}
+        entry = entries[position]
+        prepared = prepare_entry(entry, cache)
+        record = prepared[0]
+        order = prepared[1]
+        ranks = prepared[2]
+        for i in range(len(order)):
+            word = order[i]
+            if not (word in numbers):
+                numbers[word] = len(vocabulary)
+                vocabulary.append(word)
+                postings.append([])
+                last.append(0)
+            n = numbers[word]
+            postings[n].append((position - last[n]) * RANK_STEP + ranks[i])
+            last[n] = position
+        title_numbers = []
+        for word in record[E_TITLE_WORDS]:
+            title_numbers.append(numbers[word])
+        record[E_TITLE_WORDS] = title_numbers
+        kind = record[E_KIND]
+        if not (kind in kind_numbers):
+            kind_numbers[kind] = len(kinds)
+            kinds.append(kind)
+        record[E_KIND] = kind_numbers[kind]
+        if kind == "material":
+            record[E_MATERIAL] = len(materials)
+            materials.append(position)
+            props = field_dict(entry, "props")
+            for c in range(len(properties)):
+                if properties[c] in props:
+                    values[c].append(props[properties[c]])
+                else:
+                    values[c].append(None)
+        records.append(record)
+    letters = []
+    for word in vocabulary:
+        letters.append(letter_mask(word))
+    return {"format": INDEX_FORMAT, "entries": records, "kinds": kinds, "vocabulary": vocabulary, "letters": letters,
+            "postings": postings, "material_positions": materials, "properties": properties, "values": values}
 
 
 # ---------------------------------------------------------------------------------------------
@@ -515,104 +624,252 @@ def split_clauses(query):
 # ranking
 
 
-def word_qualities(vocabulary, query_words):
-    """For each query word, index word -> [quality, typos] for the index words it matches."""
+# Functions from here to the next "kwargs" pragma run for every index word or reached entry of a
+# query: Transcrypt gives them no keyword-argument prologue (a look at `arguments` on every call,
+# slower than their bodies in the browser). Call them with positional arguments only (and give
+# them no defaults); tests/core/test_subset.py checks that.
+# __pragma__ ('nokwargs')
+def letter_mask(word):
+    """The letters a-z of a word as bits (a 1, b 2, c 4, ...), plus DIGIT_BIT when it has a digit."""
+    mask = 0
+    for ch in word:
+        if "a" <= ch and ch <= "z":
+            mask = mask | (1 << (ord(ch) - 97))
+        elif "0" <= ch and ch <= "9":
+            mask = mask | DIGIT_BIT
+    return mask
+
+
+def word_qualities(index, query_words):
+    """For each query word, the index words it matches: [[word number, quality, typos], ...].
+
+    Every index word is visited, but most are passed over on their letters alone: a query word
+    with a letter the index word lacks needs a typo for it, so a word missing more of the query
+    word's letters than the typo budget allows cannot match (not even its start, which has no
+    other letters), and only the rest are compared with ``word_match``.
+    """
+    vocabulary = index["vocabulary"]
+    masks = index["letters"]
+    size = len(vocabulary)
     tables = []
     for q in query_words:
-        table = {}
+        table = []
         exact_found = False
-        for word in vocabulary:
-            found = token_match(q, word)
+        q_mask = letter_mask(q)
+        q_letters = q_mask & LETTER_BITS
+        q_fuzzy = q_mask == q_letters
+        budget = typo_budget(len(q))
+        for n in range(size):
+            mask = masks[n]
+            allowed = 0
+            if q_fuzzy and (mask & DIGIT_BIT) == 0:
+                allowed = budget
+            # the query word's letters this word lacks, counted (a bit at a time) up to allowed + 1
+            lacking = q_letters & ~mask
+            missing = 0
+            while lacking != 0 and missing <= allowed:
+                lacking = lacking & (lacking - 1)
+                missing += 1
+            if missing > allowed:
+                continue
+            found = word_match(q, vocabulary[n], allowed > 0)
             if found[0] > 0:
-                table[word] = found
+                table.append([n, found[0], found[1]])
                 if found[1] == 0 and found[0] >= 1.0:
                     exact_found = True
         if exact_found and len(q) <= 5:
-            kept = {}
-            for word in table.keys():
-                if table[word][1] == 0:
-                    kept[word] = table[word]
+            kept = []
+            for match in table:
+                if match[2] == 0:
+                    kept.append(match)
             table = kept
         tables.append(table)
     return tables
 
 
-def word_gains(index, qualities):
-    """Per query word, per entry position: the best quality × field weight and that field's rank."""
+def word_marks(index, tables):
+    """Per index word: 2 if the first query word matches it, 1 if another one does, else 0."""
+    marks = []
+    size = len(index["vocabulary"])
+    for n in range(size):
+        marks.append(0)
+    for k in range(len(tables)):
+        for match in tables[k]:
+            if k == 0:
+                marks[match[0]] = 2
+            elif marks[match[0]] == 0:
+                marks[match[0]] = 1
+    return marks
+
+
+def gather(index, tables):
+    """The entries the matched words reach: [positions, gains, ranks], in the order first reached.
+
+    ``gains[k][c]`` is the best quality × field weight of query word k in the entry at
+    ``positions[c]`` (0 when it does not match there), ``ranks[k][c]`` that field's rank.
+    """
+    postings = index["postings"]
     count = len(index["entries"])
+    words = len(tables)
+    slot = []
+    for i in range(count):
+        slot.append(-1)
+    positions = []
     gains = []
     ranks = []
-    for k in range(len(qualities)):
-        gain = []
-        rank = []
-        for i in range(count):
-            gain.append(0.0)
-            rank.append(99)
-        table = qualities[k]
-        for word in table.keys():
-            quality = table[word][0]
-            for posting in index["postings"][word]:
-                at = posting[0]
-                value = quality * posting[1]
-                if value > gain[at] or (value == gain[at] and posting[2] < rank[at]):
-                    gain[at] = value
-                    rank[at] = posting[2]
-        gains.append(gain)
-        ranks.append(rank)
-    return [gains, ranks]
+    for k in range(words):
+        gains.append([])
+        ranks.append([])
+    for k in range(words):
+        gain = gains[k]
+        rank = ranks[k]
+        for match in tables[k]:
+            quality = match[1]
+            codes = postings[match[0]]
+            size = len(codes)
+            at = 0
+            for i in range(size):
+                code = codes[i]
+                step = floor(code / RANK_STEP)
+                field = code - step * RANK_STEP
+                at += step
+                c = slot[at]
+                if c < 0:
+                    c = len(positions)
+                    slot[at] = c
+                    positions.append(at)
+                    for other in range(words):
+                        gains[other].append(0.0)
+                        ranks[other].append(99)
+                value = quality * FIELD_WEIGHT[field]
+                if value > gain[c] or (value == gain[c] and field < rank[c]):
+                    gain[c] = value
+                    rank[c] = field
+    return [positions, gains, ranks]
 
 
-def score_entry(item, position, query_words, qualities, gains, query_compact):
-    """[number of query words matched, score, the field of the best match] for one entry."""
+def words_matched(gains, words, c):
+    """How many of the ``words`` query words match reached entry c."""
     matched = 0
-    score = 0.0
-    best_field = ""
-    best_gain = 0.0
-    for k in range(len(query_words)):
-        gain = gains[0][k][position]
-        if gain > 0:
+    for k in range(words):
+        if gains[k][c] > 0:
             matched += 1
+    return matched
+
+
+def word_score(gains, words, c):
+    """The sum over query words of 10 × (quality × field weight) for reached entry c."""
+    score = 0.0
+    for k in range(words):
+        gain = gains[k][c]
+        if gain > 0:
             score += 10.0 * gain
-            if gain > best_gain:
-                best_gain = gain
-                best_field = FIELD_NAMES[gains[1][k][position]]
-    if matched == 0:
-        return [0, 0.0, ""]
-    if len(query_compact) > 0:
-        for key in item["exact"]:
-            if key == query_compact:
+    return score
+
+
+def best_field(gains, ranks, c):
+    """The field of the best-matching query word (the first of equals) in reached entry c."""
+    field = ""
+    best = 0.0
+    for k in range(len(gains)):
+        if gains[k][c] > best:
+            best = gains[k][c]
+            field = FIELD_NAMES[ranks[k][c]]
+    return field
+
+
+def exact_key(record, i):
+    """Key i of an entry for the exact-match bonus: its id, its title, then its aliases."""
+    if i == 0:
+        return record[E_ID]
+    if i == 1:
+        return record[E_TITLE]
+    return record[E_ALIASES][i - 2]
+
+
+def title_text(vocabulary, title_words):
+    """The title's distinct words joined by spaces."""
+    words = []
+    for n in title_words:
+        words.append(vocabulary[n])
+    return " ".join(words)
+
+
+def may_start_title(vocabulary, record, first_word):
+    """False when the title cannot start with the query (it would start with the first query word)."""
+    title_words = record[E_TITLE_WORDS]
+    return len(title_words) > 0 and vocabulary[title_words[0]].startswith(first_word)
+
+
+def has_key_length(record, size):
+    for key_size in record[E_EXACT]:
+        if key_size == size:
+            return True
+    return False
+
+
+def score_entry(index, record, base, marks, query_words, query_text, query_compact, kind_bonus):
+    """The score of a reached entry whose query words give ``base`` (``word_score``).
+
+    +100 when the query, compacted, is the entry's id, title or an alias; +20 when the title
+    starts with the query; up to +3 for the share of the title's words the query matches, +1
+    when the first query word matches the title's first word; the kind's bonus.
+    """
+    score = base
+    size = len(query_compact)
+    if size > 0:
+        lengths = record[E_EXACT]
+        for i in range(len(lengths)):
+            if lengths[i] == size and compact(exact_key(record, i)) == query_compact:
                 score += 100.0
                 break
-    query_text = " ".join(query_words)
-    if len(query_text) >= 2 and item["title_text"].startswith(query_text):
-        score += 20.0
-    title_words = item["title_words"]
+    title_words = record[E_TITLE_WORDS]
+    if len(query_text) >= 2 and may_start_title(index["vocabulary"], record, query_words[0]):
+        if title_text(index["vocabulary"], title_words).startswith(query_text):
+            score += 20.0
     if len(title_words) > 0:
         covered = 0
-        for word in title_words:
-            for table in qualities:
-                if word in table:
-                    covered += 1
-                    break
+        for n in title_words:
+            if marks[n] > 0:
+                covered += 1
         score += 3.0 * covered / len(title_words)
-        if title_words[0] in qualities[0]:
+        if marks[title_words[0]] == 2:
             score += 1.0
-    if item["kind"] in KIND_BONUS:
-        score += KIND_BONUS[item["kind"]]
-    return [matched, score, best_field]
+    score += kind_bonus[record[E_KIND]]
+    return score
 
 
+def score_bound(vocabulary, record, base, first_word, text_size, compact_size, kind_bonus):
+    """A cheap upper bound of ``score_entry``: each bonus that is possible at all, added in full
+    (``text_size`` and ``compact_size``: the lengths of the query's words joined and compacted).
+
+    The same additions in the same order, each at least as large, so rounding keeps it an upper bound.
+    """
+    bound = base
+    if compact_size > 0 and has_key_length(record, compact_size):
+        bound += 100.0
+    if text_size >= 2 and may_start_title(vocabulary, record, first_word):
+        bound += 20.0
+    bound += 3.0
+    bound += 1.0
+    bound += kind_bonus[record[E_KIND]]
+    return bound
+
+
+# A hit: [words matched, sort value, kind order, title, id, entry position, reached number (-1: none)]
 def comes_before(a, b):
-    """Result order: more words matched, higher score, materials first, then title and id."""
-    if a["matched"] != b["matched"]:
-        return a["matched"] > b["matched"]
-    if a["sort"] != b["sort"]:
-        return a["sort"] > b["sort"]
-    if a["order"] != b["order"]:
-        return a["order"] < b["order"]
-    if a["title"] != b["title"]:
-        return a["title"] < b["title"]
-    return a["id"] < b["id"]
+    """Result order: more words matched, higher sort value, materials first, title, id, position."""
+    if a[0] != b[0]:
+        return a[0] > b[0]
+    if a[1] != b[1]:
+        return a[1] > b[1]
+    if a[2] != b[2]:
+        return a[2] < b[2]
+    if a[3] != b[3]:
+        return a[3] < b[3]
+    if a[4] != b[4]:
+        return a[4] < b[4]
+    return a[5] < b[5]
 
 
 def merge_sort(items):
@@ -641,54 +898,114 @@ def merge_sort(items):
     return out
 
 
+def keep_hit(top, hit, limit):
+    """Add a hit to ``top``, the best ``limit`` hits so far in ``comes_before`` order (limit <= 0:
+    every hit, unsorted). ``comes_before`` is a total order (positions differ), so this keeps
+    exactly the head of the full sort. Returns True when ``top`` is full (holds ``limit`` hits)."""
+    if limit <= 0:
+        top.append(hit)
+        return False
+    size = len(top)
+    if size < limit:
+        top.append(hit)
+        size += 1
+    elif comes_before(hit, top[limit - 1]):
+        top[limit - 1] = hit
+    else:
+        return True
+    i = size - 1
+    while i > 0 and comes_before(top[i], top[i - 1]):
+        swap = top[i - 1]
+        top[i - 1] = top[i]
+        top[i] = swap
+        i -= 1
+    return size == limit
+
+
+
 # ---------------------------------------------------------------------------------------------
 # the query
 
 
-def fact_text(entry, key):
+def fact_text(record, key):
     """ "label text" of a property fact of the entry, or ""."""
-    facts = field_dict(entry, "facts")
-    if key in facts:
-        return facts[key][0] + " " + facts[key][1]
+    for fact in record[E_FACTS]:
+        if fact[0] == key:
+            return fact[1] + " " + fact[2]
     return ""
 
 
-def named_fact(entry, query_words, cache):
+def named_fact(record, query_words, cache):
     """ "label value" of the first property whose label a query word spells (exactly or as a prefix)."""
-    facts = field_dict(entry, "facts")
-    for key in facts.keys():
-        label_words = cached_tokens(cache, facts[key][0])
+    for fact in record[E_FACTS]:
+        label_words = cached_tokens(cache, fact[1])
         for q in query_words:
             for w in label_words:
-                if len(q) >= 3 and token_match(q, w)[0] >= 0.7:
-                    return facts[key][0] + " " + facts[key][1]
+                # exact or prefix (quality 0.7 or more; a typo gives at most 0.45): no fuzzy comparison
+                if len(q) >= 3 and word_match(q, w, False)[0] >= 0.7:
+                    return fact[1] + " " + fact[2]
     return ""
 
 
-def snippet_for(entry, field, filters, query_words, cache):
+def snippet_for(record, field, filters, query_words, cache):
     """The plain text shown under a result: filter values, the matched alias or property, or the summary."""
     parts = []
     for f in filters:
-        text = fact_text(entry, f["property"])
+        text = fact_text(record, f["property"])
         if len(text) > 0:
             parts.append(text)
     if len(parts) > 0:
         return " · ".join(parts)
-    named = named_fact(entry, query_words, cache)
+    named = named_fact(record, query_words, cache)
     if len(named) > 0:
         return named
     if field == "aliases":
-        names = []
-        for alias in field_list(entry, "aliases"):
-            names.append(alias)
-        return "Also known as " + ", ".join(names)
+        return "Also known as " + ", ".join(record[E_ALIASES])
     if field == "class_title":
-        return field_text(entry, "class_title") + " · " + field_text(entry, "summary")
-    return field_text(entry, "summary")
+        return record[E_CLASS] + " · " + record[E_SUMMARY]
+    return record[E_SUMMARY]
 
 
 def new_outcome(query):
     return {"query": query, "results": [], "total": 0, "filters": [], "errors": [], "note": ""}
+
+
+def filter_columns(index, filters):
+    """For each filter, the number of its property's column in index["values"] (-1: none)."""
+    columns = []
+    properties = index["properties"]
+    for f in filters:
+        found = -1
+        for c in range(len(properties)):
+            if properties[c] == f["property"]:
+                found = c
+                break
+        columns.append(found)
+    return columns
+
+
+def filter_value(index, record, filters, columns):
+    """The sort value of a material passing every filter (its first filter's property, negated
+    for < and <=), or None when the entry is no material or fails a filter."""
+    material = record[E_MATERIAL]
+    if material < 0:
+        return None
+    for i in range(len(filters)):
+        if columns[i] < 0:
+            return None
+        value = index["values"][columns[i]][material]
+        if value is None:
+            return None
+        if not passes(value, filters[i]["op"], filters[i]["value"]):
+            return None
+    first = filters[0]
+    sort_value = index["values"][columns[0]][material]
+    if first["op"] == "<" or first["op"] == "<=":
+        sort_value = -sort_value
+    return sort_value
+
+
+# __pragma__ ('kwargs')
 
 
 def search(index, query, limit):
@@ -696,6 +1013,7 @@ def search(index, query, limit):
 
     Returns {"query", "results": [{"id", "title", "url", "kind", "snippet", "score"}], "total",
     "filters": [{"property", "label", "op", "value" (SI), "text"}], "errors": [str], "note": str}.
+    Only the entries the query's words reach are scored (every material when there are only filters).
     """
     outcome = new_outcome(query)
     if query is None:
@@ -728,86 +1046,106 @@ def search(index, query, limit):
     if len(query_words) == 0 and len(filters) == 0:
         outcome["note"] = "Type a material, a designation, a table or a property filter such as iacs > 90."
         return outcome
-    qualities = word_qualities(index["vocabulary"], query_words)
-    gains = word_gains(index, qualities)
-    query_compact = compact(text) if len(filters) == 0 else ""
-    found = []
-    most = 0
-    for position in range(len(index["entries"])):
-        item = index["entries"][position]
-        entry = item["entry"]
-        sort_value = 0.0
-        if len(filters) > 0:
-            if item["kind"] != "material":
+    entries = index["entries"]
+    kinds = index["kinds"]
+    kind_bonus = []
+    kind_orders = []
+    for kind in kinds:
+        kind_bonus.append(KIND_BONUS[kind] if kind in KIND_BONUS else 0.0)
+        kind_orders.append(KIND_ORDER[kind] if kind in KIND_ORDER else 9)
+    columns = filter_columns(index, filters)
+    top = []
+    total = 0
+    if len(query_words) == 0:
+        for position in index["material_positions"]:
+            record = entries[position]
+            sort_value = filter_value(index, record, filters, columns)
+            if sort_value is not None:
+                total += 1
+                keep_hit(top, [0, sort_value, kind_orders[record[E_KIND]], record[E_TITLE], record[E_ID], position, -1],
+                         limit)
+    else:
+        tables = word_qualities(index, query_words)
+        marks = word_marks(index, tables)
+        reached = gather(index, tables)
+        positions = reached[0]
+        gains = reached[1]
+        count = len(positions)
+        words = len(query_words)
+        # with a filter every text word must match; without, the entries matching the most words are shown
+        wanted = words
+        if len(filters) == 0:
+            most = 1 if count > 0 else 0  # every reached entry matches a word
+            if words > 1:
+                for c in range(count):
+                    matched = words_matched(gains, words, c)
+                    if matched > most:
+                        most = matched
+            if most < wanted and count > 0:
+                outcome["note"] = "No entry matches every word; showing the closest matches."
+            wanted = most
+        query_compact = compact(text) if len(filters) == 0 else ""
+        query_text = " ".join(query_words)
+        vocabulary = index["vocabulary"]
+        first_word = query_words[0]
+        text_size = len(query_text)
+        compact_size = len(query_compact)
+        full = False
+        for c in range(count):
+            if words > 1 and words_matched(gains, words, c) != wanted:
                 continue
-            props = field_dict(entry, "props")
-            ok = True
-            for f in filters:
-                if not (f["property"] in props):
-                    ok = False
-                    break
-                if not passes(props[f["property"]], f["op"], f["value"]):
-                    ok = False
-                    break
-            if not ok:
-                continue
-            first = filters[0]
-            sort_value = props[first["property"]]
-            if first["op"] == "<" or first["op"] == "<=":
-                sort_value = -sort_value
-        matched = 0
+            position = positions[c]
+            record = entries[position]
+            if len(filters) > 0:
+                # ordered by the filtered property: the score is worked out for the shown hits only
+                sort_value = filter_value(index, record, filters, columns)
+                if sort_value is None:
+                    continue
+            else:
+                base = word_score(gains, words, c)
+                total += 1
+                # most entries of a large index cannot reach the shown ones: skip their full score
+                if full and score_bound(vocabulary, record, base, first_word, text_size, compact_size,
+                                        kind_bonus) < top[limit - 1][1]:
+                    continue
+                sort_value = score_entry(index, record, base, marks, query_words, query_text, query_compact,
+                                         kind_bonus)
+            if len(filters) > 0:
+                total += 1
+            full = keep_hit(top, [wanted, sort_value, kind_orders[record[E_KIND]], record[E_TITLE], record[E_ID],
+                                  position, c], limit)
+    if limit <= 0:
+        top = merge_sort(top)
+    outcome["total"] = total
+    cache = {}
+    for hit in top:
+        record = entries[hit[5]]
         score = 0.0
         field = ""
-        if len(query_words) > 0:
-            scored = score_entry(item, position, query_words, qualities, gains, query_compact)
-            matched = scored[0]
-            score = scored[1]
-            field = scored[2]
-            if matched == 0:
-                continue
-            if len(filters) == 0:
-                sort_value = score
-        if matched > most:
-            most = matched
-        order = 9
-        if item["kind"] in KIND_ORDER:
-            order = KIND_ORDER[item["kind"]]
-        found.append({"item": item, "matched": matched, "score": score, "sort": sort_value, "field": field,
-                      "order": order, "title": field_text(entry, "title"), "id": field_text(entry, "id")})
-    if len(query_words) > 0 and len(filters) > 0:
-        # with a filter, every text word must match
-        strict = []
-        for hit in found:
-            if hit["matched"] == len(query_words):
-                strict.append(hit)
-        found = strict
-    elif len(query_words) > 0:
-        best = []
-        for hit in found:
-            if hit["matched"] == most:
-                best.append(hit)
-        if most < len(query_words) and len(best) > 0:
-            outcome["note"] = "No entry matches every word; showing the closest matches."
-        found = best
-    ranked = merge_sort(found)
-    outcome["total"] = len(ranked)
-    count = len(ranked)
-    if limit > 0 and limit < count:
-        count = limit
-    cache = {}
-    for i in range(count):
-        hit = ranked[i]
-        entry = hit["item"]["entry"]
-        outcome["results"].append({
-            "id": field_text(entry, "id"), "title": field_text(entry, "title"), "url": field_text(entry, "url"),
-            "kind": field_text(entry, "kind"), "snippet": snippet_for(entry, hit["field"], filters, query_words, cache),
-            "score": hit["score"]})
-    if len(ranked) == 0 and len(outcome["note"]) == 0:
+        if hit[6] >= 0:
+            c = hit[6]
+            field = best_field(reached[1], reached[2], c)
+            score = hit[1]
+            if len(filters) > 0:
+                score = score_entry(index, record, word_score(reached[1], len(query_words), c), marks, query_words,
+                                    query_text, "", kind_bonus)
+        outcome["results"].append(result_of(record, kinds, score, snippet_for(record, field, filters, query_words,
+                                                                              cache)))
+    if total == 0 and len(outcome["note"]) == 0:
         if len(filters) > 0:
             outcome["note"] = "No material matches " + filter_summary(filters) + "."
         else:
             outcome["note"] = "Nothing matches “" + text + "”."
     return outcome
+
+
+# (positional arguments only, as above)
+# __pragma__ ('nokwargs')
+def result_of(record, kinds, score, snippet):
+    """One result as search returns it (a dict made apart: it is the slow part of a result in JS)."""
+    return {"id": record[E_ID], "title": record[E_TITLE], "url": record[E_URL], "kind": kinds[record[E_KIND]],
+            "snippet": snippet, "score": score}
+# __pragma__ ('kwargs')
 
 
 def filter_summary(filters):
