@@ -50,6 +50,12 @@ def test_checker_flags_keywords_into_a_nokwargs_region():
     assert "default argument" in violations("# __pragma__ ('nokwargs')\ndef f(a=1):\n    return a\n", "p.py")[0]
 
 
+def test_checker_flags_loops_in_a_jsiter_region():
+    code = "# __pragma__ ('jsiter')\ndef f(xs):\n    return {'n': len(xs), 'a': 1 in xs}\n# __pragma__ ('nojsiter')\n"
+    assert violations(code, "probe.py") == ["probe.py:3: 'in' in a jsiter region tests JS keys, not Python items"]
+    assert "walks JS keys" in violations("# __pragma__ ('jsiter')\nfor x in y:\n    pass\n", "p.py")[0]
+
+
 def test_checker_accepts_plain_core_code():
     code = ("import math\nfrom conductor_atlas.core.errors import CoreError\n"
             "def area(d):\n    return math.pi * d * d / 4.0\n")

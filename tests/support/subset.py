@@ -177,20 +177,39 @@ class SubsetChecker(ast.NodeVisitor):
         self.generic_visit(node)
 
 
-PRAGMA = re.compile(r"^\s*#\s*__pragma__\s*\(\s*'(nokwargs|kwargs)'\s*\)")
+PRAGMA = re.compile(r"^\s*#\s*__pragma__\s*\(\s*'(\w+)'\s*\)")
 
 
-def nokwargs_lines(source: str) -> set[int]:
-    """Line numbers inside ``# __pragma__ ('nokwargs')`` ... ``# __pragma__ ('kwargs')`` regions."""
+def pragma_lines(source: str, start: str, end: str) -> set[int]:
+    """Line numbers inside ``# __pragma__ ('<start>')`` ... ``# __pragma__ ('<end>')`` regions."""
     inside = False
     lines = set()
     for number, line in enumerate(source.splitlines(), start=1):
         found = PRAGMA.match(line)
-        if found:
-            inside = found.group(1) == "nokwargs"
+        if found and found.group(1) in (start, end):
+            inside = found.group(1) == start
         elif inside:
             lines.add(number)
     return lines
+
+
+def nokwargs_lines(source: str) -> set[int]:
+    return pragma_lines(source, "nokwargs", "kwargs")
+
+
+def jsiter_violations(tree: ast.AST, source: str, filename: str) -> list[str]:
+    """In a jsiter region a dict literal is a plain JS object and ``for``/``in`` walk JS keys (list
+    indexes as text): only dict literals may be there, no loops, comprehensions or ``in`` tests."""
+    region = pragma_lines(source, "jsiter", "nojsiter")
+    found = []
+    for node in ast.walk(tree):
+        if getattr(node, "lineno", 0) not in region:
+            continue
+        if isinstance(node, (ast.For, ast.ListComp, ast.DictComp, ast.SetComp, ast.GeneratorExp)):
+            found.append(f"{filename}:{node.lineno}: a loop in a jsiter region walks JS keys, not Python items")
+        elif isinstance(node, ast.Compare) and any(isinstance(op, (ast.In, ast.NotIn)) for op in node.ops):
+            found.append(f"{filename}:{node.lineno}: 'in' in a jsiter region tests JS keys, not Python items")
+    return found
 
 
 def nokwargs_violations(tree: ast.AST, source: str, filename: str) -> list[str]:
@@ -215,4 +234,4 @@ def violations(source: str, filename: str) -> list[str]:
     checker = SubsetChecker(filename)
     tree = ast.parse(source, filename=filename)
     checker.visit(tree)
-    return checker.found + nokwargs_violations(tree, source, filename)
+    return checker.found + nokwargs_violations(tree, source, filename) + jsiter_violations(tree, source, filename)

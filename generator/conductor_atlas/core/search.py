@@ -82,7 +82,7 @@ E_URL = 3
 E_SUMMARY = 4
 E_CLASS = 5
 E_ALIASES = 6
-E_FACTS = 7  # [[property key, label, text as the card shows it], ...]
+E_FACTS = 7  # [[property key, label number (in "labels"), text as the card shows it], ...]
 E_EXACT = 8  # the lengths of the compact id, title and aliases
 E_TITLE_WORDS = 9  # the title's distinct words as vocabulary numbers
 E_MATERIAL = 10  # the entry's number among the materials (its place in each "values" column), or -1
@@ -365,7 +365,11 @@ def prepare_index(entries):
 
     Only lists, strings, numbers, booleans and None below the top level, so the browser uses the
     parsed JSON as it is (no preparation, no dicts to make):
-    {"format", "entries": [record (E_*)], "kinds": [kind], "vocabulary": [word],
+    {"format", "entries": [record (E_*)], "kinds": [kind], "labels": [property label],
+     "label_words": [its words, per label],
+     "entry_kinds", "title_first", "key_sizes": per entry, its kind number, the vocabulary number of
+     its title's first word (-1: none) and the key_size_bit of each of its exact keys, or-ed
+     (flat lists of numbers: the score bound reads them for every reached entry), "vocabulary": [word],
      "letters": [letter_mask of each word], "postings": [[code] per word],
      "material_positions": [entry position of each material],
      "properties": [the FILTERS keys, then any other key of the entries' props],
@@ -376,6 +380,12 @@ def prepare_index(entries):
     records = []
     kinds = []
     kind_numbers = {}
+    labels = []
+    label_numbers = {}
+    label_words = []
+    entry_kinds = []
+    title_first = []
+    key_sizes = []
     vocabulary = []
     numbers = {}
     postings = []
@@ -413,11 +423,23 @@ def prepare_index(entries):
         for word in record[E_TITLE_WORDS]:
             title_numbers.append(numbers[word])
         record[E_TITLE_WORDS] = title_numbers
+        title_first.append(title_numbers[0] if len(title_numbers) > 0 else -1)
+        sizes = 0
+        for size in record[E_EXACT]:
+            sizes = sizes | key_size_bit(size)
+        key_sizes.append(sizes)
         kind = record[E_KIND]
         if not (kind in kind_numbers):
             kind_numbers[kind] = len(kinds)
             kinds.append(kind)
         record[E_KIND] = kind_numbers[kind]
+        entry_kinds.append(record[E_KIND])
+        for fact in record[E_FACTS]:
+            if not (fact[1] in label_numbers):
+                label_numbers[fact[1]] = len(labels)
+                labels.append(fact[1])
+                label_words.append(cached_tokens(cache, fact[1]))
+            fact[1] = label_numbers[fact[1]]
         if kind == "material":
             record[E_MATERIAL] = len(materials)
             materials.append(position)
@@ -431,7 +453,9 @@ def prepare_index(entries):
     letters = []
     for word in vocabulary:
         letters.append(letter_mask(word))
-    return {"format": INDEX_FORMAT, "entries": records, "kinds": kinds, "vocabulary": vocabulary, "letters": letters,
+    return {"format": INDEX_FORMAT, "entries": records, "kinds": kinds, "labels": labels, "label_words": label_words,
+            "entry_kinds": entry_kinds,
+            "title_first": title_first, "key_sizes": key_sizes, "vocabulary": vocabulary, "letters": letters,
             "postings": postings, "material_positions": materials, "properties": properties, "values": values}
 
 
@@ -801,11 +825,9 @@ def may_start_title(vocabulary, record, first_word):
     return len(title_words) > 0 and vocabulary[title_words[0]].startswith(first_word)
 
 
-def has_key_length(record, size):
-    for key_size in record[E_EXACT]:
-        if key_size == size:
-            return True
-    return False
+def key_size_bit(size):
+    """A bit for a key of ``size`` characters (sizes 30 apart share one: a bound needs no more)."""
+    return 1 << (size % 30)
 
 
 def score_entry(index, record, base, marks, query_words, query_text, query_compact, kind_bonus):
@@ -839,20 +861,23 @@ def score_entry(index, record, base, marks, query_words, query_text, query_compa
     return score
 
 
-def score_bound(vocabulary, record, base, first_word, text_size, compact_size, kind_bonus):
-    """A cheap upper bound of ``score_entry``: each bonus that is possible at all, added in full
-    (``text_size`` and ``compact_size``: the lengths of the query's words joined and compacted).
+def score_bound(index, position, base, size_bit, starts, kind_bonus):
+    """A cheap upper bound of ``score_entry`` from the index's flat per-entry lists: each bonus
+    that is possible at all, added in full. ``size_bit``: key_size_bit of the compacted query (0:
+    no exact bonus); ``starts``: per vocabulary word, whether it starts with the first query word
+    (empty: no title bonus).
 
     The same additions in the same order, each at least as large, so rounding keeps it an upper bound.
     """
     bound = base
-    if compact_size > 0 and has_key_length(record, compact_size):
+    if size_bit != 0 and (index["key_sizes"][position] & size_bit) != 0:
         bound += 100.0
-    if text_size >= 2 and may_start_title(vocabulary, record, first_word):
+    first = index["title_first"][position]
+    if first >= 0 and len(starts) > 0 and starts[first]:
         bound += 20.0
     bound += 3.0
     bound += 1.0
-    bound += kind_bonus[record[E_KIND]]
+    bound += kind_bonus[index["entry_kinds"][position]]
     return bound
 
 
@@ -927,36 +952,36 @@ def keep_hit(top, hit, limit):
 # the query
 
 
-def fact_text(record, key):
+def fact_text(index, record, key):
     """ "label text" of a property fact of the entry, or ""."""
     for fact in record[E_FACTS]:
         if fact[0] == key:
-            return fact[1] + " " + fact[2]
+            return index["labels"][fact[1]] + " " + fact[2]
     return ""
 
 
-def named_fact(record, query_words, cache):
+def named_fact(index, record, query_words):
     """ "label value" of the first property whose label a query word spells (exactly or as a prefix)."""
     for fact in record[E_FACTS]:
-        label_words = cached_tokens(cache, fact[1])
+        label_words = index["label_words"][fact[1]]
         for q in query_words:
             for w in label_words:
                 # exact or prefix (quality 0.7 or more; a typo gives at most 0.45): no fuzzy comparison
                 if len(q) >= 3 and word_match(q, w, False)[0] >= 0.7:
-                    return fact[1] + " " + fact[2]
+                    return index["labels"][fact[1]] + " " + fact[2]
     return ""
 
 
-def snippet_for(record, field, filters, query_words, cache):
+def snippet_for(index, record, field, filters, query_words):
     """The plain text shown under a result: filter values, the matched alias or property, or the summary."""
     parts = []
     for f in filters:
-        text = fact_text(record, f["property"])
+        text = fact_text(index, record, f["property"])
         if len(text) > 0:
             parts.append(text)
     if len(parts) > 0:
         return " · ".join(parts)
-    named = named_fact(record, query_words, cache)
+    named = named_fact(index, record, query_words)
     if len(named) > 0:
         return named
     if field == "aliases":
@@ -1086,38 +1111,40 @@ def search(index, query, limit):
             wanted = most
         query_compact = compact(text) if len(filters) == 0 else ""
         query_text = " ".join(query_words)
-        vocabulary = index["vocabulary"]
-        first_word = query_words[0]
-        text_size = len(query_text)
-        compact_size = len(query_compact)
+        filtered = len(filters) > 0
+        # for the score bound: the exact bonus needs a key as long as the compacted query, the title
+        # bonus a title whose first word starts with the first query word
+        size_bit = key_size_bit(len(query_compact)) if len(query_compact) > 0 else 0
+        starts = []
+        if len(query_text) >= 2:
+            for word in index["vocabulary"]:
+                starts.append(word.startswith(query_words[0]))
         full = False
         for c in range(count):
             if words > 1 and words_matched(gains, words, c) != wanted:
                 continue
             position = positions[c]
-            record = entries[position]
-            if len(filters) > 0:
+            if filtered:
                 # ordered by the filtered property: the score is worked out for the shown hits only
+                record = entries[position]
                 sort_value = filter_value(index, record, filters, columns)
                 if sort_value is None:
                     continue
+                total += 1
             else:
                 base = word_score(gains, words, c)
                 total += 1
                 # most entries of a large index cannot reach the shown ones: skip their full score
-                if full and score_bound(vocabulary, record, base, first_word, text_size, compact_size,
-                                        kind_bonus) < top[limit - 1][1]:
+                if full and score_bound(index, position, base, size_bit, starts, kind_bonus) < top[limit - 1][1]:
                     continue
+                record = entries[position]
                 sort_value = score_entry(index, record, base, marks, query_words, query_text, query_compact,
                                          kind_bonus)
-            if len(filters) > 0:
-                total += 1
             full = keep_hit(top, [wanted, sort_value, kind_orders[record[E_KIND]], record[E_TITLE], record[E_ID],
                                   position, c], limit)
     if limit <= 0:
         top = merge_sort(top)
     outcome["total"] = total
-    cache = {}
     for hit in top:
         record = entries[hit[5]]
         score = 0.0
@@ -1129,8 +1156,8 @@ def search(index, query, limit):
             if len(filters) > 0:
                 score = score_entry(index, record, word_score(reached[1], len(query_words), c), marks, query_words,
                                     query_text, "", kind_bonus)
-        outcome["results"].append(result_of(record, kinds, score, snippet_for(record, field, filters, query_words,
-                                                                              cache)))
+        snippet = snippet_for(index, record, field, filters, query_words)
+        outcome["results"].append(result_of(record, kinds, score, snippet))
     if total == 0 and len(outcome["note"]) == 0:
         if len(filters) > 0:
             outcome["note"] = "No material matches " + filter_summary(filters) + "."
@@ -1141,10 +1168,14 @@ def search(index, query, limit):
 
 # (positional arguments only, as above)
 # __pragma__ ('nokwargs')
+# A result is a leaf the page only reads: in JS a plain object (the jsiter region), not a Transcrypt
+# dict, whose eighteen hidden methods cost more to attach than the rest of a result to find.
+# __pragma__ ('jsiter')
 def result_of(record, kinds, score, snippet):
-    """One result as search returns it (a dict made apart: it is the slow part of a result in JS)."""
+    """One result as search returns it: {"id", "title", "url", "kind", "snippet", "score"}."""
     return {"id": record[E_ID], "title": record[E_TITLE], "url": record[E_URL], "kind": kinds[record[E_KIND]],
             "snippet": snippet, "score": score}
+# __pragma__ ('nojsiter')
 # __pragma__ ('kwargs')
 
 
