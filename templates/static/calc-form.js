@@ -43,56 +43,86 @@ function writeQuery(form) {
   window.history.replaceState(null, '', url);
 }
 
-function show(form, outcome) {
+// The page parts one form writes, found once: a calculator update then only compares and writes.
+function viewOf(form) {
   const section = form.closest('section');
+  const fields = fieldsOf(form).map((input) => ({
+    input, name: input.name, visible: input.type !== 'hidden',
+    slot: document.getElementById(input.id + '-error'), message: null}));
+  const cells = Array.from(section.querySelectorAll('[data-result]')).map((cell) => ({
+    cell, name: cell.dataset.result, text: null, value: null}));
+  return {
+    form, fields, cells, state: null, general: null, warnings: null, model: null, sources: null,
+    problemsNode: section.querySelector('.calc-problems'),
+    warningsNode: section.querySelector('.calc-warnings'),
+    modelNode: section.querySelector('[data-model]'),
+    sourcesNode: section.querySelector('[data-sources]'),
+  };
+}
+
+const own = (object, key) => Object.prototype.hasOwnProperty.call(object, key);
+
+// Write only what differs from the last update: most of a form's results and messages stay the
+// same while one field is typed in, and every DOM write costs more than the comparison.
+function show(view, outcome) {
   const errors = outcome.errors;
-  for (const input of fieldsOf(form)) {
-    const slot = document.getElementById(input.id + '-error');
-    const message = Object.prototype.hasOwnProperty.call(errors, input.name) ? errors[input.name] : '';
-    if (slot) slot.textContent = message;
-    if (message) input.setAttribute('aria-invalid', 'true'); else input.removeAttribute('aria-invalid');
+  const general = [];
+  const named = new Set();
+  for (const field of view.fields) {
+    if (!field.visible) continue;
+    named.add(field.name);
+    const message = own(errors, field.name) ? errors[field.name] : '';
+    if (message === field.message) continue;
+    field.message = message;
+    if (field.slot) field.slot.textContent = message;
+    if (message) field.input.setAttribute('aria-invalid', 'true'); else field.input.removeAttribute('aria-invalid');
   }
-  for (const cell of section.querySelectorAll('[data-result]')) {
-    const name = cell.dataset.result;
-    const result = Object.prototype.hasOwnProperty.call(outcome.results, name) ? outcome.results[name] : null;
-    if (result && Number.isFinite(result.value)) {
-      cell.textContent = result.text;
-      cell.dataset.value = String(result.value);
-    } else {
-      cell.textContent = '—';
-      delete cell.dataset.value;
+  for (const key of Object.keys(errors)) if (!named.has(key)) general.push(key + ': ' + errors[key]);
+  for (const entry of view.cells) {
+    const result = own(outcome.results, entry.name) ? outcome.results[entry.name] : null;
+    const shown = result && Number.isFinite(result.value);
+    const text = shown ? result.text : '—';
+    const value = shown ? String(result.value) : null;
+    if (text !== entry.text) { entry.cell.textContent = text; entry.text = text; }
+    if (value !== entry.value) {
+      if (value === null) delete entry.cell.dataset.value; else entry.cell.dataset.value = value;
+      entry.value = value;
     }
   }
-  const shown = new Set(visibleFields(form).map((input) => input.name));
-  const general = Object.keys(errors).filter((field) => !shown.has(field)).map((field) => field + ': ' + errors[field]);
-  const problems = section.querySelector('.calc-problems');
-  if (problems) problems.textContent = general.join(' · ');
-  const list = section.querySelector('.calc-warnings');
-  if (list) {
-    list.replaceChildren();
+  const problems = general.join(' · ');
+  if (view.problemsNode && problems !== view.general) view.problemsNode.textContent = problems;
+  view.general = problems;
+  const warnings = outcome.warnings.join('\u0000');
+  if (view.warningsNode && warnings !== view.warnings) {
+    view.warningsNode.replaceChildren();
     for (const text of outcome.warnings) {
       const item = document.createElement('li');
       item.textContent = text;
-      list.appendChild(item);
+      view.warningsNode.appendChild(item);
     }
   }
-  const model = section.querySelector('[data-model]');
-  if (model) model.textContent = outcome.model ? 'Model: ' + outcome.model : '';
-  const sources = section.querySelector('[data-sources]');
-  if (sources) sources.textContent = outcome.sources && outcome.sources.length ? 'Sources: ' + outcome.sources.join(', ') : '';
+  view.warnings = warnings;
+  const model = outcome.model ? 'Model: ' + outcome.model : '';
+  if (view.modelNode && model !== view.model) view.modelNode.textContent = model;
+  view.model = model;
+  const sources = outcome.sources && outcome.sources.length ? 'Sources: ' + outcome.sources.join(', ') : '';
+  if (view.sourcesNode && sources !== view.sources) view.sourcesNode.textContent = sources;
+  view.sources = sources;
+  const state = Object.keys(errors).length ? 'error' : 'ok';
+  if (state !== view.state) view.form.dataset.state = state;
+  view.state = state;
 }
 
-function run(form, catalogue) {
+function run(view, catalogue) {
   const inputs = {};
-  for (const input of fieldsOf(form)) inputs[input.name] = input.value;
+  for (const field of view.fields) inputs[field.name] = field.input.value;
   let outcome;
   try {
-    outcome = calculate(form.dataset.calculator, dict(inputs), catalogue);
+    outcome = calculate(view.form.dataset.calculator, dict(inputs), catalogue);
   } catch (problem) {
     outcome = {results: {}, warnings: ['The calculator hit an internal problem: ' + String(problem && problem.message || problem)], errors: {}};
   }
-  show(form, outcome);
-  form.dataset.state = Object.keys(outcome.errors).length ? 'error' : 'ok';
+  show(view, outcome);
 }
 
 // Start every calculator form of the page. `calculateWith(name, inputs, catalogue)` is the core's
@@ -107,13 +137,22 @@ export function start(calculateWith, makeDict) {
   for (const form of document.querySelectorAll('form[data-calculator]')) {
     const catalogue = readCatalogue(form);
     fillFromQuery(form);
-    // The address follows the inputs, but not on every keystroke: replaceState is costly on tablets.
-    let pending = 0;
-    const remember = () => { clearTimeout(pending); pending = setTimeout(() => writeQuery(form), 250); };
-    form.addEventListener('input', () => { run(form, catalogue); remember(); });
-    form.addEventListener('change', () => { run(form, catalogue); clearTimeout(pending); writeQuery(form); });
+    const view = viewOf(form);
+    // The address follows the inputs, 250 ms after the last keystroke (replaceState is costly on
+    // tablets). A keystroke only moves the deadline; the one timer re-arms itself until it passes.
+    let timer = 0;
+    let due = 0;
+    const flush = () => {
+      const wait = due - performance.now();
+      if (wait > 1) { timer = setTimeout(flush, wait); return; }
+      timer = 0;
+      writeQuery(form);
+    };
+    const remember = () => { due = performance.now() + 250; if (!timer) timer = setTimeout(flush, 250); };
+    form.addEventListener('input', () => { run(view, catalogue); remember(); });
+    form.addEventListener('change', () => { run(view, catalogue); clearTimeout(timer); timer = 0; writeQuery(form); });
     form.addEventListener('submit', (event) => event.preventDefault());
-    run(form, catalogue);
+    run(view, catalogue);
   }
   document.documentElement.classList.add('calc-ready');
 }

@@ -33,6 +33,35 @@ def unit_cases():
                        ("90 °C", "temperature"), ("−40 °F", "temperature"), ("1.72 µΩ·cm", "resistivity"),
                        ("35 mm²", "area"), ("1 Mohm", "resistance"), ("3 %", "ratio"), ("0.5", "ratio")]:
         cases.append(("conductor_atlas.core.units", "parse_quantity", [text, kind, "field"]))
+    cases.extend(scanning_cases())
+    return cases
+
+
+# Texts at every branch of the unit parser's hand-written scanners (units.number_end,
+# needs_cleaning, has_lookalikes, has_space): both runtimes must read them alike.
+SCANNING_TEXTS = [
+    "5", "+5", "-5", "+", "-", ".", ",", ".5", ",5", "5.", "5,", "5.5.5", "5,5.5", "5..5", "1e", "1e5", "1E+5",
+    "1e-", "1e+x", "1.e3", ".e3", "-.5e-3 mm", "2,5mm", "2 ,5 mm", "5 .5 mm", "5\u00a0mm", "5\u202fmm",
+    "5\u2009mm", "5\u3000mm", "5\u1680mm", "5\u205fmm", "5\u200bmm", "5\u180emm", "5\tmm", "5\nmm",
+    "5\rmm", "5\u2028mm", "5\u2029mm", "5\x1cmm", "5\x85mm", "5\x00mm", "5\x7fmm", "\U0001F600 5 mm",
+    "5 \U0001F600", "5 mm\U0001F600", "−40 °F", "5 µΩ·cm", "35 mm^2", "35 mm²", "1 m^3", "20 deg C",
+    "2.5 sq mm", "250 kcm", "10 ohms", "1 W / ( m * K )", "1 A/ mm2", "3 ppm / K", "  7  ", "", " ",
+]
+
+
+def scanning_cases():
+    from conductor_atlas.core.units import normalise_text
+    cases = []
+    for text in SCANNING_TEXTS:
+        cases.append(("conductor_atlas.core.units", "portable_text", [text]))
+        cases.append(("conductor_atlas.core.units", "normalise_text", [text]))
+        cases.append(("conductor_atlas.core.units", "parse_quantity", [text, "length", "f"]))
+        # parse_number and normalise_unit only ever see normalised text (raw control characters
+        # are read differently by the two runtimes' patterns, which is why portable_text exists)
+        cleaned = normalise_text(text)
+        cases.append(("conductor_atlas.core.units", "parse_number", [cleaned, "f"]))
+        cases.append(("conductor_atlas.core.units", "normalise_unit", [cleaned]))
+        cases.append(("conductor_atlas.core.units", "normalise_unit", [cleaned.lstrip("+-.,0123456789eE")]))
     return cases
 
 
@@ -104,6 +133,10 @@ def calculator_cases():
     cases.append(("conductor_atlas.core.calculators", "calculate", ["nonsense", {}, catalogue]))
     for text in ("Cu", "cu", " IACS ", "annealed copper", "Standard annealed copper", "alu", "", "Xx"):
         cases.append(("conductor_atlas.core.lookup", "find_material", [catalogue, text, "material"]))
+    # the pruned nearest-name search: unknown names typed a keystroke at a time, several counts
+    for text in ("1", "13", "135", "1485.001", "cooper", "alumin", "c1720", "zzzzzzzzzzzzzzzz", "  ni ", "ÅÄ"):
+        for count in (0, 1, 5, 12):
+            cases.append(("conductor_atlas.core.lookup", "nearest_names", [catalogue, text, count]))
     cases.extend(new_calculator_cases(catalogue))
     return cases
 

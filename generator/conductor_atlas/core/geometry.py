@@ -120,6 +120,12 @@ def usable_area(area, field):
     return area
 
 
+# The last text parse_size read for each field and what it gave: [text, size record or None,
+# error message or "", field of the error], as units.LAST_PARSED (one entry per field, speed
+# only). Callers only read the record, so handing out the same one again is safe.
+LAST_SIZE = {}
+
+
 def parse_size(text, field="size"):
     """Parse a conductor size (see module docstring) into a size record with SI values.
 
@@ -127,7 +133,25 @@ def parse_size(text, field="size"):
     """
     if text is None or len(str(text).strip()) == 0:
         raise CoreError("is empty: enter a size (e.g. 2.5 mm², 12 AWG, d 1.6 mm, 40 x 5 mm)", field)
-    raw = normalise_text(str(text))
+    typed = str(text)
+    if field in LAST_SIZE:
+        last = LAST_SIZE[field]
+        if last[0] == typed:
+            if len(last[2]) > 0:
+                raise CoreError(last[2], last[3])
+            return last[1]
+    try:
+        size = size_from_text(typed, field)
+    except CoreError as problem:
+        LAST_SIZE[field] = [typed, None, problem.message, problem.field]
+        raise problem
+    LAST_SIZE[field] = [typed, size, "", field]
+    return size
+
+
+def size_from_text(text, field):
+    """parse_size without the memo (``text`` is a non-empty str)."""
+    raw = normalise_text(text)
     compact = raw.strip()
     awg = AWG_FIRST.match(compact)
     if awg is None:

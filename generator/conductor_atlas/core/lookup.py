@@ -31,13 +31,16 @@ def fold(text):
 
 def edit_distance(a, b):
     """Levenshtein distance between two short strings (insert, delete, substitute cost 1)."""
+    na = len(a)
+    nb = len(b)
     previous = []
-    for j in range(len(b) + 1):
+    for j in range(nb + 1):
         previous.append(j)
-    for i in range(1, len(a) + 1):
+    for i in range(1, na + 1):
         current = [i]
-        for j in range(1, len(b) + 1):
-            cost = 0 if a[i - 1] == b[j - 1] else 1
+        ca = a[i - 1]
+        for j in range(1, nb + 1):
+            cost = 0 if ca == b[j - 1] else 1
             best = previous[j] + 1
             if current[j - 1] + 1 < best:
                 best = current[j - 1] + 1
@@ -45,28 +48,109 @@ def edit_distance(a, b):
                 best = previous[j - 1] + cost
             current.append(best)
         previous = current
-    return previous[len(b)]
+    return previous[nb]
+
+
+def edit_distance_within(a, b, limit):
+    """edit_distance(a, b) when that is at most ``limit``, else any number above ``limit``.
+
+    Stops as soon as a whole row of the table exceeds ``limit`` (the distance only grows from a
+    row's smallest entry) or when the lengths alone differ by more.
+    """
+    na = len(a)
+    nb = len(b)
+    if na - nb > limit or nb - na > limit:
+        return limit + 1
+    previous = []
+    for j in range(nb + 1):
+        previous.append(j)
+    for i in range(1, na + 1):
+        current = [i]
+        smallest = i
+        ca = a[i - 1]
+        for j in range(1, nb + 1):
+            cost = 0 if ca == b[j - 1] else 1
+            best = previous[j] + 1
+            if current[j - 1] + 1 < best:
+                best = current[j - 1] + 1
+            if previous[j - 1] + cost < best:
+                best = previous[j - 1] + cost
+            current.append(best)
+            if best < smallest:
+                smallest = best
+        if smallest > limit:
+            return limit + 1
+        previous = current
+    return previous[nb]
+
+
+# A limit above any distance between an id or alias and typed text (no pruning yet)
+NO_LIMIT = 1000000
+
+
+def add_at_distance(found, distance, name, needed):
+    """Record ``name`` at ``distance`` in ``found`` = {"buckets": [names by distance], "best": {name:
+    smallest distance}, "counts": [distinct names by best distance], "limit": int}.
+
+    "limit" becomes the ``needed``-th smallest best distance among the distinct names seen
+    (NO_LIMIT until there are that many): every name of the final answer is at most that far
+    from the text, so a farther candidate can be skipped without changing the answer.
+    """
+    buckets = found["buckets"]
+    counts = found["counts"]
+    best = found["best"]
+    while len(buckets) <= distance:
+        buckets.append([])
+        counts.append(0)
+    buckets[distance].append(name)
+    if name in best:
+        before = best[name]
+        if distance >= before:
+            return
+        counts[before] -= 1
+    best[name] = distance
+    counts[distance] += 1
+    total = 0
+    for d in range(len(counts)):
+        total += counts[d]
+        if total >= needed:
+            found["limit"] = d
+            return
 
 
 def nearest_names(catalogue, text, count):
-    """The ``count`` ids/aliases closest to ``text`` by edit distance (ties by name)."""
+    """The ``count`` ids/aliases closest to ``text`` by edit distance (ties by name).
+
+    The same order as sorting every id and alias by (distance, name), but names are grouped by
+    distance, only the groups needed are sorted, and candidates too far to matter are cut short
+    (edit_distance_within): an unknown name is typed on every keystroke of a material field.
+    """
     wanted = fold(text)
-    scored = []
+    needed = count
+    if needed < 1:
+        needed = 1  # the answer holds at least one name
+    found = {"buckets": [], "best": {}, "counts": [], "limit": NO_LIMIT}
     for material_id in catalogue["materials"].keys():
-        scored.append([edit_distance(wanted, material_id), material_id])
+        d = edit_distance_within(wanted, material_id, found["limit"])
+        if d <= found["limit"]:
+            add_at_distance(found, d, material_id, needed)
+    display = catalogue["display_aliases"]
     for alias in catalogue["aliases"].keys():
-        scored.append([edit_distance(wanted, alias), catalogue["display_aliases"][alias]])
-    scored.sort(key=lambda pair: str(1000 + pair[0]) + pair[1])
+        d = edit_distance_within(wanted, alias, found["limit"])
+        if d <= found["limit"]:
+            add_at_distance(found, d, display[alias], needed)
     names = []
-    for pair in scored:
-        seen = False
-        for n in names:
-            if n == pair[1]:
-                seen = True
-        if not seen:
-            names.append(pair[1])
-        if len(names) >= count:
-            break
+    for bucket in found["buckets"]:
+        bucket.sort()
+        for name in bucket:
+            seen = False
+            for n in names:
+                if n == name:
+                    seen = True
+            if not seen:
+                names.append(name)
+            if len(names) >= count:
+                return names
     return names
 
 

@@ -149,15 +149,41 @@ SPACES = re.compile(r"\s+")
 SECOND_SEPARATOR = re.compile(r"^[.,][0-9]")
 
 
+def needs_cleaning(text):
+    """True when ``text`` holds a character portable_text removes or replaces: a control character
+    (tab included, so its removal and stripping stay with the patterns), DEL-U+009F, U+FEFF, or a
+    line break (U+2028, U+2029). Most typed text holds none, and a loop over it is far cheaper in
+    the browser than Transcrypt's re.sub, which builds a new JS RegExp and match objects per call."""
+    for ch in text:
+        code = ord(ch)
+        if code < 32 or code == 0xFEFF or code == 0x2028 or code == 0x2029:
+            return True
+        if code >= 127 and code <= 159:
+            return True
+    return False
+
+
 def portable_text(text):
     """``text`` without control characters and U+FEFF, line breaks as spaces, stripped: the same
     string in both runtimes (JS regex ``.`` also stops at \\r, U+2028 and U+2029; Python's only at \\n)."""
+    if not needs_cleaning(text):
+        return text.strip()
     return LINE_BREAKS.sub(" ", UNPORTABLE_PATTERN.sub("", text)).strip()
+
+
+def has_lookalikes(text):
+    """True when ``text`` holds a character normalise_text may replace: anything beyond ASCII, or "^"."""
+    for ch in text:
+        if ord(ch) > 126 or ch == "^":
+            return True
+    return False
 
 
 def normalise_text(text):
     """Unify the look-alike characters people type: unicode minus, micro, ohm, superscripts."""
     out = portable_text(text)
+    if not has_lookalikes(out):
+        return out
     out = out.replace("−", "-").replace("–", "-")
     out = out.replace("µ", "u").replace("μ", "u")
     out = out.replace("Ω", "ohm").replace("Ω", "ohm")
@@ -167,14 +193,25 @@ def normalise_text(text):
     return out
 
 
+def has_space(text):
+    """True when ``text`` may hold a character regex ``\\s`` matches: anything but printable ASCII
+    other than the space. (Without one, the three space patterns of normalise_unit change nothing.)"""
+    for ch in text:
+        code = ord(ch)
+        if code < 33 or code > 126:
+            return True
+    return False
+
+
 def normalise_unit(unit_text):
     """Canonical key for UNITS: no spaces, '*' between factors, lower case, 'ohms' -> 'ohm'."""
     unit = unit_text.strip()
     if unit in CASE_SENSITIVE:
         return CASE_SENSITIVE[unit]
-    unit = SPACED_STAR.sub("*", unit)
-    unit = SPACED_SLASH.sub("/", unit)
-    unit = SPACES.sub("*", unit)
+    if has_space(unit):
+        unit = SPACED_STAR.sub("*", unit)
+        unit = SPACED_SLASH.sub("/", unit)
+        unit = SPACES.sub("*", unit)
     unit = unit.lower()
     unit = unit.replace("ohms", "ohm")
     unit = unit.replace("deg*c", "degc").replace("deg*f", "degf")
@@ -184,18 +221,76 @@ def normalise_unit(unit_text):
     return unit
 
 
+# What regex \s matches in both runtimes among the characters needs_cleaning lets through
+# (tests/core/test_units.py checks the set against Python's re; the differential test against JS).
+SPACE_CHARACTERS = " \u00a0\u1680\u2000\u2001\u2002\u2003\u2004\u2005\u2006\u2007\u2008\u2009\u200a\u202f\u205f\u3000"
+
+
+def is_digit(ch):
+    return ch >= "0" and ch <= "9"
+
+
+def number_end(text):
+    """Where the number NUMBER_PATTERN's group 1 matches at the start of ``text`` ends; 0 for none.
+
+    A scan by hand, because a regex match costs the browser a Transcrypt match object per call.
+    The same greedy choices as the pattern: sign, digits with an optional separator and digits
+    (or a separator and at least one digit), then an exponent only when it has a digit.
+    """
+    n = len(text)
+    i = 0
+    if i < n and (text[i] == "+" or text[i] == "-"):
+        i += 1
+    if i < n and is_digit(text[i]):
+        while i < n and is_digit(text[i]):
+            i += 1
+        if i < n and (text[i] == "." or text[i] == ","):
+            i += 1
+            while i < n and is_digit(text[i]):
+                i += 1
+    elif i + 1 < n and (text[i] == "." or text[i] == ",") and is_digit(text[i + 1]):
+        i += 2
+        while i < n and is_digit(text[i]):
+            i += 1
+    else:
+        return 0
+    if i < n and (text[i] == "e" or text[i] == "E"):
+        j = i + 1
+        if j < n and (text[j] == "+" or text[j] == "-"):
+            j += 1
+        if j < n and is_digit(text[j]):
+            while j < n and is_digit(text[j]):
+                j += 1
+            i = j
+    return i
+
+
 def parse_number(text, field):
     """Parse the leading number of ``text``; return [value, rest_of_text].
 
     A decimal comma is accepted when it is the only separator ("2,5 mm"); a number with both
-    a comma and a point ("1,234.5") is refused as ambiguous rather than guessed.
+    a comma and a point ("1,234.5") is refused as ambiguous rather than guessed. Text with a
+    character needs_cleaning flags (where the runtimes' \\s and . differ) goes through
+    NUMBER_PATTERN itself; any other text through number_end, which matches it the same way.
     """
-    match = NUMBER_PATTERN.match(text)
-    if match is None:
-        raise CoreError("expected a number first, found “" + text + "”", field)
-    number_text = match.group(1)
-    rest = match.group(2)
-    if SECOND_SEPARATOR.match(rest) is not None:
+    if needs_cleaning(text):
+        match = NUMBER_PATTERN.match(text)
+        if match is None:
+            raise CoreError("expected a number first, found “" + text + "”", field)
+        number_text = match.group(1)
+        rest = match.group(2)
+        second = SECOND_SEPARATOR.match(rest) is not None
+    else:
+        end = number_end(text)
+        if end == 0:
+            raise CoreError("expected a number first, found “" + text + "”", field)
+        number_text = text[0:end]
+        start = end
+        while start < len(text) and SPACE_CHARACTERS.find(text[start]) >= 0:
+            start += 1
+        rest = text[start:]
+        second = len(rest) >= 2 and (rest[0] == "." or rest[0] == ",") and is_digit(rest[1])
+    if second:
         raise CoreError("“" + text + "” mixes a decimal comma and a decimal point, or has two separators; "
                         "write it as 1234.5 or 1234,5", field)
     if number_text.find(",") >= 0:
@@ -218,6 +313,13 @@ def known_units(kind):
     return names
 
 
+# The last text parse_quantity read for each (kind, field, default unit) and what it gave:
+# [text, SI value, error message or "", field of the error]. A calculator updates on every
+# keystroke in one field, so the other fields' texts are not parsed again. A text always gives
+# the same result, so this changes speed only; one entry per key, so it never grows with use.
+LAST_PARSED = {}
+
+
 def parse_quantity(text, kind, field="", default_unit=""):
     """Parse "value unit" text into a float in the SI unit of ``kind``.
 
@@ -236,7 +338,26 @@ def parse_quantity(text, kind, field="", default_unit=""):
     """
     if text is None:
         raise CoreError("is empty: enter " + KIND_WORDS[kind], field)
-    cleaned = normalise_text(str(text))
+    typed = str(text)
+    key = kind + "|" + field + "|" + default_unit
+    if key in LAST_PARSED:
+        last = LAST_PARSED[key]
+        if last[0] == typed:
+            if len(last[2]) > 0:
+                raise CoreError(last[2], last[3])
+            return last[1]
+    try:
+        si = quantity_in_si(typed, kind, field, default_unit)
+    except CoreError as problem:
+        LAST_PARSED[key] = [typed, 0.0, problem.message, problem.field]
+        raise problem
+    LAST_PARSED[key] = [typed, si, "", field]
+    return si
+
+
+def quantity_in_si(text, kind, field, default_unit):
+    """parse_quantity without the memo (``text`` is a str)."""
+    cleaned = normalise_text(text)
     if len(cleaned) == 0:
         raise CoreError("is empty: enter " + KIND_WORDS[kind], field)
     parts = parse_number(cleaned, field)
@@ -261,5 +382,5 @@ def parse_quantity(text, kind, field="", default_unit=""):
             + ", but this field needs " + KIND_WORDS[kind], field)
     si = value * entry[1] + entry[2]
     if not (si - si == 0):
-        raise CoreError("“" + str(text) + "” is too large to compute with", field)
+        raise CoreError("“" + text + "” is too large to compute with", field)
     return si
