@@ -12,7 +12,7 @@ import math
 import re
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity, normalise_text
+from conductor_atlas.core.units import parse_quantity, normalise_text, recall_field, remember_field
 
 INCH = 0.0254  # m, exact by definition (1959 international yard and pound agreement)
 
@@ -120,9 +120,8 @@ def usable_area(area, field):
     return area
 
 
-# The last text parse_size read for each field and what it gave: [text, size record or None,
-# error message or "", field of the error], as units.LAST_PARSED (one entry per field, speed
-# only). Callers only read the record, so handing out the same one again is safe.
+# The last text parse_size read for each field and what it gave, kept by units.remember_field
+# as for units.LAST_PARSED (one entry per field, speed only). Callers only read the record, so handing out the same one again is safe.
 LAST_SIZE = {}
 
 
@@ -134,18 +133,15 @@ def parse_size(text, field="size"):
     if text is None or len(str(text).strip()) == 0:
         raise CoreError("is empty: enter a size (e.g. 2.5 mm², 12 AWG, d 1.6 mm, 40 x 5 mm)", field)
     typed = str(text)
-    if field in LAST_SIZE:
-        last = LAST_SIZE[field]
-        if last[0] == typed:
-            if len(last[2]) > 0:
-                raise CoreError(last[2], last[3])
-            return last[1]
+    remembered = recall_field(LAST_SIZE, field, typed)
+    if remembered is not None:
+        return remembered
     try:
         size = size_from_text(typed, field)
     except CoreError as problem:
-        LAST_SIZE[field] = [typed, None, problem.message, problem.field]
+        remember_field(LAST_SIZE, field, typed, None, problem)
         raise problem
-    LAST_SIZE[field] = [typed, size, "", field]
+    remember_field(LAST_SIZE, field, typed, size, None)
     return size
 
 

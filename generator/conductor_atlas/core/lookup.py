@@ -29,28 +29,6 @@ def fold(text):
     return out
 
 
-def edit_distance(a, b):
-    """Levenshtein distance between two short strings (insert, delete, substitute cost 1)."""
-    na = len(a)
-    nb = len(b)
-    previous = []
-    for j in range(nb + 1):
-        previous.append(j)
-    for i in range(1, na + 1):
-        current = [i]
-        ca = a[i - 1]
-        for j in range(1, nb + 1):
-            cost = 0 if ca == b[j - 1] else 1
-            best = previous[j] + 1
-            if current[j - 1] + 1 < best:
-                best = current[j - 1] + 1
-            if previous[j - 1] + cost < best:
-                best = previous[j - 1] + cost
-            current.append(best)
-        previous = current
-    return previous[nb]
-
-
 def edit_distance_within(a, b, limit):
     """edit_distance(a, b) when that is at most ``limit``, else any number above ``limit``.
 
@@ -86,6 +64,11 @@ def edit_distance_within(a, b, limit):
 
 # A limit above any distance between an id or alias and typed text (no pruning yet)
 NO_LIMIT = 1000000
+
+
+def edit_distance(a, b):
+    """Levenshtein distance between two short strings (insert, delete, substitute cost 1)."""
+    return edit_distance_within(a, b, NO_LIMIT)
 
 
 def add_at_distance(found, distance, name, needed):

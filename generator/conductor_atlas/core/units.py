@@ -320,6 +320,27 @@ def known_units(kind):
 LAST_PARSED = {}
 
 
+def recall_field(memo, key, typed):
+    """What ``memo`` (LAST_PARSED, geometry.LAST_SIZE) holds for ``typed`` under ``key``: the
+    remembered value, None when that text is not the one remembered; a remembered problem is
+    raised again as the same CoreError."""
+    if key in memo:
+        last = memo[key]
+        if last[0] == typed:
+            if len(last[2]) > 0:
+                raise CoreError(last[2], last[3])
+            return last[1]
+    return None
+
+
+def remember_field(memo, key, typed, value, problem):
+    """Keep what ``typed`` gave under ``key``: ``value``, or the CoreError ``problem`` (else None)."""
+    if problem is None:
+        memo[key] = [typed, value, "", ""]
+    else:
+        memo[key] = [typed, None, problem.message, problem.field]
+
+
 def parse_quantity(text, kind, field="", default_unit=""):
     """Parse "value unit" text into a float in the SI unit of ``kind``.
 
@@ -340,18 +361,15 @@ def parse_quantity(text, kind, field="", default_unit=""):
         raise CoreError("is empty: enter " + KIND_WORDS[kind], field)
     typed = str(text)
     key = kind + "|" + field + "|" + default_unit
-    if key in LAST_PARSED:
-        last = LAST_PARSED[key]
-        if last[0] == typed:
-            if len(last[2]) > 0:
-                raise CoreError(last[2], last[3])
-            return last[1]
+    remembered = recall_field(LAST_PARSED, key, typed)
+    if remembered is not None:
+        return remembered
     try:
         si = quantity_in_si(typed, kind, field, default_unit)
     except CoreError as problem:
-        LAST_PARSED[key] = [typed, 0.0, problem.message, problem.field]
+        remember_field(LAST_PARSED, key, typed, None, problem)
         raise problem
-    LAST_PARSED[key] = [typed, si, "", field]
+    remember_field(LAST_PARSED, key, typed, si, None)
     return si
 
 
