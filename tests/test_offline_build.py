@@ -107,6 +107,20 @@ def test_evaluation_order_and_live_namespace_match_es_modules(tmp_path):
     assert run_classic(bundle(files, "e.js")) == expected
 
 
+@needs_node
+def test_unused_named_imports_are_left_out_and_used_ones_kept(tmp_path):
+    # "gone" is imported but never mentioned; "kept" is used under another local name; "said" only in a string
+    files = {
+        "e.js": js("import {gone, kept as mine, said} from './m.js';\n"
+                   "globalThis.answer = [mine, 'said'];"),
+        "m.js": js("export var gone = 1;\nexport var kept = 2;\nexport var said = 3;"),
+    }
+    script = bundle(files, "e.js").decode("utf-8")
+    linkage = [line for line in script.split("\n") if line.startswith("const {")]
+    assert linkage == ["const {kept: mine, said} = __ca_bundle_ns[0];"]  # m.js runs first
+    assert run_classic(script.encode("utf-8")) == run_modules(files, "e.js", tmp_path) == [2, "said"]
+
+
 CLASSIC_RUNNER = r"""
 const calls = globalThis.calls, modules = globalThis.coreModules, dict = modules.__runtime__.dict;
 function toPy(value) {
