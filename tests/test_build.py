@@ -71,7 +71,8 @@ def test_publish_replaces_its_own_site(tmp_path):
     assert not (out / "a.html").exists()
     assert (out / "b.html").read_bytes() == b"2"
     assert (out / MARKER).is_file()
-    assert sorted(p.name for p in tmp_path.iterdir() if not p.name.endswith(".lock")) == ["site"]
+    assert sorted(p.name for p in tmp_path.iterdir() if not p.name.endswith(".lock")) == [".site.published.json",
+                                                                                          "site"]
 
 
 def test_publish_clears_leftovers_of_a_killed_build(tmp_path):
@@ -80,4 +81,37 @@ def test_publish_clears_leftovers_of_a_killed_build(tmp_path):
     (tmp_path / ".site.new-99999" / "x").mkdir(parents=True)
     (tmp_path / ".site.old-99999").mkdir()
     publish({"b.html": b"2"}, out)
-    assert sorted(p.name for p in tmp_path.iterdir() if not p.name.endswith(".lock")) == ["site"]
+    assert sorted(p.name for p in tmp_path.iterdir() if not p.name.endswith(".lock")) == [".site.published.json",
+                                                                                          "site"]
+
+
+SITE = {"index.html": b"<p>home</p>", "static/a.js": b"var a = 1;", "materials/x/index.html": b"<p>x</p>"}
+
+
+def test_publishing_the_same_files_again_writes_nothing(tmp_path):
+    out = tmp_path / "site"
+    assert publish(SITE, out).written
+    inode = (out / "index.html").stat().st_ino
+    again = publish(dict(SITE), out)
+    assert again == (out.resolve(), False)
+    assert (out / "index.html").stat().st_ino == inode      # the very same file, not a rewritten copy
+    changed = dict(SITE, **{"index.html": b"<p>home!</p>"})
+    assert publish(changed, out).written
+    assert (out / "index.html").read_bytes() == b"<p>home!</p>"
+
+
+@pytest.mark.parametrize("touch", ["edit", "add", "remove", "record"])
+def test_a_site_touched_by_hand_is_written_again(tmp_path, touch):
+    out = tmp_path / "site"
+    publish(SITE, out)
+    if touch == "edit":      # same size, other bytes, a later modification time
+        (out / "static/a.js").write_bytes(b"var a = 2;")
+    elif touch == "add":
+        (out / "materials/x/notes.txt").write_text("mine")
+    elif touch == "remove":
+        (out / "materials/x/index.html").unlink()
+    else:                    # an unreadable record
+        (tmp_path / ".site.published.json").write_text("{not json")
+    assert publish(SITE, out).written
+    on_disk = {p.relative_to(out).as_posix(): p.read_bytes() for p in out.rglob("*") if p.is_file()}
+    assert on_disk == dict(SITE, **{MARKER: (out / MARKER).read_bytes()})

@@ -86,8 +86,8 @@ def test_racing_publishers_leave_one_whole_site(tmp_path, round_):
     assert winner in published
     assert len(list(out.rglob("*.html"))) == FILES_PER_SITE + 1
     assert (out / MARKER).is_file()
-    # staging and old folders are gone; only the site and its lock file remain
-    assert sorted(p.name for p in tmp_path.iterdir()) == [".site.lock", "site"]
+    # staging and old folders are gone; only the site, its lock file and its publish record remain
+    assert sorted(p.name for p in tmp_path.iterdir()) == [".site.lock", ".site.published.json", "site"]
 
 
 def test_held_lock_refuses_a_build_and_leaves_the_site(tmp_path):

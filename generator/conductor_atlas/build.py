@@ -11,11 +11,11 @@ from dataclasses import dataclass
 from pathlib import Path
 
 from conductor_atlas import __version__
-from conductor_atlas.cache import BuildCache, folder_key
+from conductor_atlas.cache import BuildCache, files_key, folder_key
 from conductor_atlas.derive import derive_material
 from conductor_atlas.load import load_dataset
 from conductor_atlas.model import DataSet, Material
-from conductor_atlas.offline import add_offline_files
+from conductor_atlas.offline import add_offline_files, classic_bundles, scripts_of
 from conductor_atlas.paths import CACHE_DIR, DATA_DIR, STATIC_DIR, TEMPLATES_DIR
 from conductor_atlas.publish import check_replaceable, output_lock, publish
 from conductor_atlas.render import Renderer
@@ -30,6 +30,7 @@ class BuildReport:
     files: int
     bytes: int
     seconds: float
+    written: bool = True   # False: the folder already held exactly this site, nothing was written
 
 
 def data_folders(extra: list[Path] | None = None) -> list[Path]:
@@ -77,7 +78,10 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
             files.update(pending.result())
     else:
         files.update(transpile.result())
-    return add_offline_files(files)  # last: the service worker lists every other file
+    scripts = scripts_of(files)
+    bundles = cache.get("site:classic-bundles", files_key(scripts), lambda: classic_bundles(scripts))
+    return add_offline_files(files, bundles)  # last: the service worker lists every other file
+
 
 
 def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
@@ -92,5 +96,6 @@ def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
             files = assemble(dataset, cache, transpile)
         published = publish(files, folder, lock_held=True)
     cache.prune()
-    return BuildReport(out=published, materials=len(dataset.materials), files=len(files),
-                       bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start)
+    return BuildReport(out=published.folder, materials=len(dataset.materials), files=len(files),
+                       bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start,
+                       written=published.written)

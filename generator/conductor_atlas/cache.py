@@ -93,6 +93,15 @@ def folder_key(folders: list[Path]) -> bytes:
     return digest.digest()
 
 
+def files_key(files: dict[str, bytes]) -> bytes:
+    """SHA-256 over every path, its length and its bytes, in path order: equal file sets, equal keys."""
+    digest = hashlib.sha256()
+    for path in sorted(files):
+        digest.update(path.encode("utf-8") + b"\0" + str(len(files[path])).encode() + b"\0")
+        digest.update(files[path])
+    return digest.digest()
+
+
 class BuildCache:
     """``get(label, key, make)``: the stored value for ``key``, or ``make()`` stored for next time."""
 

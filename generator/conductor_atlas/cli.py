@@ -48,8 +48,9 @@ def build_parser() -> argparse.ArgumentParser:
 def cmd_build(args: argparse.Namespace) -> int:
     from conductor_atlas.build import build
     report = build(args.out, args.data)
+    same = "" if report.written else "; the folder already held this site, nothing was rewritten"
     print(f"Built {report.materials} materials into {report.out} "
-          f"({report.files} files, {report.bytes / 1024:.0f} KiB) in {report.seconds:.2f} s")
+          f"({report.files} files, {report.bytes / 1024:.0f} KiB) in {report.seconds:.2f} s{same}")
     return 0
 
 

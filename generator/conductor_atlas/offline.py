@@ -15,7 +15,6 @@ All URLs are relative, so the site may live under any sub-path. Pure: computes, 
 
 from __future__ import annotations
 
-import hashlib
 import json
 import re
 import struct
@@ -23,6 +22,7 @@ import struct
 import jinja2
 
 from conductor_atlas.bundle import bundle
+from conductor_atlas.cache import files_key
 from conductor_atlas.errors import BuildError
 from conductor_atlas.paths import TEMPLATES_DIR
 
@@ -87,11 +87,7 @@ def manifest(files: dict[str, bytes]) -> bytes:
 
 def cache_version(files: dict[str, bytes]) -> str:
     """A hash of every path and its bytes: equal sites share it, any change gives a new one."""
-    digest = hashlib.sha256()
-    for path in sorted(files):
-        digest.update(path.encode("utf-8") + b"\0" + str(len(files[path])).encode() + b"\0")
-        digest.update(files[path])
-    return digest.hexdigest()[:16]
+    return files_key(files).hex()[:16]
 
 
 def precache_list(files: dict[str, bytes]) -> list[str]:
@@ -107,13 +103,21 @@ def service_worker(files: dict[str, bytes]) -> bytes:
     return text.encode("utf-8")
 
 
-def add_offline_files(files: dict[str, bytes]) -> dict[str, bytes]:
-    """The site plus its classic scripts, manifest and service worker (the worker last: it lists all)."""
+def scripts_of(files: dict[str, bytes]) -> dict[str, bytes]:
+    """The files classic_bundles reads: every .js file (the bundles depend on nothing else)."""
+    return {p: data for p, data in files.items() if p.endswith(".js")}
+
+
+def add_offline_files(files: dict[str, bytes], bundles: dict[str, bytes] | None = None) -> dict[str, bytes]:
+    """The site plus its classic scripts, manifest and service worker (the worker last: it lists all).
+
+    ``bundles``: ``classic_bundles(scripts_of(files))`` when the caller has it already (the build
+    keeps it in its cache, keyed by the scripts' bytes)."""
     for name in (WORKER, MANIFEST):
         if name in files:
             raise BuildError(f"{name} is made by the offline step; another stage also wrote it")
     out = dict(files)
-    out.update(classic_bundles(out))
+    out.update(classic_bundles(scripts_of(files)) if bundles is None else bundles)
     out[MANIFEST] = manifest(out)
     out[WORKER] = service_worker(out)
     return out

@@ -2,20 +2,37 @@
 
 A failed build leaves the previous site untouched; two builds into one folder at once are
 refused by a lock; a folder that is not a Conductor Atlas site is never replaced.
+
+A build whose files are exactly those of the site already there writes nothing: a record beside
+the folder (".<name>.published.json", next to the lock file, so the site itself stays the same
+bytes build after build) keeps a digest of every path and its bytes, and the size and modification
+time of every file as written, so ``site_unchanged`` can tell (one stat per file, no reading) that
+nobody has touched the folder since. Anything else, a file edited, added or removed by hand
+included, is a full rewrite.
 """
 
 from __future__ import annotations
 
 import fcntl
+import json
 import os
 import shutil
 from contextlib import contextmanager
 from pathlib import Path
-from typing import Iterator
+from typing import Iterator, NamedTuple
 
+from conductor_atlas.cache import files_key
 from conductor_atlas.errors import BuildError
 
 MARKER = ".conductor-atlas-site"
+
+
+class Published(NamedTuple):
+    folder: Path     # the site's folder, resolved
+    written: bool    # False: it already held exactly these files, nothing was written
+
+
+MARKER_TEXT = "Built by conductor-atlas; this folder is replaced on each build.\n"
 
 
 def check_replaceable(out: Path) -> None:
@@ -42,8 +59,41 @@ def output_lock(out: Path) -> Iterator[Path]:
         yield out
 
 
-def publish(files: dict[str, bytes], out: Path, lock_held: bool = False) -> Path:
-    """Write ``files`` (relative path -> bytes) as the new site at ``out``, atomically.
+def record_path(out: Path) -> Path:
+    return out.parent / f".{out.name}.published.json"
+
+
+def file_stamps(folder: Path) -> dict[str, list[int]] | None:
+    """relative path -> [size, mtime_ns] of every file under ``folder`` but the marker; None if
+    something there is not a plain file or folder."""
+    stamps = {}
+    for root, dirs, names in os.walk(folder):
+        for name in names:
+            path = os.path.join(root, name)
+            rel = os.path.relpath(path, folder).replace(os.sep, "/")
+            if rel == MARKER:
+                continue
+            info = os.lstat(path)
+            if not os.path.isfile(path) or os.path.islink(path):
+                return None
+            stamps[rel] = [info.st_size, info.st_mtime_ns]
+    return stamps
+
+
+def site_unchanged(files: dict[str, bytes], out: Path, digest: str) -> bool:
+    """True when ``out`` holds exactly ``files``, as the record of the last publish says."""
+    try:
+        record = json.loads(record_path(out).read_text(encoding="utf-8"))
+    except (OSError, UnicodeDecodeError, ValueError):
+        return False
+    if not isinstance(record, dict) or record.get("digest") != digest:
+        return False
+    return record.get("files") == file_stamps(out) and len(record["files"]) == len(files)
+
+
+def publish(files: dict[str, bytes], out: Path, lock_held: bool = False) -> Published:
+    """Write ``files`` (relative path -> bytes) as the new site at ``out``, atomically; nothing is
+    written when ``out`` already holds exactly these files (see ``site_unchanged``).
 
     Takes the output lock itself unless ``lock_held`` (the caller is inside ``output_lock(out)``,
     as ``build`` is from its start, so a second build is refused before it does any work)."""
@@ -53,9 +103,12 @@ def publish(files: dict[str, bytes], out: Path, lock_held: bool = False) -> Path
         return _publish_locked(files, folder)
 
 
-def _publish_locked(files: dict[str, bytes], out: Path) -> Path:
+def _publish_locked(files: dict[str, bytes], out: Path) -> Published:
     """Stage ``files`` beside ``out`` and swap them in; the caller holds the output lock."""
     check_replaceable(out)
+    digest = files_key(files).hex()
+    if site_unchanged(files, out, digest):
+        return Published(out, False)
     # leftovers of a build that was killed mid-publish: safe to remove while we hold the lock
     for stale in out.parent.glob(f".{out.name}.new-*"):
         shutil.rmtree(stale, ignore_errors=True)
@@ -69,14 +122,26 @@ def _publish_locked(files: dict[str, bytes], out: Path) -> Path:
             target = staging / rel
             target.parent.mkdir(parents=True, exist_ok=True)
             target.write_bytes(files[rel])
-        (staging / MARKER).write_text("Built by conductor-atlas; this folder is replaced on each build.\n")
+        (staging / MARKER).write_text(MARKER_TEXT)
     except OSError as exc:
         shutil.rmtree(staging, ignore_errors=True)
         raise BuildError(f"could not write the new site next to {out}: {exc.strerror}") from exc
+    record_path(out).unlink(missing_ok=True)
     old = out.parent / f".{out.name}.old-{os.getpid()}"
     if out.exists():
         os.rename(out, old)
     os.rename(staging, out)
     if old.exists():
         shutil.rmtree(old, ignore_errors=True)
-    return out
+    write_record(out, digest)
+    return Published(out, True)
+
+
+def write_record(out: Path, digest: str) -> None:
+    """Remember what was published at ``out`` (see ``site_unchanged``); a record that cannot be
+    written only costs the next build a full rewrite."""
+    record = {"digest": digest, "files": file_stamps(out)}
+    try:
+        record_path(out).write_text(json.dumps(record, sort_keys=True) + "\n", encoding="utf-8")
+    except OSError:
+        pass
