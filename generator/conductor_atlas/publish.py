@@ -65,18 +65,22 @@ def record_path(out: Path) -> Path:
 
 def file_stamps(folder: Path) -> dict[str, list[int]] | None:
     """relative path -> [size, mtime_ns] of every file under ``folder`` but the marker; None if
-    something there is not a plain file or folder."""
-    stamps = {}
-    for root, dirs, names in os.walk(folder):
-        for name in names:
-            path = os.path.join(root, name)
-            rel = os.path.relpath(path, folder).replace(os.sep, "/")
-            if rel == MARKER:
-                continue
-            info = os.lstat(path)
-            if not os.path.isfile(path) or os.path.islink(path):
-                return None
-            stamps[rel] = [info.st_size, info.st_mtime_ns]
+    something there is not a plain file or folder (a link, a socket …)."""
+    stamps: dict[str, list[int]] = {}
+    pending = [(str(folder), "")]
+    while pending:
+        path, prefix = pending.pop()
+        with os.scandir(path) as entries:
+            for entry in entries:
+                rel = prefix + entry.name
+                if entry.is_dir(follow_symlinks=False):
+                    pending.append((entry.path, rel + "/"))
+                elif entry.is_file(follow_symlinks=False):
+                    if rel != MARKER:
+                        info = entry.stat(follow_symlinks=False)
+                        stamps[rel] = [info.st_size, info.st_mtime_ns]
+                else:
+                    return None
     return stamps
 
 
