@@ -26,7 +26,8 @@ from conductor_atlas.paths import CACHE_DIR, CORE_DIR, PACKAGE_DIR
 FLAGS = ["-b", "-n", "-k"]
 KEEP_TRANSPILED = 3  # older transpiled cores kept besides the current one (0.5 MB each)
 ENTRY = CORE_DIR / "web.py"
-RUNTIME_FILES = ["org.transcrypt.__runtime__.js", "re.js", "re.translate.js", "math.js"]
+RUNTIME_FILES = ["org.transcrypt.__runtime__.js", "math.js"]
+RE_FILES = ["re.js", "re.translate.js"]  # Transcrypt writes these only when a shipped module imports re
 TIMESTAMP_LINE = re.compile(rb"^// Transcrypt'ed from Python, [^\n]*\n")
 
 
@@ -37,8 +38,23 @@ def core_modules() -> list[str]:
     return sorted(n for n in names if n.startswith("conductor_atlas.core."))
 
 
+def imports_re(module: str) -> bool:
+    """True when the core module ``module`` (a dotted name) has ``import re`` or ``from re import``."""
+    tree = ast.parse((CORE_DIR / (module.rsplit(".", 1)[1] + ".py")).read_text(encoding="utf-8"))
+    for node in ast.walk(tree):
+        if isinstance(node, ast.Import) and any(alias.name == "re" for alias in node.names):
+            return True
+        if isinstance(node, ast.ImportFrom) and node.module == "re":
+            return True
+    return False
+
+
 def expected_files() -> list[str]:
-    return sorted([f"{name}.js" for name in core_modules()] + RUNTIME_FILES)
+    modules = core_modules()
+    files = [f"{name}.js" for name in modules] + RUNTIME_FILES
+    if any(imports_re(name) for name in modules + ["conductor_atlas.core.web"]):
+        files.extend(RE_FILES)
+    return sorted(files)
 
 
 def transcrypt_version() -> str:

@@ -6,13 +6,15 @@ Size text accepted by ``parse_size``:
     "12 AWG", "AWG 12", "4/0 AWG"      an AWG gauge (solid round wire, ASTM B258 nominal diameter)
     "d 2.5 mm", "ø2.5 mm", "dia 2.5 mm"  a round wire by diameter
     "40 x 5 mm", "40x5 mm"             a rectangular bar, width x thickness (one unit for both)
+
+The text is read by character scans (no ``re``: see conductor_atlas.core.units), each giving what
+the regular expression it replaced gave; tests/core/test_text_scanning.py checks them against it.
 """
 
 import math
-import re
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity, normalise_text, recall_field, remember_field
+from conductor_atlas.core.units import (parse_quantity, normalise_text, recall_field, remember_field, space_end)
 
 INCH = 0.0254  # m, exact by definition (1959 international yard and pound agreement)
 
@@ -26,13 +28,109 @@ IEC60228_SIZES_MM2 = [
 
 AWG_NAMES = ["4/0", "3/0", "2/0", "1/0"]
 
-# compiled once (Transcrypt's re translates an uncompiled pattern on every call)
-ZEROS = re.compile(r"^0+$")
-DIGITS = re.compile(r"^[0-9]+$")
-AWG_FIRST = re.compile(r"^(?:awg|ga)\s*#?\s*([0-9/]+)$", re.IGNORECASE)
-AWG_LAST = re.compile(r"^#?\s*([0-9/]+)\s*(?:awg|ga)$", re.IGNORECASE)
-DIAMETER = re.compile(r"^(?:d|dia|diameter|ø|⌀|Ø)\s*=?\s*(.+)$", re.IGNORECASE)
-BAR = re.compile(r"^([0-9.,eE+-]+)\s*[x×*]\s*([0-9.,eE+-]+)\s*(.*)$")
+DIGITS = "0123456789"
+GAUGE_CHARACTERS = "0123456789/"
+BAR_NUMBER_CHARACTERS = "0123456789.,eE+-"
+BAR_TIMES = "x×*"  # lower-case x only, as before
+AWG_WORDS = ["awg", "ga"]
+# in the order they are tried: the first word that is followed by something wins
+DIAMETER_WORDS = ["d", "dia", "diameter", "ø", "⌀"]
+# the characters Python's re.IGNORECASE takes for each letter of those words
+LETTER_FORMS = {"a": "aA", "w": "wW", "g": "gG", "d": "dD", "i": "iIİı", "m": "mM", "e": "eE", "t": "tT",
+                "r": "rR", "ø": "øØ", "⌀": "⌀"}
+
+
+def all_in(text, characters):
+    """True when ``text`` is not empty and each of its characters is one of ``characters``."""
+    if len(text) == 0:
+        return False
+    for i in range(len(text)):
+        if characters.find(text[i]) < 0:
+            return False
+    return True
+
+
+def run_end(text, i, characters):
+    """The index after the run of ``characters`` that starts at ``i`` (``i`` itself for none)."""
+    n = len(text)
+    while i < n and characters.find(text[i]) >= 0:
+        i += 1
+    return i
+
+
+def word_at(text, i, word):
+    """True when ``text`` holds ``word`` (lower case, letters of LETTER_FORMS) at index ``i``,
+    in any case."""
+    if i + len(word) > len(text):
+        return False
+    for k in range(len(word)):
+        if LETTER_FORMS[word[k]].find(text[i + k]) < 0:
+            return False
+    return True
+
+
+def awg_gauge_text(text):
+    """The gauge in "AWG 12", "awg #4/0", "ga12", "12 AWG", "#4/0 ga" (``text`` stripped); None
+    for other text. What the former patterns ``^(?:awg|ga)\\s*#?\\s*([0-9/]+)$`` and
+    ``^#?\\s*([0-9/]+)\\s*(?:awg|ga)$`` (IGNORECASE) matched on text with no line feed."""
+    n = len(text)
+    for word in AWG_WORDS:
+        if word_at(text, 0, word):
+            i = space_end(text, len(word))
+            if i < n and text[i] == "#":
+                i = space_end(text, i + 1)
+            j = run_end(text, i, GAUGE_CHARACTERS)
+            if j > i and j == n:
+                return text[i:j]
+    i = 0
+    if n > 0 and text[0] == "#":
+        i = 1
+    i = space_end(text, i)
+    j = run_end(text, i, GAUGE_CHARACTERS)
+    if j == i:
+        return None
+    k = space_end(text, j)
+    for word in AWG_WORDS:
+        if word_at(text, k, word) and k + len(word) == n:
+            return text[i:j]
+    return None
+
+
+def diameter_text(text):
+    """The diameter after "d", "ø" or "⌀" and an optional "=" ("d 2.5 mm", "ø=1,6 mm"); None for
+    other text. What the former pattern ``^(?:d|dia|diameter|ø|⌀|Ø)\\s*=?\\s*(.+)$`` (IGNORECASE)
+    matched on text with no line feed, backtracking included: "d =" gives "=", and "d" stays
+    no match."""
+    n = len(text)
+    for word in DIAMETER_WORDS:
+        if word_at(text, 0, word):
+            start = len(word)
+            i = space_end(text, start)
+            if i < n and text[i] == "=":
+                i = space_end(text, i + 1)
+            if i < n:
+                return text[i:n]
+            if n > start:
+                return text[n - 1:n]
+    return None
+
+
+def bar_parts(text):
+    """[width, thickness, unit] of a bar such as "40 x 5 mm", "40×5mm", "1e1*2 mm" (the unit is
+    what follows, possibly ""); None for other text. What the former pattern
+    ``^([0-9.,eE+-]+)\\s*[x×*]\\s*([0-9.,eE+-]+)\\s*(.*)$`` matched on text with no line feed."""
+    n = len(text)
+    i = run_end(text, 0, BAR_NUMBER_CHARACTERS)
+    if i == 0:
+        return None
+    k = space_end(text, i)
+    if k >= n or BAR_TIMES.find(text[k]) < 0:
+        return None
+    m = space_end(text, k + 1)
+    j = run_end(text, m, BAR_NUMBER_CHARACTERS)
+    if j == m:
+        return None
+    return [text[0:i], text[m:j], text[space_end(text, j):n]]
 
 
 def awg_number(name):
@@ -41,13 +139,13 @@ def awg_number(name):
     for i in range(len(AWG_NAMES)):
         if text == AWG_NAMES[i]:
             return i - 3
-    if ZEROS.match(text) is not None:
+    if all_in(text, "0"):
         return 1 - len(text)
-    if DIGITS.match(text) is None or len(text) > 3:
+    if not all_in(text, DIGITS) or len(text) > 3:
         raise CoreError("“" + name + "” is not an AWG gauge (use 4/0 … 56)", "size")
     n = 0
     for ch in text:
-        n = n * 10 + "0123456789".find(ch)
+        n = n * 10 + DIGITS.find(ch)
     return n
 
 
@@ -149,27 +247,24 @@ def size_from_text(text, field):
     """parse_size without the memo (``text`` is a non-empty str)."""
     raw = normalise_text(text)
     compact = raw.strip()
-    awg = AWG_FIRST.match(compact)
-    if awg is None:
-        awg = AWG_LAST.match(compact)
-    if awg is not None:
-        n = awg_number(awg.group(1))
+    gauge = awg_gauge_text(compact)
+    if gauge is not None:
+        n = awg_number(gauge)
         d = awg_diameter(n)
         return size_record("round", awg_area(n), awg_name(n) + " AWG", d, 0.0, 0.0)
-    diameter = DIAMETER.match(compact)
+    diameter = diameter_text(compact)
     if diameter is not None:
-        d = parse_quantity(diameter.group(1), "length", field)
+        d = parse_quantity(diameter, "length", field)
         if not (d > 0):
             raise CoreError("diameter must be greater than zero", field)
-        return size_record("round", usable_area(round_area(d), field), "ø " + diameter.group(1).strip(), d,
-                           0.0, 0.0)
-    bar = BAR.match(compact)
+        return size_record("round", usable_area(round_area(d), field), "ø " + diameter.strip(), d, 0.0, 0.0)
+    bar = bar_parts(compact)
     if bar is not None:
-        unit = bar.group(3).strip()
+        unit = bar[2].strip()
         if len(unit) == 0:
             raise CoreError("needs a unit for the bar, e.g. 40 x 5 mm", field)
-        w = parse_quantity(bar.group(1) + " " + unit, "length", field)
-        t = parse_quantity(bar.group(2) + " " + unit, "length", field)
+        w = parse_quantity(bar[0] + " " + unit, "length", field)
+        t = parse_quantity(bar[1] + " " + unit, "length", field)
         if not (w > 0 and t > 0):
             raise CoreError("bar width and thickness must be greater than zero", field)
         wide = w

@@ -39,11 +39,10 @@ Problems become messages in the outcome, never exceptions.
 """
 
 import math
-import re
 from math import floor  # a plain binding: math.floor is a property look-up in JS
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity, known_units, normalise_text, NUMBER_PATTERN, SI_UNIT
+from conductor_atlas.core.units import parse_quantity, known_units, normalise_text, split_number, SI_UNIT
 from conductor_atlas.core.numfmt import format_number
 
 # Characters folded to ASCII (applied after lower()); combining marks U+0300-U+036F are dropped.
@@ -64,7 +63,6 @@ FOLD = {
     "²": "2", "³": "3", "¹": "1", "⁰": "0", "⁴": "4",
 }
 
-NON_ASCII = re.compile(r"[^\x00-\x7f]")
 # the fields of an entry, in the order that wins a tie between equally good matches
 FIELD_RANK = {"title": 0, "aliases": 1, "id": 2, "material": 3, "class_title": 4, "keywords": 5, "summary": 6}
 FIELD_NAMES = ["title", "aliases", "id", "material", "class_title", "keywords", "summary"]
@@ -126,10 +124,19 @@ FILTER_UNIT_ALIASES = {"%iacs": "%", "% iacs": "%", "iacs": "%"}
 # text
 
 
+def is_ascii(text):
+    """True when every character of ``text`` is below U+0080 (as the former ``[^\\x00-\\x7f]``
+    found none)."""
+    for i in range(len(text)):
+        if ord(text[i]) > 127:
+            return False
+    return True
+
+
 def fold_text(text):
     """Lower case, accents stripped, look-alike symbols unified; other characters kept."""
     lowered = str(text).lower()
-    if NON_ASCII.search(lowered) is None:
+    if is_ascii(lowered):
         return lowered
     out = []
     for ch in lowered:
@@ -542,10 +549,10 @@ def parse_filter(clause):
         raise CoreError("one comparison per clause; separate clauses with a comma or “and”", "q")
     number_text = right
     unit_text = ""
-    pieces = NUMBER_PATTERN.match(normalise_text(right))
+    pieces = split_number(normalise_text(right))
     if pieces is not None:
-        number_text = pieces.group(1)
-        unit_text = pieces.group(2).strip()
+        number_text = pieces[0]
+        unit_text = pieces[1].strip()
         if right.startswith(number_text):
             unit_text = right[len(number_text):len(right)].strip()
     quantity_text = right

@@ -4,9 +4,13 @@ One table, ``UNITS``, maps each accepted spelling (after ``normalise_unit``) to 
 factor to the SI unit, and an offset (temperatures only: SI = value * factor + offset).
 tests/core/test_units.py checks every entry against pint. Conductor sizes (AWG, diameter,
 bar "w x t") are parsed in ``conductor_atlas.core.geometry``.
-"""
 
-import re
+Text is read by plain character scans, not regular expressions: Transcrypt's ``re`` module (re.js,
+re.translate.js) was 5.9 kB of the 41 kB gzip calculator bundle (measured on calc-resistance), and
+a scan over explicit character sets reads the same in CPython and in JS by construction (their
+regex ``\\s``, ``.`` and ``strip`` sets differ).
+tests/core/test_text_scanning.py checks each scan against the pattern it replaced.
+"""
 
 from conductor_atlas.core.errors import CoreError
 
@@ -116,8 +120,6 @@ CASE_SENSITIVE = {
     "Mm": "megametre",
 }
 
-NUMBER_PATTERN = re.compile(r"^([+-]?(?:[0-9]+(?:[.,][0-9]*)?|[.,][0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(.*)$")
-
 KIND_WORDS = {
     "length": "a length (e.g. 25 m, 2.5 mm, 100 ft)",
     "area": "a cross-section (e.g. 35 mm², 250 kcmil)",
@@ -136,24 +138,39 @@ KIND_WORDS = {
 }
 
 
-# Characters CPython's str.strip() and JS's String.trim() treat differently (C0/C1 controls such
-# as \x1c-\x1f and \x85 are whitespace only to Python, U+FEFF only to JS): dropped before any strip
-UNPORTABLE_CHARACTERS = r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f-\x9f\ufeff]"
-# Patterns are compiled once: Transcrypt's re translates a pattern to JS on every uncompiled call,
-# which was most of a calculator update in the browser.
-UNPORTABLE_PATTERN = re.compile(UNPORTABLE_CHARACTERS)
-LINE_BREAKS = re.compile(r"[\n\r\u2028\u2029]")
-SPACED_STAR = re.compile(r"\s*\*\s*")
-SPACED_SLASH = re.compile(r"\s*/\s*")
-SPACES = re.compile(r"\s+")
-SECOND_SEPARATOR = re.compile(r"^[.,][0-9]")
+# Every character Python's regex \s matches (the same set as str.isspace()). The scans test
+# membership here, so JS reads text as CPython does (JS \s and String.trim() use another set).
+SPACE_CHARACTERS = ("\t\n\x0b\x0c\r\x1c\x1d\x1e\x1f \x85\xa0\u1680\u2000\u2001\u2002\u2003\u2004\u2005"
+                    "\u2006\u2007\u2008\u2009\u200a\u2028\u2029\u202f\u205f\u3000")
+
+
+def is_space(ch):
+    """True when the one character ``ch`` is in SPACE_CHARACTERS."""
+    return SPACE_CHARACTERS.find(ch) >= 0
+
+
+def space_end(text, i):
+    """The index after the run of SPACE_CHARACTERS that starts at ``i`` (``i`` itself for none)."""
+    n = len(text)
+    while i < n and is_space(text[i]):
+        i += 1
+    return i
+
+
+def is_unportable(code):
+    """True for the characters CPython's str.strip() and JS's String.trim() treat differently, and
+    other controls: C0 controls but tab, LF and CR; DEL to U+009F; U+FEFF (whitespace only to JS)."""
+    if code < 32:
+        return not (code == 9 or code == 10 or code == 13)
+    if code >= 127 and code <= 159:
+        return True
+    return code == 0xFEFF
 
 
 def needs_cleaning(text):
     """True when ``text`` holds a character portable_text removes or replaces: a control character
-    (tab included, so its removal and stripping stay with the patterns), DEL-U+009F, U+FEFF, or a
-    line break (U+2028, U+2029). Most typed text holds none, and a loop over it is far cheaper in
-    the browser than Transcrypt's re.sub, which builds a new JS RegExp and match objects per call."""
+    (tab included, though it is kept), DEL-U+009F, U+FEFF, or a line break (LF, CR, U+2028, U+2029).
+    Most typed text holds none, and then portable_text builds no new string."""
     for ch in text:
         code = ord(ch)
         if code < 32 or code == 0xFEFF or code == 0x2028 or code == 0x2029:
@@ -163,12 +180,27 @@ def needs_cleaning(text):
     return False
 
 
+def without_controls(text):
+    """``text`` with the characters is_unportable names dropped and each line break (LF, CR,
+    U+2028, U+2029) made a space; tabs and everything else kept."""
+    out = []
+    for i in range(len(text)):
+        ch = text[i]
+        code = ord(ch)
+        if code == 10 or code == 13 or code == 0x2028 or code == 0x2029:
+            out.append(" ")
+        elif not is_unportable(code):
+            out.append(ch)
+    return "".join(out)
+
+
 def portable_text(text):
     """``text`` without control characters and U+FEFF, line breaks as spaces, stripped: the same
-    string in both runtimes (JS regex ``.`` also stops at \\r, U+2028 and U+2029; Python's only at \\n)."""
+    string in both runtimes (no character is left that only one runtime's strip removes), and one
+    line, which the scans of this module and of geometry rely on."""
     if not needs_cleaning(text):
         return text.strip()
-    return LINE_BREAKS.sub(" ", UNPORTABLE_PATTERN.sub("", text)).strip()
+    return without_controls(text).strip()
 
 
 def has_lookalikes(text):
@@ -194,13 +226,37 @@ def normalise_text(text):
 
 
 def has_space(text):
-    """True when ``text`` may hold a character regex ``\\s`` matches: anything but printable ASCII
-    other than the space. (Without one, the three space patterns of normalise_unit change nothing.)"""
+    """True when ``text`` may hold a character of SPACE_CHARACTERS: anything but printable ASCII
+    other than the space. (Without one, joined_spaces would change nothing.)"""
     for ch in text:
         code = ord(ch)
         if code < 33 or code > 126:
             return True
     return False
+
+
+def joined_spaces(unit):
+    """``unit`` with each run of spaces dropped when a "*" or "/" is next to it and made one "*"
+    otherwise ("A / mm2" -> "A/mm2", "ohm  m" -> "ohm*m"): what the former patterns
+    \\s*\\*\\s* -> "*", then \\s*/\\s* -> "/", then \\s+ -> "*" gave."""
+    out = []
+    n = len(unit)
+    i = 0
+    while i < n:
+        if not is_space(unit[i]):
+            out.append(unit[i])
+            i += 1
+            continue
+        start = i
+        i = space_end(unit, i)
+        joined = False
+        if start > 0 and (unit[start - 1] == "*" or unit[start - 1] == "/"):
+            joined = True
+        if i < n and (unit[i] == "*" or unit[i] == "/"):
+            joined = True
+        if not joined:
+            out.append("*")
+    return "".join(out)
 
 
 def normalise_unit(unit_text):
@@ -209,9 +265,7 @@ def normalise_unit(unit_text):
     if unit in CASE_SENSITIVE:
         return CASE_SENSITIVE[unit]
     if has_space(unit):
-        unit = SPACED_STAR.sub("*", unit)
-        unit = SPACED_SLASH.sub("/", unit)
-        unit = SPACES.sub("*", unit)
+        unit = joined_spaces(unit)
     unit = unit.lower()
     unit = unit.replace("ohms", "ohm")
     unit = unit.replace("deg*c", "degc").replace("deg*f", "degf")
@@ -221,21 +275,16 @@ def normalise_unit(unit_text):
     return unit
 
 
-# What regex \s matches in both runtimes among the characters needs_cleaning lets through
-# (tests/core/test_units.py checks the set against Python's re; the differential test against JS).
-SPACE_CHARACTERS = " \u00a0\u1680\u2000\u2001\u2002\u2003\u2004\u2005\u2006\u2007\u2008\u2009\u200a\u202f\u205f\u3000"
-
-
 def is_digit(ch):
     return ch >= "0" and ch <= "9"
 
 
 def number_end(text):
-    """Where the number NUMBER_PATTERN's group 1 matches at the start of ``text`` ends; 0 for none.
+    """Where the number at the start of ``text`` ends; 0 for none.
 
-    A scan by hand, because a regex match costs the browser a Transcrypt match object per call.
-    The same greedy choices as the pattern: sign, digits with an optional separator and digits
-    (or a separator and at least one digit), then an exponent only when it has a digit.
+    The number the former pattern ``[+-]?(?:[0-9]+(?:[.,][0-9]*)?|[.,][0-9]+)(?:[eE][+-]?[0-9]+)?``
+    matched, with its greedy choices: sign, digits with an optional separator and digits (or a
+    separator and at least one digit), then an exponent only when it has a digit.
     """
     n = len(text)
     i = 0
@@ -265,31 +314,39 @@ def number_end(text):
     return i
 
 
+def split_number(text):
+    """[number text, rest] for text that starts with a number ("2,5 mm" -> ["2,5", "mm"]); None
+    when it does not. The rest starts after the spaces that follow the number.
+
+    What the former pattern ``^(number)\\s*(.*)$`` (number as in number_end) matched, for any
+    text: Python's ``.`` stops at a line feed and ``$`` also matches before a final one, so a
+    rest with a line feed other than its last character is no match, and a final one is dropped.
+    """
+    end = number_end(text)
+    if end == 0:
+        return None
+    rest = text[space_end(text, end):]
+    line_feed = rest.find("\n")
+    if line_feed >= 0:
+        if line_feed != len(rest) - 1:
+            return None
+        rest = rest[0:line_feed]
+    return [text[0:end], rest]
+
+
 def parse_number(text, field):
     """Parse the leading number of ``text``; return [value, rest_of_text].
 
     A decimal comma is accepted when it is the only separator ("2,5 mm"); a number with both
-    a comma and a point ("1,234.5") is refused as ambiguous rather than guessed. Text with a
-    character needs_cleaning flags (where the runtimes' \\s and . differ) goes through
-    NUMBER_PATTERN itself; any other text through number_end, which matches it the same way.
+    a comma and a point ("1,234.5") is refused as ambiguous rather than guessed, and so is a
+    second separator right after the number and its spaces ("1,2.5", "1. 5").
     """
-    if needs_cleaning(text):
-        match = NUMBER_PATTERN.match(text)
-        if match is None:
-            raise CoreError("expected a number first, found “" + text + "”", field)
-        number_text = match.group(1)
-        rest = match.group(2)
-        second = SECOND_SEPARATOR.match(rest) is not None
-    else:
-        end = number_end(text)
-        if end == 0:
-            raise CoreError("expected a number first, found “" + text + "”", field)
-        number_text = text[0:end]
-        start = end
-        while start < len(text) and SPACE_CHARACTERS.find(text[start]) >= 0:
-            start += 1
-        rest = text[start:]
-        second = len(rest) >= 2 and (rest[0] == "." or rest[0] == ",") and is_digit(rest[1])
+    pieces = split_number(text)
+    if pieces is None:
+        raise CoreError("expected a number first, found “" + text + "”", field)
+    number_text = pieces[0]
+    rest = pieces[1]
+    second = len(rest) >= 2 and (rest[0] == "." or rest[0] == ",") and is_digit(rest[1])
     if second:
         raise CoreError("“" + text + "” mixes a decimal comma and a decimal point, or has two separators; "
                         "write it as 1234.5 or 1234,5", field)
