@@ -30,9 +30,12 @@ ZEROS = re.compile(r"^0+$")
 DIGITS = re.compile(r"^[0-9]+$")
 AWG_FIRST = re.compile(r"^(?:awg|ga)\s*#?\s*([0-9/]+)$", re.IGNORECASE)
 AWG_LAST = re.compile(r"^#?\s*([0-9/]+)\s*(?:awg|ga)$", re.IGNORECASE)
-DIAMETER = re.compile(r"^(?:d|dia|diameter|ø|⌀|Ø)\s*=?\s*(.+)$", re.IGNORECASE)
+FORMER_DIAMETER = re.compile(r"^(?:d|dia|diameter|ø|⌀|Ø)\s*=?\s*(.+)$", re.IGNORECASE)
 BAR = re.compile(r"^([0-9.,eE+-]+)\s*[x×*]\s*([0-9.,eE+-]+)\s*(.*)$")
 NON_ASCII = re.compile(r"[^\x00-\x7f]")
+# ... and one corrected: FORMER_DIAMETER tried "d" first, so "dia 2.5 mm" gave "ia 2.5 mm" (refused,
+# though the module docstring has always offered "dia"); the scan tries the longest word first
+DIAMETER = re.compile(r"^(?:diameter|dia|d|ø|⌀|Ø)\s*=?\s*(.+)$", re.IGNORECASE)
 # ---------------------------------------------------------------------------------------------------
 
 # characters around every branch of the scans: digits, signs, separators, exponents, the spaces
@@ -248,6 +251,20 @@ def test_diameter_text_gives_the_group_of_the_diameter_pattern():
         match = DIAMETER.match(text)
         return None if match is None else match.group(1)
     assert mismatches(geometry.diameter_text, reference, ONE_LINE_TEXTS) == []
+
+
+def test_the_corrected_diameter_pattern_differs_only_after_dia():
+    # the same group, or the former one is the corrected one with "ia"/"iameter" left in front
+    def differs(text):
+        former, now = groups_of(FORMER_DIAMETER, text), groups_of(DIAMETER, text)
+        if former == now:
+            return False
+        return not (now is not None and former is not None and re.match(r"(?i)dia", text)
+                    and former[0].endswith(now[0]) and len(former[0]) > len(now[0]))
+    assert [t for t in ONE_LINE_TEXTS if differs(t)] == []
+    assert groups_of(FORMER_DIAMETER, "dia 2.5 mm") == ["ia 2.5 mm"]
+    assert geometry.diameter_text("dia 2.5 mm") == "2.5 mm"
+    assert geometry.diameter_text("Diameter=2.5 mm") == "2.5 mm"
 
 
 def test_bar_parts_gives_the_groups_of_the_bar_pattern():

@@ -33,8 +33,9 @@ GAUGE_CHARACTERS = "0123456789/"
 BAR_NUMBER_CHARACTERS = "0123456789.,eE+-"
 BAR_TIMES = "x×*"  # lower-case x only, as before
 AWG_WORDS = ["awg", "ga"]
-# in the order they are tried: the first word that is followed by something wins
-DIAMETER_WORDS = ["d", "dia", "diameter", "ø", "⌀"]
+# in the order they are tried, longest first: the first word that is followed by something wins
+# (the former pattern tried "d" first, so "dia 2.5 mm" read "ia 2.5 mm" and was refused)
+DIAMETER_WORDS = ["diameter", "dia", "d", "ø", "⌀"]
 # the characters Python's re.IGNORECASE takes for each letter of those words
 LETTER_FORMS = {"a": "aA", "w": "wW", "g": "gG", "d": "dD", "i": "iIİı", "m": "mM", "e": "eE", "t": "tT",
                 "r": "rR", "ø": "øØ", "⌀": "⌀"}
@@ -97,10 +98,10 @@ def awg_gauge_text(text):
 
 
 def diameter_text(text):
-    """The diameter after "d", "ø" or "⌀" and an optional "=" ("d 2.5 mm", "ø=1,6 mm"); None for
-    other text. What the former pattern ``^(?:d|dia|diameter|ø|⌀|Ø)\\s*=?\\s*(.+)$`` (IGNORECASE)
-    matched on text with no line feed, backtracking included: "d =" gives "=", and "d" stays
-    no match."""
+    """The diameter after "diameter", "dia", "d", "ø" or "⌀" and an optional "=" ("dia 2.5 mm",
+    "ø=1,6 mm"); None for other text. What the pattern ``^(?:diameter|dia|d|ø|⌀|Ø)\\s*=?\\s*(.+)$``
+    (IGNORECASE) matches on text with no line feed, backtracking included: "d =" gives "=", and
+    "d" is no match."""
     n = len(text)
     for word in DIAMETER_WORDS:
         if word_at(text, 0, word):
