@@ -6,6 +6,8 @@ import csv
 import io
 import json
 
+import shutil
+
 import pytest
 
 from conductor_atlas.build import build
@@ -100,7 +102,7 @@ def test_publishing_the_same_files_again_writes_nothing(tmp_path):
     assert (out / "index.html").read_bytes() == b"<p>home!</p>"
 
 
-@pytest.mark.parametrize("touch", ["edit", "add", "remove", "record"])
+@pytest.mark.parametrize("touch", ["edit", "add", "remove", "record", "folder"])
 def test_a_site_touched_by_hand_is_written_again(tmp_path, touch):
     out = tmp_path / "site"
     publish(SITE, out)
@@ -110,8 +112,10 @@ def test_a_site_touched_by_hand_is_written_again(tmp_path, touch):
         (out / "materials/x/notes.txt").write_text("mine")
     elif touch == "remove":
         (out / "materials/x/index.html").unlink()
-    else:                    # an unreadable record
+    elif touch == "record":  # an unreadable record
         (tmp_path / ".site.published.json").write_text("{not json")
+    else:                    # the whole site deleted, its record left beside it
+        shutil.rmtree(out)
     assert publish(SITE, out).written
     on_disk = {p.relative_to(out).as_posix(): p.read_bytes() for p in out.rglob("*") if p.is_file()}
     assert on_disk == dict(SITE, **{MARKER: (out / MARKER).read_bytes()})

@@ -92,7 +92,11 @@ def site_unchanged(files: dict[str, bytes], out: Path, digest: str) -> bool:
         return False
     if not isinstance(record, dict) or record.get("digest") != digest:
         return False
-    return record.get("files") == file_stamps(out) and len(record["files"]) == len(files)
+    try:
+        on_disk = file_stamps(out)
+    except OSError:  # the folder was removed or is unreadable since that publish
+        return False
+    return record.get("files") == on_disk and len(record["files"]) == len(files)
 
 
 def publish(files: dict[str, bytes], out: Path, lock_held: bool = False) -> Published:
