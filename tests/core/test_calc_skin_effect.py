@@ -62,7 +62,9 @@ def test_thin_wire_at_1_mhz(catalogue):
 
 def test_without_size_gives_depth_only(catalogue):
     out = calculate_skin_effect({"material": "Cu", "frequency": "10 kHz", "size": ""}, catalogue)
-    assert set(out["results"]) == {"temperature", "resistivity", "skin_depth", "surface_resistance"}
+    # Cu resolves to pure copper, whose mean free path is on record: ℓ and ℓ/δ come too
+    assert set(out["results"]) == {"temperature", "resistivity", "skin_depth", "surface_resistance",
+                                   "mean_free_path", "path_ratio"}
 
 
 def test_hot_conductor_uses_its_resistivity(catalogue):
@@ -108,3 +110,60 @@ def test_bad_input_names_the_field(catalogue, inputs, field, words):
 
 def test_caution_names_proximity():
     assert "proximity" in CAUTION
+
+
+# ---- the electrons' mean free path against δ (the anomalous skin effect caution)
+# Copper's ℓ on record: 39.9 nm at 295 K (Gall, J. Appl. Phys. 119, 085101, 2016, Table I; the data
+# file marks it "from memory of the cited table"). Gall's ρ·λ for Cu, 6.70e-16 Ω·m² (same table,
+# from memory), checks the scaled value independently: our ρ(295 K) differs from Gall's room-
+# temperature ρ by about 1 %, so the product is compared to 3 %.
+CU_MFP_295K = 39.9e-9
+CU_RHO_LAMBDA = 6.70e-16
+
+
+def test_mean_free_path_at_its_record_temperature_is_the_record(catalogue):
+    out = calculate_skin_effect({"material": "copper", "frequency": "10 GHz", "temperature": "295 K"}, catalogue)
+    assert value(out, "mean_free_path") == pytest.approx(CU_MFP_295K, rel=1e-12)
+    rho = value(out, "resistivity")
+    assert value(out, "path_ratio") == pytest.approx(CU_MFP_295K / delta_ref(rho, 1e10), rel=MU0_REL)
+    assert value(out, "path_ratio") < 0.1            # about 0.06: the classical theory holds
+    assert not any("anomalous" in w for w in out["warnings"])
+    assert "gall2016" in out["sources"]
+
+
+def test_cold_copper_at_microwave_frequency_is_flagged_anomalous(catalogue):
+    out = calculate_skin_effect({"material": "copper", "frequency": "1 GHz", "temperature": "20 K"}, catalogue)
+    mfp, rho = value(out, "mean_free_path"), value(out, "resistivity")
+    assert mfp * rho == pytest.approx(CU_RHO_LAMBDA, rel=0.03)      # ρ·ℓ held constant
+    assert value(out, "path_ratio") == pytest.approx(mfp / delta_ref(rho, 1e9), rel=MU0_REL)
+    assert value(out, "path_ratio") > 1.0
+    assert any("anomalous skin effect" in w for w in out["warnings"])
+    assert "scaled with ρ·ℓ held constant" in out["results"]["mean_free_path"]["text"]
+
+
+def test_mean_free_path_falls_back_to_the_free_electron_value(catalogue):
+    # sodium: electron density on record (Ashcroft & Mermin Table 1.1), no mean free path
+    out = calculate_skin_effect({"material": "sodium", "frequency": "10 GHz"}, catalogue)
+    n = catalogue["materials"]["sodium"]["electron_density"]
+    k_f = (3.0 * math.pi ** 2 * n) ** (1.0 / 3.0)
+    # ℓ = ħ k_F / (n e² ρ) (Ashcroft & Mermin eqs. 1.8, 2.24) with scipy's CODATA constants
+    expected = constants.hbar * k_f / (n * constants.e ** 2 * value(out, "resistivity"))
+    assert value(out, "mean_free_path") == pytest.approx(expected, rel=1e-8)
+    assert "free-electron" in out["results"]["mean_free_path"]["text"]
+
+
+def test_no_mean_free_path_without_a_record_or_a_carrier_density(catalogue):
+    out = calculate_skin_effect({"material": "titanium", "frequency": "10 GHz"}, catalogue)
+    assert out["errors"] == {}
+    assert "mean_free_path" not in out["results"] and "path_ratio" not in out["results"]
+
+
+def test_resistance_calculator_gives_the_same_caution(catalogue):
+    from conductor_atlas.core.calculators import calculate
+    cold = {"material": "copper", "length": "1 m", "size": "d 1 mm", "temperature": "20 K", "frequency": "1 GHz"}
+    run = calculate("resistance", cold, catalogue)
+    skin = calculate_skin_effect({"material": "copper", "frequency": "1 GHz", "temperature": "20 K"}, catalogue)
+    caution = [w for w in skin["warnings"] if "anomalous skin effect" in w]
+    assert len(caution) == 1 and caution[0] in run["warnings"]
+    mains = calculate("resistance", {**cold, "temperature": "20 °C", "frequency": "50 Hz"}, catalogue)
+    assert not any("anomalous" in w for w in mains["warnings"])

@@ -119,6 +119,7 @@ def calculator_cases():
         {"length": "12 m", "size": "0.5 mm2", "temperature": "4.2 K", "model": "bloch-gruneisen"},
         {"length": "12 m", "size": "0.5 mm2", "temperature": "77 K", "model": "table"},
         {"length": "12 m", "size": "0.5 mm2", "model": "nonsense"},
+        {"length": "1 m", "size": "d 1 mm", "temperature": "20 K", "frequency": "1 GHz"},  # anomalous skin effect
     ]
     cases = []
     names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", ""]
@@ -154,6 +155,10 @@ def new_calculator_cases(catalogue):
                            ("400 Hz", "", "77 K"), ("0 Hz", "", ""), ("1e308 Hz", "4/0 AWG", ""), ("-5 Hz", "abc", "x"),
                            ("", "", ""), ("60 Hz", "12 AWG", "-300 °C")):
             add("skin_effect", "", {"material": material, "frequency": f, "size": size, "temperature": t})
+    # the mean free path: on record (as recorded, scaled), free-electron (Na, K), none (Ti); ℓ/δ either side of 0.3
+    for material in ("Cu", "Ag", "Al", "Na", "K", "titanium", "cobalt"):
+        for f, t in (("10 GHz", "295 K"), ("1 GHz", "20 K"), ("100 GHz", ""), ("50 Hz", "4.2 K")):
+            add("skin_effect", "", {"material": material, "frequency": f, "temperature": t})
     for material in ("Cu", "Ag", "Au", "Al", "Na", "K", "Fe", "W", "IACS", "film-copper", ""):
         for extra in ({}, {"temperature": "77 K"}, {"current_density": "4 A/mm2"}, {"current": "10 A", "size": "1 mm2"},
                       {"current": "10 A"}, {"current": "10 A", "current_density": "1 A/mm2"},

@@ -3,6 +3,7 @@
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.lookup import find_material
 from conductor_atlas.core.material_models import resistivity_at
+from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import add_error, add_sources, add_warning, field_text, read_quantity
 
 
@@ -43,3 +44,49 @@ def material_resistivity(outcome, m, t, inputs):
         add_warning(outcome, w)
     outcome["model"] = found["label"]
     return found["rho"]
+
+
+def quiet_resistivity(m, t):
+    """ρ of m at t [K] by "auto", or -1.0 when no model reaches t (no messages)."""
+    try:
+        return resistivity_at(m, t, "auto")["rho"]
+    except CoreError:
+        return -1.0
+
+
+def recorded_mean_free_path(m, rho, t):
+    """The mean free path on record for m, carried to temperature t [K] where ρ = rho: [ℓ [m], how].
+
+    ℓ(t) = ℓ_rec · ρ(t_rec) / ρ(t), the product ρ·ℓ being a property of the Fermi surface alone
+    (Gall, J. Appl. Phys. 119, 085101, 2016, eq. 1). ``how`` is "as recorded" (t within 0.5 K of the
+    record's temperature), "scaled" (by ρ·ℓ = const), "unscaled" (no model reaches the record's
+    temperature) or "none" (no record; ℓ is then -1.0).
+    """
+    if not (m["mean_free_path"] > 0):
+        return [-1.0, "none"]
+    t_mfp = m["mean_free_path_t"]
+    if not (t_mfp > 0):
+        t_mfp = m["t_ref"]
+    if abs(t - t_mfp) <= 0.5:
+        return [m["mean_free_path"], "as recorded"]
+    rho_then = quiet_resistivity(m, t_mfp)
+    if rho_then > 0:
+        return [m["mean_free_path"] * rho_then / rho, "scaled"]
+    return [m["mean_free_path"], "unscaled"]
+
+
+# Where ℓ/δ passes this, the page says the classical δ and Rs no longer hold. The classical theory
+# needs ℓ ≪ δ and breaks down once ℓ is comparable to δ (Reuter & Sondheimer, Proc. R. Soc. A 195,
+# 336, 1948; Chambers, Proc. R. Soc. A 215, 481, 1952); 0.3 as the edge of "comparable" is our
+# choice, not a published figure.
+ANOMALOUS_PATH_RATIO = 0.3
+
+
+def warn_if_anomalous(outcome, mfp, delta):
+    """Warn when the mean free path mfp [m] (≤ 0: unknown) exceeds ANOMALOUS_PATH_RATIO · δ [m]."""
+    if not (mfp > 0) or not (mfp > ANOMALOUS_PATH_RATIO * delta):
+        return
+    add_warning(outcome, "the electrons' mean free path (" + format_si(mfp, "m", 3) + ") is "
+                + format_number(mfp / delta, 3) + " δ: the classical skin depth assumes ℓ much shorter than δ. "
+                "Where ℓ is comparable to δ or longer (the anomalous skin effect: low temperature, high "
+                "frequency) the real surface resistance is higher than shown and stops falling with ρ")

@@ -7,7 +7,8 @@ from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
-from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.calc_common import (material_resistivity, read_material, read_temperature,
+                                              recorded_mean_free_path, warn_if_anomalous)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Resistance of a conductor run"
@@ -121,6 +122,7 @@ def calculate_resistance(inputs, catalogue):
             outcome["results"] = {}
             return outcome
         add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
+        warn_if_anomalous(outcome, recorded_mean_free_path(m, rho, t)[0], delta)
         add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
         add_result(outcome, "resistance_ac", r * ratio, "Ω", format_si(r * ratio, "Ω", 4))
         if current is not None:

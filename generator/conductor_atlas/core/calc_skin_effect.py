@@ -1,12 +1,14 @@
 """Calculator "skin-effect": skin depth, surface resistance and, for a size, the AC/DC ratio."""
 
 from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          has_errors, kelvin_text, new_outcome, read_quantity)
-from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+                                          field_text, has_errors, kelvin_text, new_outcome, read_quantity)
+from conductor_atlas.core.calc_common import (material_resistivity, read_material, read_temperature,
+                                              recorded_mean_free_path, warn_if_anomalous)
 from conductor_atlas.core.calc_resistance import ac_ratio, read_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
@@ -26,6 +28,7 @@ RESULT_LABELS = [
     ["ac_dc_ratio", "AC/DC resistance ratio"], ["resistance", "DC resistance per metre (Ω/m)"],
     ["resistance_ac", "AC resistance per metre (Ω/m)"], ["depth_ratio", "Radius or half-thickness over δ"],
     ["area", "Cross-section"], ["resistivity", "Resistivity at temperature"], ["temperature", "Temperature"],
+    ["mean_free_path", "Electron mean free path ℓ (estimate)"], ["path_ratio", "Mean free path over skin depth ℓ/δ"],
 ]
 CAUTION = ("An isolated straight conductor: proximity to other conductors, stranding and magnetic armour raise the "
            "AC resistance further. A physics estimate, not a cable rating.")
@@ -95,5 +98,31 @@ def calculate_skin_effect(inputs, catalogue):
             add_warning(outcome, "the surface resistance assumes a conductor much thicker than δ; here the current "
                                  "reaches the middle (radius or half-thickness is " + format_number(depth, 3)
                         + " δ), so use the AC resistance instead")
+    mean_free_path_check(outcome, m, rho, t, delta)
     check_finite_results(outcome, "frequency")
     return outcome
+
+
+def mean_free_path_check(outcome, m, rho, t, delta):
+    """ℓ at t (the record's, scaled by ρ·ℓ = const; else the free-electron ℓ = ħk_F/(n e² ρ)) and ℓ/δ,
+    with calc_common.warn_if_anomalous's warning."""
+    found = recorded_mean_free_path(m, rho, t)
+    mfp = found[0]
+    how = "the record's value"
+    source = m["mean_free_path_source"]
+    if found[1] == "scaled":
+        how = "the record's value scaled with ρ·ℓ held constant"
+    if found[1] == "unscaled":
+        how = "the record's value, unscaled: no resistivity model reaches its temperature"
+    if not (mfp > 0) and m["electron_density"] > 0:
+        mfp = fe.mean_free_path(rho, m["electron_density"])
+        how = "the free-electron estimate ħk_F/(n e² ρ), no mean free path being on record"
+        source = m["electron_density_source"]
+    if not (mfp > 0):
+        return
+    if len(source) > 0:
+        add_sources(outcome, [source])
+    ratio = mfp / delta
+    add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 3) + " (" + how + ")")
+    add_result(outcome, "path_ratio", ratio, "", format_number(ratio, 3))
+    warn_if_anomalous(outcome, mfp, delta)
