@@ -108,21 +108,21 @@ def mean_free_path_check(outcome, m, rho, t, delta):
     with calc_common.warn_if_anomalous's warning."""
     found = recorded_mean_free_path(m, rho, t)
     mfp = found[0]
-    how = "the record's value"
+    how = "as recorded"
     source = m["mean_free_path_source"]
     if found[1] == "scaled":
-        how = "the record's value scaled with ρ·ℓ held constant"
+        how = "recorded, scaled by ρ·ℓ = const"
     if found[1] == "unscaled":
-        how = "the record's value, unscaled: no resistivity model reaches its temperature"
+        how = "recorded, unscaled (no ρ model at its temperature)"
     if not (mfp > 0) and m["electron_density"] > 0:
         mfp = fe.mean_free_path(rho, m["electron_density"])
-        how = "the free-electron estimate ħk_F/(n e² ρ), no mean free path being on record"
+        how = "free-electron ħk_F/(n e² ρ)"
         source = m["electron_density_source"]
     if not (mfp > 0):
         return
     if len(source) > 0:
         add_sources(outcome, [source])
     ratio = mfp / delta
-    add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 3) + " (" + how + ")")
+    add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 3) + ", " + how)
     add_result(outcome, "path_ratio", ratio, "", format_number(ratio, 3))
     warn_if_anomalous(outcome, mfp, delta)
