@@ -52,7 +52,7 @@ function viewOf(form) {
   const cells = Array.from(section.querySelectorAll('[data-result]')).map((cell) => ({
     cell, name: cell.dataset.result, text: null, value: null}));
   return {
-    form, fields, cells, state: null, general: null, warnings: null, model: null, sources: null,
+    form, fields, cells, inputs: null, state: null, general: null, warnings: null, model: null, sources: null,
     problemsNode: section.querySelector('.calc-problems'),
     warningsNode: section.querySelector('.calc-warnings'),
     modelNode: section.querySelector('[data-model]'),
@@ -113,12 +113,20 @@ function show(view, outcome) {
   view.state = state;
 }
 
+// One Transcrypt dict of inputs per form, refilled on each update: the core only reads it (the
+// outcome keeps a copy), and making a fresh dict (eighteen hidden methods attached to an object
+// that already has the fields) was about 40 % of a thin-film update in node.
+function inputsOf(view) {
+  if (view.inputs === null) view.inputs = dict({});
+  for (const field of view.fields) view.inputs[field.name] = field.input.value;
+  return view.inputs;
+}
+
 function run(view, catalogue) {
-  const inputs = {};
-  for (const field of view.fields) inputs[field.name] = field.input.value;
+  const inputs = inputsOf(view);
   let outcome;
   try {
-    outcome = calculate(view.form.dataset.calculator, dict(inputs), catalogue);
+    outcome = calculate(view.form.dataset.calculator, inputs, catalogue);
   } catch (problem) {
     outcome = {results: {}, warnings: ['The calculator hit an internal problem: ' + String(problem && problem.message || problem)], errors: {}};
   }

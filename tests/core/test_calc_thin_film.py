@@ -69,6 +69,19 @@ def test_record_mean_free_path_scaled_with_rho_lambda(catalogue):
     assert any("ρ·ℓ held constant" in w for w in out["warnings"])
 
 
+def test_record_mean_free_path_unscaled_when_no_model_reaches_its_temperature(catalogue):
+    # a copy of film-copper whose l is dated 2 K, where its linear ρ(T) gives ρ <= 0 (a CoreError):
+    # no ρ·ℓ scaling is possible, so the recorded l is used as it stands, with a warning
+    import copy
+    edited = copy.deepcopy(catalogue)
+    record = edited["materials"]["film-copper"]
+    record["mean_free_path_t"] = 2.0
+    out = calculate_thin_film({"material": "film-copper", "thickness": "20 nm"}, edited)
+    assert value(out, "mean_free_path") == record["mean_free_path"]
+    assert any("is used unscaled: no resistivity model reaches that temperature" in w for w in out["warnings"])
+    assert not any("held constant" in w for w in out["warnings"])
+
+
 def test_free_electron_mean_free_path_when_none_is_recorded(catalogue):
     out = calculate_thin_film({"material": "Na", "thickness": "50 nm"}, catalogue)
     assert value(out, "mean_free_path") > 0

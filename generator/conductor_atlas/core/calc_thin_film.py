@@ -6,7 +6,7 @@ from conductor_atlas.core import size_effect as sz
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
-from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.calc_common import material_resistivity, quiet_resistivity, read_material, read_temperature
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Thin-film resistivity"
@@ -56,15 +56,6 @@ def read_fraction(outcome, inputs, field, what, default_text):
         add_error(outcome, field, what + " must be at least 0 and below 1 (e.g. 0.3 or 30 %)")
         return None
     return value
-
-
-def quiet_resistivity(m, t):
-    """ρ of m at t [K] by "auto", or -1.0 when no model reaches t (no messages)."""
-    quiet = {"warnings": [], "errors": {}, "results": {}, "model": ""}
-    rho = material_resistivity(quiet, m, t, {"model": "auto"})
-    if rho is None:
-        return -1.0
-    return rho
 
 
 def bulk_mean_free_path(outcome, inputs, m, rho, t):

@@ -12,26 +12,43 @@ from conductor_atlas.core.units import parse_quantity, portable_text
 from conductor_atlas.core.numfmt import format_fixed
 
 
+# Records read only by key (by the core, the page and JSON) are plain JS objects: the dict
+# literals in this jsiter region are not Transcrypt dicts, whose eighteen hidden methods cost more
+# to attach than the rest of storing a result (measured in node: dict creation was over a third of a
+# thin-film update). In CPython they are ordinary dicts. Never call keys()/items() on them in the
+# core: "results" and "errors", which the core walks with keys(), stay Transcrypt dicts.
+# __pragma__ ('jsiter')
+def keyed_record():
+    """An empty record filled and read by key only ({} in CPython, a plain object in JS)."""
+    return {}
+
+
+def outcome_record(name, inputs):
+    """The outcome's own record; "results" and "errors" are set by new_outcome."""
+    return {"calculator": name, "material": "", "inputs": inputs, "results": None, "warnings": [],
+            "errors": None, "sources": [], "model": ""}
+
+
+def result_entry(value, unit, text):
+    """{"value": SI float, "unit": SI symbol, "text": what a person reads}."""
+    return {"value": value, "unit": unit, "text": text}
+# __pragma__ ('nojsiter')
+
+
 def new_outcome(name, inputs):
     """An empty outcome for calculator ``name`` with a copy of the inputs."""
-    copied = {}
+    copied = keyed_record()
     for key in inputs.keys():
         copied[key] = inputs[key]
-    return {
-        "calculator": name,
-        "material": "",
-        "inputs": copied,
-        "results": {},
-        "warnings": [],
-        "errors": {},
-        "sources": [],
-        "model": "",
-    }
+    outcome = outcome_record(name, copied)
+    outcome["results"] = {}
+    outcome["errors"] = {}
+    return outcome
 
 
 def add_result(outcome, name, value, unit, text):
     """Store one result (SI value, SI unit symbol, text a person reads)."""
-    outcome["results"][name] = {"value": value, "unit": unit, "text": text}
+    outcome["results"][name] = result_entry(value, unit, text)
 
 
 def add_error(outcome, field, message):
