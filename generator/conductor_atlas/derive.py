@@ -110,17 +110,32 @@ def si_or(m: Material, name: str, default: float) -> float:
     return value.si if value is not None else default
 
 
+def own_mean_free_path(m: Material, rho_ref: float, t_ref: float) -> tuple[float, float, str, str]:
+    """(ℓ [m], its temperature [K] or 0, source key, how) for the calculators: the recorded mean free
+    path ("recorded"), else ρ·ℓ / ρ_ref at t_ref from a recorded ρ·ℓ product (Gall 2016, eq. 1;
+    "rho-lambda"), else (0, 0, "", "")."""
+    mfp = m.get("mean_free_path")
+    if mfp is not None:
+        return mfp.si, mfp.temperature or 0.0, mfp.source, "recorded"
+    product = m.get("rho_lambda")
+    if product is not None and rho_ref > 0:
+        return product.si / rho_ref, t_ref, product.source, "rho-lambda"
+    return 0.0, 0.0, "", ""
+
+
 def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit | None) -> dict:
     """The flat record the calculators read (see core.material_models for the keys)."""
     rho, t_rho, rho_source = reference_resistivity(m)
     n, n_how = carrier_density(m)
-    mfp = m.get("mean_free_path")
+    rho_ref = model.rho_ref if model else rho
+    t_ref = model.t_ref if model else t_rho
+    mfp_si, mfp_t, mfp_source, mfp_how = own_mean_free_path(m, rho_ref, t_ref)
     return {
         "id": m.id,
         "name": m.name,
         "klass": m.klass,
-        "rho_ref": model.rho_ref if model else rho,
-        "t_ref": model.t_ref if model else t_rho,
+        "rho_ref": rho_ref,
+        "t_ref": t_ref,
         "alpha": model.alpha if model else 0.0,
         "valid_from": model.valid_from if model else t_rho,
         "valid_to": model.valid_to if model else t_rho,
@@ -128,8 +143,9 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "mu_r": si_or(m, "relative_permeability", 1.0),
         "electron_density": n,
         "electron_density_how": n_how,
-        "mean_free_path": mfp.si if mfp is not None else 0.0,
-        "mean_free_path_t": (mfp.temperature or 0.0) if mfp is not None else 0.0,
+        "mean_free_path": mfp_si,
+        "mean_free_path_t": mfp_t,
+        "mean_free_path_how": mfp_how,
         "thermal_conductivity": si_or(m, "thermal_conductivity", 0.0),
         "table_t": list(m.table.temperatures) if m.table else [],
         "table_rho": list(m.table.resistivities) if m.table else [],
@@ -144,7 +160,7 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "cvd_c": si_or(m, "cvd_c", 0.0),
         "sources": model_sources(m),
         "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
-        "mean_free_path_source": mfp.source if mfp is not None else "",
+        "mean_free_path_source": mfp_source,
     }
 
 

@@ -278,7 +278,8 @@ def thin_film_table(m: Material, record: dict) -> Table | None:
     return Table(
         id="thin-film", title="Thin-film resistivity vs thickness (20 °C)",
         model=(f"Fuchs–Sondheimer (exact integral, specularity p) and Mayadas–Shatzkes grain-boundary scattering with "
-               f"bulk ρ = {format_number(rho * 1e8, 4)} µΩ·cm and mean free path ℓ = {format_number(ell * 1e9, 3)} nm"),
+               f"bulk ρ = {format_number(rho * 1e8, 4)} µΩ·cm and mean free path ℓ = {format_number(ell * 1e9, 3)} nm"
+               + (" (the recorded ρ·ℓ over ρ)" if record["mean_free_path_how"] == "rho-lambda" else "")),
         validity=("Grain column: Mayadas–Shatzkes alone, grain size equal to the film thickness (common practice, "
                   f"no source) and grain-boundary reflection R = {format_number(MS_REFLECTION, 2)} (illustrative); the "
                   "thin-film calculator combines both mechanisms in the full Mayadas–Shatzkes integral. Below a few nm, "

@@ -42,6 +42,7 @@ CARD_UNITS = {
     "relative_permeability": (1.0, "", 4),
     "curie_temperature": (1.0, "K", 5),
     "mean_free_path": (1e9, "nm", 3),
+    "rho_lambda": (1.0, "Ω·m²", 3),
     "residual_resistivity_ratio": (1.0, "", 4),
     "tensile_strength": (1e-6, "MPa", 4),
     "cvd_a": (1.0, "1/K", 5),

@@ -53,6 +53,9 @@ PROPERTIES = {
     "relative_permeability": PropertySpec("dimensionless", "relative permeability", 0.9, 1e6),
     "curie_temperature": PropertySpec("K", "Curie temperature", 100.0, 2000.0),
     "mean_free_path": PropertySpec("m", "electron mean free path", 1e-11, 1e-6, True),
+    # ρ·ℓ depends on the Fermi surface alone, not on temperature or dilute impurities: a conductor
+    # grade without a mean free path of its own gets ℓ = ρ·ℓ / ρ (derive.calc_record)
+    "rho_lambda": PropertySpec("ohm * m ** 2", "resistivity × mean free path (ρ·ℓ)", 1e-17, 1e-14),
     "residual_resistivity_ratio": PropertySpec("dimensionless", "residual resistivity ratio",
                                                1.0, 1e6),
     "tensile_strength": PropertySpec("Pa", "tensile strength", 1e6, 5e9),

@@ -167,3 +167,15 @@ def test_resistance_calculator_gives_the_same_caution(catalogue):
     assert len(caution) == 1 and caution[0] in run["warnings"]
     mains = calculate("resistance", {**cold, "temperature": "20 °C", "frequency": "50 Hz"}, catalogue)
     assert not any("anomalous" in w for w in mains["warnings"])
+
+
+def test_a_conductor_grade_takes_its_mean_free_path_from_the_recorded_rho_lambda(catalogue):
+    # IACS copper: ρ = 1/58 Ω·mm²/m at 20 °C (IEC 60028), ρ·λ of Cu 6.70e-16 Ω·m² (Gall 2016,
+    # Table I; from memory): ℓ = 38.86 nm, carried over by Matthiessen's rule
+    out = calculate_skin_effect({"material": "IACS", "frequency": "10 GHz"}, catalogue)
+    assert value(out, "mean_free_path") == pytest.approx(CU_RHO_LAMBDA / IACS_RHO, rel=1e-12)
+    assert out["results"]["mean_free_path"]["text"] == "38.9 nm, ρ·ℓ on record ÷ ρ"
+    assert "gall2016" in out["sources"]
+    hot = calculate_skin_effect({"material": "IACS", "frequency": "10 GHz", "temperature": "90 °C"}, catalogue)
+    rho90 = IACS_RHO * (1 + 0.00393 * 70.0)  # IEC 60028 α20
+    assert value(hot, "mean_free_path") == pytest.approx(CU_RHO_LAMBDA / rho90, rel=1e-12)

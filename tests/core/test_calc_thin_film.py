@@ -104,7 +104,7 @@ def test_thinner_is_worse(catalogue):
     ({"thickness": "20 A"}, "thickness", "is a current"),
     ({"grain_size": "0 nm", "reflection": "0.3"}, "grain_size", "greater than zero"),
     ({"mean_free_path": "-3 nm"}, "mean_free_path", "greater than zero"),
-    ({"material": "IACS"}, "mean_free_path", "no mean free path is on record for Standard annealed copper"),
+    ({"material": "titanium"}, "mean_free_path", "no mean free path is on record for Titanium (high purity)"),
     ({"thickness": "1e-300 m"}, "thickness", "thinner than one atomic layer"),
     ({"thickness": "0.05 nm"}, "thickness", "thinner than one atomic layer"),
     ({"thickness": "1e308 km"}, "thickness", "too large"),

@@ -54,6 +54,21 @@ def quiet_resistivity(m, t):
         return -1.0
 
 
+def recorded_mean_free_path_temperature(m):
+    """The temperature [K] the record's mean free path holds at (the reference temperature if unsaid)."""
+    if m["mean_free_path_t"] > 0:
+        return m["mean_free_path_t"]
+    return m["t_ref"]
+
+
+def mean_free_path_origin(m):
+    """Where the record's mean free path comes from, in words: "on record", or "from ρ·ℓ on record"
+    (derive.own_mean_free_path: a recorded ρ·ℓ product over the reference resistivity)."""
+    if m["mean_free_path_how"] == "rho-lambda":
+        return "from ρ·ℓ on record"
+    return "on record"
+
+
 def recorded_mean_free_path(m, rho, t):
     """The mean free path on record for m, carried to temperature t [K] where ρ = rho: [ℓ [m], how].
 
@@ -64,9 +79,7 @@ def recorded_mean_free_path(m, rho, t):
     """
     if not (m["mean_free_path"] > 0):
         return [-1.0, "none"]
-    t_mfp = m["mean_free_path_t"]
-    if not (t_mfp > 0):
-        t_mfp = m["t_ref"]
+    t_mfp = recorded_mean_free_path_temperature(m)
     if abs(t - t_mfp) <= 0.5:
         return [m["mean_free_path"], "as recorded"]
     rho_then = quiet_resistivity(m, t_mfp)

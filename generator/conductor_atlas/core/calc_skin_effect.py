@@ -110,7 +110,9 @@ def mean_free_path_check(outcome, m, rho, t, delta):
     mfp = found[0]
     how = "as recorded"
     source = m["mean_free_path_source"]
-    if found[1] == "scaled":
+    if m["mean_free_path_how"] == "rho-lambda":
+        how = "ρ·ℓ on record ÷ ρ"
+    elif found[1] == "scaled":
         how = "recorded, scaled by ρ·ℓ = const"
     if found[1] == "unscaled":
         how = "recorded, unscaled (no ρ model at its temperature)"

@@ -6,7 +6,9 @@ from conductor_atlas.core import size_effect as sz
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
-from conductor_atlas.core.calc_common import material_resistivity, quiet_resistivity, read_material, read_temperature
+from conductor_atlas.core.calc_common import (material_resistivity, mean_free_path_origin, read_material,
+                                              read_temperature, recorded_mean_free_path,
+                                              recorded_mean_free_path_temperature)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 TITLE = "Thin-film resistivity"
@@ -65,20 +67,17 @@ def bulk_mean_free_path(outcome, inputs, m, rho, t):
         if require_positive(outcome, "mean_free_path", mfp, "the mean free path"):
             return mfp
         return None
-    if m["mean_free_path"] > 0:
-        t_mfp = m["mean_free_path_t"]
-        if not (t_mfp > 0):
-            t_mfp = m["t_ref"]
-        if abs(t - t_mfp) <= 0.5:
-            return m["mean_free_path"]
-        rho_then = quiet_resistivity(m, t_mfp)
-        if rho_then > 0:
-            add_warning(outcome, "the mean free path on record (" + format_si(m["mean_free_path"], "m", 3) + " at "
-                        + kelvin_text(t_mfp) + ") is scaled to the film temperature with ρ·ℓ held constant")
-            return m["mean_free_path"] * rho_then / rho
-        add_warning(outcome, "the mean free path on record (" + format_si(m["mean_free_path"], "m", 3) + " at "
-                    + kelvin_text(t_mfp) + ") is used unscaled: no resistivity model reaches that temperature")
-        return m["mean_free_path"]
+    found = recorded_mean_free_path(m, rho, t)
+    if found[1] == "as recorded":
+        return found[0]
+    if found[1] != "none":
+        record = "the mean free path " + mean_free_path_origin(m) + " (" + format_si(m["mean_free_path"], "m", 3) + " at "
+        record = record + kelvin_text(recorded_mean_free_path_temperature(m)) + ")"
+        if found[1] == "scaled":
+            add_warning(outcome, record + " is scaled to the film temperature with ρ·ℓ held constant")
+        else:
+            add_warning(outcome, record + " is used unscaled: no resistivity model reaches that temperature")
+        return found[0]
     if m["electron_density"] > 0:
         add_warning(outcome, "no mean free path is on record for " + m["name"] + "; using the free-electron value "
                              "ℓ = ħ k_F / (n e² ρ), which can be off by a factor of several for transition metals")
