@@ -189,6 +189,10 @@ def test_worker_lists_every_file_and_only_those():
     listed = json.loads(out[WORKER].decode().split("const FILES = ", 1)[1].split(";\n", 1)[0])
     assert listed == sorted(p for p in out if p != WORKER)
     assert "static/app.classic.js" in listed and "static/plain.classic.js" not in listed
+    # search-index.js serves pages opened from files only, where there is no worker
+    with_index = add_offline_files(small_site(**{"search-index.json": b"{}\n", "search-index.js": b"self.x = {};\n"}))
+    listed = json.loads(with_index[WORKER].decode().split("const FILES = ", 1)[1].split(";\n", 1)[0])
+    assert "search-index.json" in listed and "search-index.js" not in listed
     assert MANIFEST in listed
 
 

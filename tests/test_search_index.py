@@ -93,6 +93,14 @@ def test_numbers_are_si_and_match_the_data_files(site_index):
     assert copper["props"]["iacs_20"] * copper["props"]["rho_20"] == pytest.approx(1 / 58 * 1e-6, rel=1e-9)
 
 
+def test_the_script_for_file_pages_holds_the_same_index(built_site, shipped):
+    text = (built_site / "search-index.js").read_text(encoding="utf-8")
+    head = "self.conductorAtlasSearchIndex = "
+    line = [row for row in text.split("\n") if row.startswith(head)]
+    assert len(line) == 1 and line[0].endswith(";")
+    assert json.loads(line[0][len(head):-1]) == shipped
+
+
 def test_index_is_repeatable_and_compact():
     dataset = load_dataset(data_folders())
     views = derive(dataset)

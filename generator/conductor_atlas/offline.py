@@ -6,7 +6,8 @@
   script that also runs on a page opened from a file, where browsers refuse module scripts;
 - ``site.webmanifest``: name, start page and icons, so a tablet can install the site;
 - ``sw.js`` (from templates/sw.js.j2): a service worker that, on the first served visit, stores
-  every other file of the site in one cache and then answers from it, network or not. Its cache
+  every other file of the site (but search-index.js, which only pages opened from files use) in one
+  cache and then answers from it, network or not. Its cache
   name carries a hash of every file's path and bytes, so any change to the site is a new cache
   and the old one is deleted when the new worker takes over.
 
@@ -25,6 +26,7 @@ from conductor_atlas.bundle import bundle
 from conductor_atlas.cache import files_key
 from conductor_atlas.errors import BuildError
 from conductor_atlas.paths import TEMPLATES_DIR
+from conductor_atlas.search_index import INDEX_SCRIPT_PATH
 
 APP_NAME = "Conductor Atlas"
 SHORT_NAME = "Atlas"
@@ -91,8 +93,9 @@ def cache_version(files: dict[str, bytes]) -> str:
 
 
 def precache_list(files: dict[str, bytes]) -> list[str]:
-    """Every file of the site, as URLs relative to sw.js (the site root)."""
-    return sorted(p for p in files if p != WORKER)
+    """Every file of the site, as URLs relative to sw.js (the site root), but the worker itself and
+    search-index.js (served pages fetch search-index.json; the script is for pages opened from files)."""
+    return sorted(p for p in files if p != WORKER and p != INDEX_SCRIPT_PATH)
 
 
 def service_worker(files: dict[str, bytes]) -> bytes:

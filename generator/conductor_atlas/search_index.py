@@ -7,6 +7,9 @@ no calculator pages, the calculator embedded in each material page gets an entry
 
 search-index.json holds these entries already prepared by ``core.search.prepare_index`` (lists of
 words, postings and records, no per-entry objects), so the browser searches the parsed file as it is.
+search-index.js is the same JSON as a classic script that hands it to the page
+(``self.conductorAtlasSearchIndex = …``): a page opened from a file cannot fetch, but it can load a
+script, so search works from a copied folder too. The service worker does not store it.
 
 Pure: takes the data set, the derived views and the rendered files; returns bytes. Writes nothing.
 """
@@ -26,6 +29,8 @@ from conductor_atlas.render import CARD_UNITS, SITE_NAME
 from conductor_atlas.schema import CLASSES, PROPERTIES
 
 INDEX_PATH = "search-index.json"
+INDEX_SCRIPT_PATH = "search-index.js"     # the same index for pages opened from files
+INDEX_SCRIPT_GLOBAL = "conductorAtlasSearchIndex"
 TITLE_TAG = re.compile(r"<title>(.*?)</title>", re.S)
 H1_TAG = re.compile(r"<h1[^>]*>(.*?)</h1>", re.S)
 CALCULATOR_HEADING = re.compile(r'<h2 id="calculator-title">(.*?)<', re.S)
@@ -173,6 +178,14 @@ def index_json(index: dict) -> bytes:
     return (json.dumps(index, ensure_ascii=False, sort_keys=True, separators=(",", ":")) + "\n").encode("utf-8")
 
 
+def index_script(json_bytes: bytes) -> bytes:
+    """search-index.js: a classic script that sets self.conductorAtlasSearchIndex to the index (JSON is
+    a JS expression, U+2028/U+2029 included since ES2019)."""
+    return (b"// Conductor Atlas search index, for pages opened from files (served pages fetch search-index.json).\n"
+            b"self." + INDEX_SCRIPT_GLOBAL.encode("ascii") + b" = " + json_bytes.rstrip(b"\n") + b";\n")
+
+
 def search_index_files(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[str, bytes]) -> dict[str, bytes]:
-    """{"search-index.json": bytes} for the publish stage."""
-    return {INDEX_PATH: index_json(shipped_index(build_index(dataset, views, files)))}
+    """{"search-index.json": bytes, "search-index.js": bytes} for the publish stage."""
+    data = index_json(shipped_index(build_index(dataset, views, files)))
+    return {INDEX_PATH: data, INDEX_SCRIPT_PATH: index_script(data)}

@@ -5,7 +5,7 @@
 // Marks <html> with search-ready at once, as search.js does when it starts.
 (function () {
   'use strict';
-  if (window.location.protocol === 'file:' || !document.currentScript) return;
+  if (!document.currentScript) return;
   var source = new URL('search.classic.js', document.currentScript.src).href;
   // the boxes take typing from now on (search.css hides the "needs a served site" notes)
   document.documentElement.classList.add('search-ready');

@@ -1,6 +1,7 @@
 // Conductor Atlas search glue: turns each search form into a combobox and shows what the core finds.
 // The matching, the filters and their unit parsing live in the core (conductor_atlas.core.search);
-// this file only fetches search-index.json, passes typed text to the core and builds the list.
+// this file only loads the index (search-index.json, or search-index.js from a file), passes typed
+// text to the core and builds the list.
 // The build writes the index already prepared (core.search.prepare_index: lists only below the top
 // level), so the parsed file is searched as it is and each keystroke is searched synchronously.
 // Typed text and index text reach the page through textContent only, never as markup.
@@ -17,13 +18,29 @@ const ANNOUNCE_PAUSE = 350;  // ms without typing before the live region reads t
 
 let indexPromise = null;
 
+// A page opened from a file cannot fetch: there the build's search-index.js, a classic script
+// holding the same index, hands it over through self.conductorAtlasSearchIndex.
+function indexFromScript() {
+  return new Promise((resolve, reject) => {
+    if (self.conductorAtlasSearchIndex) { resolve(self.conductorAtlasSearchIndex); return; }
+    const script = document.createElement('script');
+    script.src = new URL('search-index.js', SITE_ROOT).href;
+    script.onload = () => resolve(self.conductorAtlasSearchIndex || null);
+    script.onerror = () => reject(new Error('search-index.js did not load'));
+    document.head.appendChild(script);
+  });
+}
+
+function indexFromServer() {
+  return fetch(new URL('search-index.json', SITE_ROOT)).then((response) => {
+    if (!response.ok) throw new Error('HTTP ' + response.status);
+    return response.json();
+  });
+}
+
 function loadIndex() {
   if (indexPromise === null) {
-    indexPromise = fetch(new URL('search-index.json', SITE_ROOT))
-      .then((response) => {
-        if (!response.ok) throw new Error('HTTP ' + response.status);
-        return response.json();
-      })
+    indexPromise = (window.location.protocol === 'file:' ? indexFromScript() : indexFromServer())
       .then((data) => {
         if (data === null || data.format !== INDEX_FORMAT) {
           throw new Error('search-index.json is not in format ' + INDEX_FORMAT + '; rebuild the site');
@@ -261,18 +278,14 @@ class SearchBox {
   }
 }
 
-// A page opened from a file cannot fetch the index: the forms stay plain links to the search
-// page, which then says that search needs the served site.
-if (window.location.protocol !== 'file:') {
-  const boxes = Array.from(document.querySelectorAll('form[data-search]')).map((form) => new SearchBox(form));
-  for (const box of boxes) {
-    if (box.mode === 'page') {
-      const typed = new URLSearchParams(window.location.search).get('q');
-      if (typed) box.input.value = typed;
-      box.ensureIndex().then(() => box.run(), () => {});
-    } else if (document.activeElement === box.input && box.input.value.trim() !== '') {
-      box.run();  // typed while this script was loading (static/search-loader.js)
-    }
+const boxes = Array.from(document.querySelectorAll('form[data-search]')).map((form) => new SearchBox(form));
+for (const box of boxes) {
+  if (box.mode === 'page') {
+    const typed = new URLSearchParams(window.location.search).get('q');
+    if (typed) box.input.value = typed;
+    box.ensureIndex().then(() => box.run(), () => {});
+  } else if (document.activeElement === box.input && box.input.value.trim() !== '') {
+    box.run();  // typed while this script was loading (static/search-loader.js)
   }
-  document.documentElement.classList.add('search-ready');
 }
+document.documentElement.classList.add('search-ready');

@@ -25,8 +25,10 @@ def result_values(page) -> dict[str, str | None]:
 
 
 def site_files(folder: Path) -> list[str]:
+    """What the worker stores: every file but the marker, the worker and search-index.js (for file:// only)."""
     return sorted(p.relative_to(folder).as_posix() for p in folder.rglob("*")
-                  if p.is_file() and p.name != MARKER and p.as_posix() != (folder / WORKER).as_posix())
+                  if p.is_file() and p.name != MARKER and p.as_posix() != (folder / WORKER).as_posix()
+                  and p.as_posix() != (folder / "search-index.js").as_posix())
 
 
 def open_and_wait_for_worker(page, url: str) -> dict[str, list[str]]:
@@ -120,7 +122,7 @@ def test_rebuild_brings_a_new_cache_and_drops_the_old(context, own_site):
     # a rebuild that changes one page: rewrite that page, and sw.js exactly as the build makes it
     index = folder / "index.html"
     index.write_bytes(index.read_bytes().replace(b"</main>", b"<p id=rebuilt>New build.</p></main>"))
-    files = {p: (folder / p).read_bytes() for p in site_files(folder)}
+    files = {p: (folder / p).read_bytes() for p in site_files(folder) + ["search-index.js"]}
     (folder / WORKER).write_bytes(service_worker(files))
 
     page.evaluate("navigator.serviceWorker.getRegistration().then(r => r.update())")
