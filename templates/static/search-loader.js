@@ -7,7 +7,7 @@
   'use strict';
   if (!document.currentScript) return;
   var source = new URL('search.classic.js', document.currentScript.src).href;
-  // the boxes take typing from now on (search.css hides the "needs a served site" notes)
+  // the boxes take typing from now on (search.css hides the search page's "needs JavaScript" note)
   document.documentElement.classList.add('search-ready');
   var requested = false;
   function load() {
