@@ -107,8 +107,10 @@ def service_worker(files: dict[str, bytes]) -> bytes:
 
 
 def scripts_of(files: dict[str, bytes]) -> dict[str, bytes]:
-    """The files classic_bundles reads: every .js file (the bundles depend on nothing else)."""
-    return {p: data for p, data in files.items() if p.endswith(".js")}
+    """The files classic_bundles reads: the scripts in static/ and the transpiled modules in js/
+    (the bundles depend on nothing else; search-index.js, which follows the data, is not one)."""
+    return {p: data for p, data in files.items() if p.endswith(".js") and (p.startswith("static/")
+                                                                        or p.startswith("js/"))}
 
 
 def add_offline_files(files: dict[str, bytes], bundles: dict[str, bytes] | None = None) -> dict[str, bytes]:
