@@ -118,6 +118,18 @@ def test_exact_alias_outranks_fuzzy_and_prefix(index):
     assert results[0]["snippet"].startswith("Also known as")
 
 
+def test_one_letter_starts_the_titles(index):
+    # the first keystroke in the header box: materials whose name starts with it come first
+    # (common practice for type-ahead lists, no source); a symbol that is a whole alias still wins
+    for letter in "cnsat":
+        titles = [r["title"] for r in search(index, letter, 8)["results"]]
+        starts = [t.lower().startswith(letter) for t in titles]
+        assert len(titles) == 8 and starts[0] and starts == sorted(starts, reverse=True), (letter, titles)
+    assert first_ids(index, "n") == ["nickel"]
+    assert first_ids(index, "w") == ["tungsten"]
+    assert first_ids(index, "k") == ["potassium"]
+
+
 def test_short_exact_word_drops_its_fuzzy_neighbours(index):
     # "gold" exists, so words one typo away ("cold", "bold") are not offered as matches
     titles = [r["title"] for r in search(index, "gold", 0)["results"]]

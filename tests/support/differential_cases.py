@@ -227,7 +227,7 @@ def all_cases():
 
 SEARCH_QUERIES = [
     "copper", "Copper", "COPPER", "cooper", "coper", "nickle", "aluminum", "alumínium", "ALUMINIUM", "aluminim",
-    "tungsten", "wolfram", "w", "cu", "A91350", "uns a91350", "c17200", "C172", "cca 10", "CCA-10", "2.4869",
+    "tungsten", "wolfram", "w", "c", "n", "s", "7", "cu", "A91350", "uns a91350", "c17200", "C172", "cca 10", "CCA-10", "2.4869",
     "skin depth", "skin", "resistivity temperature", "debye", "mean free path", "calculator", "resistance calculator",
     "references", "gold film", "copper alloy", "the", "   ", "", "Ωµ²·", "crème brûlée", "zzzz qqqq",
     "resistivity < 3 µΩ·cm", "resistivity < 3 μΩ*cm", "resistivity <= 1.7241 uohm cm", "rho < 2e-8 ohm m",

@@ -16,7 +16,8 @@ Every key but id, kind, title and url may be missing.
 
 Matching (``token_match``): after ``fold_text`` (lower case, accents stripped with an explicit
 table, µ/μ, Ω, ², ·, Greek letters unified) text is cut into runs of a-z and 0-9. A query word
-matches an entry word exactly, as a prefix (two characters or more), or within a typo budget
+matches an entry word exactly, as a prefix (from one character, so a first keystroke already lists
+the names it starts), or within a typo budget
 measured by the optimal-string-alignment distance (Damerau–Levenshtein with adjacent
 transpositions): 0 typos for words of up to 3 characters, 1 for 4–7, 2 for 8 or more. Words
 with digits (designations such as C17200, A91350) never match fuzzily: 1350 is not 1351. When a
@@ -252,7 +253,7 @@ def word_match(query_word, word, fuzzy):
     if query_word == word:
         return [1.0, 0]
     size = len(query_word)
-    if size >= 2 and len(word) > size and word.startswith(query_word):
+    if size >= 1 and len(word) > size and word.startswith(query_word):
         return [0.7 + 0.3 * size / len(word), 0]
     if not fuzzy:
         return [0.0, 0]
@@ -853,7 +854,7 @@ def score_entry(index, record, base, marks, query_words, query_text, query_compa
                 score += 100.0
                 break
     title_words = record[E_TITLE_WORDS]
-    if len(query_text) >= 2 and may_start_title(index["vocabulary"], record, query_words[0]):
+    if len(query_text) >= 1 and may_start_title(index["vocabulary"], record, query_words[0]):
         if title_text(index["vocabulary"], title_words).startswith(query_text):
             score += 20.0
     if len(title_words) > 0:
@@ -1123,7 +1124,7 @@ def search(index, query, limit):
         # bonus a title whose first word starts with the first query word
         size_bit = key_size_bit(len(query_compact)) if len(query_compact) > 0 else 0
         starts = []
-        if len(query_text) >= 2:
+        if len(query_text) >= 1:
             for word in index["vocabulary"]:
                 starts.append(word.startswith(query_words[0]))
         full = False
