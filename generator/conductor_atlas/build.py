@@ -83,7 +83,6 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
     return add_offline_files(files, bundles)  # last: the service worker lists every other file
 
 
-
 def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
     start = time.perf_counter()
     # The output lock is taken first: a second build into the same folder is refused at once.

@@ -25,14 +25,12 @@ from conductor_atlas.cache import files_key
 from conductor_atlas.errors import BuildError
 
 MARKER = ".conductor-atlas-site"
+MARKER_TEXT = "Built by conductor-atlas; this folder is replaced on each build.\n"
 
 
 class Published(NamedTuple):
     folder: Path     # the site's folder, resolved
     written: bool    # False: it already held exactly these files, nothing was written
-
-
-MARKER_TEXT = "Built by conductor-atlas; this folder is replaced on each build.\n"
 
 
 def check_replaceable(out: Path) -> None:

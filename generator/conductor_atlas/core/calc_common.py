@@ -96,8 +96,8 @@ ANOMALOUS_PATH_RATIO = 0.3
 
 
 def warn_if_anomalous(outcome, mfp, delta):
-    """Warn when the mean free path mfp [m] (≤ 0: unknown) exceeds ANOMALOUS_PATH_RATIO · δ [m]."""
-    if not (mfp > 0) or not (mfp > ANOMALOUS_PATH_RATIO * delta):
+    """Warn when the mean free path mfp [m] (≤ 0: unknown) exceeds ANOMALOUS_PATH_RATIO · δ [m] (δ > 0)."""
+    if not (mfp > ANOMALOUS_PATH_RATIO * delta):
         return
     add_warning(outcome, "the electrons' mean free path (" + format_si(mfp, "m", 3) + ") is "
                 + format_number(mfp / delta, 3) + " δ: the classical skin depth assumes ℓ much shorter than δ. "

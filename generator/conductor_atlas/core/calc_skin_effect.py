@@ -28,7 +28,8 @@ RESULT_LABELS = [
     ["ac_dc_ratio", "AC/DC resistance ratio"], ["resistance", "DC resistance per metre (Ω/m)"],
     ["resistance_ac", "AC resistance per metre (Ω/m)"], ["depth_ratio", "Radius or half-thickness over δ"],
     ["area", "Cross-section"], ["resistivity", "Resistivity at temperature"], ["temperature", "Temperature"],
-    ["mean_free_path", "Electron mean free path ℓ (estimate)"], ["path_ratio", "Mean free path over skin depth ℓ/δ"],
+    ["mean_free_path", "Electron mean free path ℓ (estimate)"],
+    ["path_ratio", "Mean free path over skin depth ℓ/δ"],
 ]
 CAUTION = ("An isolated straight conductor: proximity to other conductors, stranding and magnetic armour raise the "
            "AC resistance further. A physics estimate, not a cable rating.")
@@ -108,14 +109,14 @@ def mean_free_path_check(outcome, m, rho, t, delta):
     with calc_common.warn_if_anomalous's warning."""
     found = recorded_mean_free_path(m, rho, t)
     mfp = found[0]
-    how = "as recorded"
     source = m["mean_free_path_source"]
-    if m["mean_free_path_how"] == "rho-lambda":
+    how = "as recorded"
+    if found[1] == "unscaled":
+        how = "recorded, unscaled (no ρ model at its temperature)"
+    elif m["mean_free_path_how"] == "rho-lambda":
         how = "ρ·ℓ on record ÷ ρ"
     elif found[1] == "scaled":
         how = "recorded, scaled by ρ·ℓ = const"
-    if found[1] == "unscaled":
-        how = "recorded, unscaled (no ρ model at its temperature)"
     if not (mfp > 0) and m["electron_density"] > 0:
         mfp = fe.mean_free_path(rho, m["electron_density"])
         how = "free-electron ħk_F/(n e² ρ)"

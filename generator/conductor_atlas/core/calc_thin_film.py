@@ -71,12 +71,12 @@ def bulk_mean_free_path(outcome, inputs, m, rho, t):
     if found[1] == "as recorded":
         return found[0]
     if found[1] != "none":
-        record = "the mean free path " + mean_free_path_origin(m) + " (" + format_si(m["mean_free_path"], "m", 3) + " at "
-        record = record + kelvin_text(recorded_mean_free_path_temperature(m)) + ")"
+        which = ("the mean free path " + mean_free_path_origin(m) + " (" + format_si(m["mean_free_path"], "m", 3)
+                 + " at " + kelvin_text(recorded_mean_free_path_temperature(m)) + ")")
         if found[1] == "scaled":
-            add_warning(outcome, record + " is scaled to the film temperature with ρ·ℓ held constant")
+            add_warning(outcome, which + " is scaled to the film temperature with ρ·ℓ held constant")
         else:
-            add_warning(outcome, record + " is used unscaled: no resistivity model reaches that temperature")
+            add_warning(outcome, which + " is used unscaled: no resistivity model reaches that temperature")
         return found[0]
     if m["electron_density"] > 0:
         add_warning(outcome, "no mean free path is on record for " + m["name"] + "; using the free-electron value "

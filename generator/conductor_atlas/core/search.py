@@ -843,7 +843,8 @@ def score_entry(index, record, base, marks, query_words, query_text, query_compa
 
     +100 when the query, compacted, is the entry's id, title or an alias; +20 when the title
     starts with the query; up to +3 for the share of the title's words the query matches, +1
-    when the first query word matches the title's first word; the kind's bonus.
+    when the first query word matches the title's first word; the kind's bonus. ``query_words``
+    is never empty (the caller scores only entries its words reached).
     """
     score = base
     size = len(query_compact)
@@ -854,7 +855,7 @@ def score_entry(index, record, base, marks, query_words, query_text, query_compa
                 score += 100.0
                 break
     title_words = record[E_TITLE_WORDS]
-    if len(query_text) >= 1 and may_start_title(index["vocabulary"], record, query_words[0]):
+    if may_start_title(index["vocabulary"], record, query_words[0]):
         if title_text(index["vocabulary"], title_words).startswith(query_text):
             score += 20.0
     if len(title_words) > 0:
@@ -1124,9 +1125,8 @@ def search(index, query, limit):
         # bonus a title whose first word starts with the first query word
         size_bit = key_size_bit(len(query_compact)) if len(query_compact) > 0 else 0
         starts = []
-        if len(query_text) >= 1:
-            for word in index["vocabulary"]:
-                starts.append(word.startswith(query_words[0]))
+        for word in index["vocabulary"]:
+            starts.append(word.startswith(query_words[0]))
         full = False
         for c in range(count):
             if words > 1 and words_matched(gains, words, c) != wanted:
