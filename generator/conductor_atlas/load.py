@@ -358,7 +358,8 @@ def load_dataset(folders: list[Path]) -> DataSet:
     """Load and validate every folder (the first is the shipped data/), all problems at once.
 
     Each folder may hold sources.toml (merged; a key defined twice is an error) and material
-    files. Ids and aliases must be unique across all folders, case-insensitively.
+    files. Ids and aliases must be unique across all folders, case-insensitively. Every material
+    must also derive what the build derives from it (``derived_checks``), so what loads builds.
     """
     problems = Problems()
     sources: dict[str, Source] = {}
@@ -401,6 +402,10 @@ def load_dataset(folders: list[Path]) -> DataSet:
                 names[key] = (kind, m.path)
     if not materials and not problems.lines:
         problems.add(display_path(folders[0]), "holds no material files")
+    # what passes here builds: run what the build derives from each material (derived_checks)
+    from conductor_atlas.derived_checks import material_problems  # imports derive, which imports numpy
+    for m in materials:
+        problems.lines.extend(material_problems(m, display_path(m.path)))
     if problems.lines:
         raise DataError(problems.lines)
     materials.sort(key=lambda m: m.id)
