@@ -4,7 +4,7 @@ VENV := .venv
 PY := $(VENV)/bin/python
 STAMP := $(VENV)/.installed
 
-.PHONY: site serve test bench check clean
+.PHONY: site serve test bench check clean datasets
 
 $(STAMP): pyproject.toml
 	$(PYTHON) -m venv $(VENV)
@@ -21,7 +21,11 @@ serve: site
 check: $(STAMP)
 	$(VENV)/bin/conductor-atlas check
 
-test: $(STAMP)
+# element datasets from PyPI packages, installed without their dependencies (tests/support/element_datasets.py)
+datasets: $(STAMP)
+	$(PY) -m tests.support.element_datasets
+
+test: $(STAMP) datasets
 	$(PY) -m pytest -q
 
 bench: $(STAMP)
