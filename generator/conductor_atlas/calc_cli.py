@@ -24,8 +24,8 @@ def add_calc_parser(sub) -> None:
     calcs.required = True
     for name in sorted(CALCULATORS):
         module = MODULES[name]
-        summary = module.SUMMARY.replace("%", "%%")  # argparse formats help text with %
-        p = calcs.add_parser(name, help=summary, description=summary)
+        # argparse formats help text with % (so "%IACS" is written "%%IACS" there), not the description
+        p = calcs.add_parser(name, help=module.SUMMARY.replace("%", "%%"), description=module.SUMMARY)
         for field in module.FIELDS:
             label, hint = module.FIELD_INFO[field]
             default = module.DEFAULTS.get(field, "")

@@ -7,6 +7,7 @@ problem and exit 1, with no traceback.
 from __future__ import annotations
 
 import argparse
+import os
 import sys
 from pathlib import Path
 
@@ -82,7 +83,14 @@ COMMANDS = {"new-material": cmd_new_material, "build": cmd_build, "check": cmd_c
 def main(argv: list[str] | None = None) -> int:
     args = build_parser().parse_args(argv)
     try:
-        return COMMANDS[args.command](args)
+        code = COMMANDS[args.command](args)
+        sys.stdout.flush()  # a closed pipe shows here, inside the try, not at interpreter exit
+        return code
+    except BrokenPipeError:
+        # the reader went away (`calc ... | head`): stop quietly, as other command-line tools do;
+        # stdout goes to devnull so the interpreter's final flush cannot raise again
+        os.dup2(os.open(os.devnull, os.O_WRONLY), sys.stdout.fileno())
+        return 1
     except DataError as exc:
         for line in exc.problems:
             print(f"conductor-atlas: {line}", file=sys.stderr)

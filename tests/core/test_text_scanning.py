@@ -19,7 +19,10 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
 
 # --- the former definitions (units.py, geometry.py and search.py compiled these) -------------------
-NUMBER_PATTERN = re.compile(r"^([+-]?(?:[0-9]+(?:[.,][0-9]*)?|[.,][0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(.*)$")
+# ... extended since by groups: "1,500,000", "12,500.5", "1 500" (a space and exactly three digits);
+# what the separators mean is units.grouped_number_text's job, checked in test_units.py
+NUMBER_PATTERN = re.compile(r"^([+-]?(?:[0-9]+(?:[.,][0-9]+| [0-9]{3}(?![0-9]))*[.,]?|[.,][0-9]+)(?:[eE][+-]?[0-9]+)?)"
+                            r"\s*(.*)$")
 UNPORTABLE_PATTERN = re.compile(r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f-\x9f\ufeff]")
 LINE_BREAKS = re.compile(r"[\n\r\u2028\u2029]")
 SPACED_STAR = re.compile(r"\s*\*\s*")
@@ -95,10 +98,7 @@ def regex_parse_number(text, field):
     if SECOND_SEPARATOR.match(rest) is not None:
         raise CoreError("“" + text + "” mixes a decimal comma and a decimal point, or has two separators; "
                         "write it as 1234.5 or 1234,5", field)
-    if "," in number_text:
-        if "." in number_text:
-            raise CoreError("“" + number_text + "” mixes a decimal comma and a decimal point", field)
-        number_text = number_text.replace(",", ".")
+    number_text = units.grouped_number_text(number_text, field)
     value = float(number_text)
     if value - value != 0:
         raise CoreError("“" + number_text + "” is not a finite number", field)
@@ -231,7 +231,7 @@ def test_fast_paths_of_the_text_cleaners_change_nothing(text):
     slow = slow_portable
     for old, new in [("−", "-"), ("–", "-"), ("µ", "u"), ("μ", "u"), ("Ω", "ohm"), ("Ω", "ohm"), ("²", "2"),
                      ("^2", "2"), ("³", "3"), ("^3", "3"), ("°", "deg"), ("·", "*"), ("⋅", "*"),
-                     ("\u00a0", " "), ("\u202f", " ")]:
+                     ("\u00a0", " "), ("\u202f", " "), ("\u2009", " ")]:
         slow = slow.replace(old, new)
     assert units.normalise_text(text) == slow
     assert units.normalise_unit(text) == regex_normalise_unit(text)

@@ -75,7 +75,7 @@ def test_forms_people_type(text, kind, expected):
     ("5", "length", "needs a unit"),
     ("5 kg", "length", "unknown unit “kg”"),
     ("5 A", "length", "is a current"),
-    ("1,234.5 m", "length", "mixes a decimal comma and a decimal point"),
+    ("1,2.5 m", "length", "is not a number as written"),
     ("1e999 m", "length", "not a finite number"),
     ("1 Mohm", "resistance", "unknown unit"),   # mega is not offered: refuse rather than read milli
     ("5 MA", "current", "unknown unit"),
@@ -89,3 +89,50 @@ def test_bad_input_names_the_problem(text, kind, words):
 
 def test_every_kind_has_an_si_symbol():
     assert {entry[0] for entry in UNITS.values()} <= set(SI_UNIT)
+
+
+# --- thousands separators and decimal commas (issue 13 item 1; the rule is in README "Typing numbers") ---
+# Each expected value is the reading both conventions agree on (exact in binary or the nearest
+# float of the decimal text, so == is the right comparison: the parser builds the same decimal text).
+@pytest.mark.parametrize("text, metres", [
+    ("1,500,000 m", 1500000.0),     # groups of three after a short first group: thousands
+    ("1.500.000 m", 1500000.0),
+    ("12,500.5 m", 12500.5),        # thousands groups, then the other mark as decimal
+    ("1.234,5 m", 1234.5),
+    ("1 500 m", 1500.0),            # a space between thousands
+    ("1\u2009500 m", 1500.0),       # thin space
+    ("1\u202f500 m", 1500.0),       # narrow no-break space
+    ("1\u00a0500 m", 1500.0),       # no-break space
+    ("12 500 000 m", 12500000.0),
+    ("1 500,5 m", 1500.5),
+    ("0,820 m", 0.82),              # a leading 0 cannot open a thousands group: decimal comma
+    ("1,5 m", 1.5),
+    ("1,5000 m", 1.5),              # four digits after the comma: not a group
+    ("1234,567 m", 1234.567),       # a first group of four digits: not grouped
+    ("1.500 m", 1.5),               # decimal point (with a note, see below)
+])
+def test_grouped_and_decimal_comma_numbers(text, metres):
+    assert parse_quantity(text, "length", "length") == metres
+
+
+@pytest.mark.parametrize("text, words", [
+    ("1,500 ft", "“1,500” could be 1500 (comma between thousands) or 1.5 (decimal comma): write 1500 or 1.5"),
+    ("12,500 m", "“12,500” could be 12500 (comma between thousands) or 12.5 (decimal comma): write 12500 or 12.5"),
+    ("-1,250 m", "write -1250 or -1.25"),
+    ("1,5,5 m", "is not a number as written"),
+    ("1,500.000,5 m", "is not a number as written"),
+    ("0 500 m", "is not a number as written"),
+])
+def test_a_number_read_two_ways_is_refused_with_both_readings(text, words):
+    with pytest.raises(CoreError) as caught:
+        parse_quantity(text, "length", "length")
+    assert words in caught.value.message
+    assert caught.value.field == "length"
+
+
+def test_a_point_before_three_digits_is_read_as_decimal_and_said():
+    from conductor_atlas.core.units import point_reading_note
+    assert point_reading_note("1.500 m", "length") == ("length: “1.500” is read with a decimal point as 1.5; "
+                                                       "for 1500 write 1500")
+    for plain in ["1.5 m", "0.500 m", "1500 m", "1.5000 m", "1.500e3 m", "1,500,000 m", "abc"]:
+        assert point_reading_note(plain, "length") == ""

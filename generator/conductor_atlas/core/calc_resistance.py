@@ -6,7 +6,8 @@ from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
+                                          has_errors, kelvin_text, new_outcome, note_point_reading, read_quantity,
+                                          require_positive)
 from conductor_atlas.core.calc_common import (material_resistivity, read_material, read_temperature,
                                               recorded_mean_free_path, warn_if_anomalous)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
@@ -39,11 +40,14 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
 
 
 def read_size(outcome, inputs, field):
+    text = field_text(inputs, field)
     try:
-        return parse_size(field_text(inputs, field), field)
+        size = parse_size(text, field)
     except CoreError as problem:
         add_error(outcome, field, problem.message)
         return None
+    note_point_reading(outcome, text, field)
+    return size
 
 
 def ac_ratio(outcome, size, rho, f, mu_r):

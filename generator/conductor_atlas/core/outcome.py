@@ -8,7 +8,7 @@ Bad input never raises out of a calculator: the message goes under errors[field]
 """
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity, portable_text
+from conductor_atlas.core.units import parse_quantity, point_reading_note, portable_text
 from conductor_atlas.core.numfmt import format_fixed
 
 
@@ -101,10 +101,20 @@ def read_quantity(outcome, inputs, field, kind, required, default_text=""):
         elif not required:
             return None
     try:
-        return parse_quantity(text, kind, field)
+        value = parse_quantity(text, kind, field)
     except CoreError as problem:
         add_error(outcome, field, problem.message)
         return None
+    note_point_reading(outcome, text, field)
+    return value
+
+
+def note_point_reading(outcome, text, field):
+    """Say so when ``text`` was read with a decimal point before three digits ("1.500 m" is 1.5 m,
+    1500 m to a reader of the thousands-point convention): units.point_reading_note."""
+    note = point_reading_note(text, field)
+    if len(note) > 0:
+        add_warning(outcome, note)
 
 
 def require_positive(outcome, field, value, what):

@@ -221,7 +221,7 @@ def normalise_text(text):
     out = out.replace("Ω", "ohm").replace("Ω", "ohm")
     out = out.replace("²", "2").replace("^2", "2").replace("³", "3").replace("^3", "3")
     out = out.replace("°", "deg").replace("·", "*").replace("⋅", "*")
-    out = out.replace("\u00a0", " ").replace("\u202f", " ")
+    out = out.replace("\u00a0", " ").replace("\u202f", " ").replace("\u2009", " ")
     return out
 
 
@@ -279,12 +279,24 @@ def is_digit(ch):
     return ch >= "0" and ch <= "9"
 
 
+def is_group_at(text, i):
+    """True when text[i] is a space followed by exactly three digits and then no digit: a space
+    between thousands ("1 500"; thin and no-break spaces are made spaces by normalise_text)."""
+    n = len(text)
+    if not (i + 3 < n and text[i] == " "):
+        return False
+    if not (is_digit(text[i + 1]) and is_digit(text[i + 2]) and is_digit(text[i + 3])):
+        return False
+    return not (i + 4 < n and is_digit(text[i + 4]))
+
+
 def number_end(text):
     """Where the number at the start of ``text`` ends; 0 for none.
 
-    The number the former pattern ``[+-]?(?:[0-9]+(?:[.,][0-9]*)?|[.,][0-9]+)(?:[eE][+-]?[0-9]+)?``
-    matched, with its greedy choices: sign, digits with an optional separator and digits (or a
-    separator and at least one digit), then an exponent only when it has a digit.
+    Sign; digits, then any run of separated groups: "," or "." with the digits after it (none
+    after the last one: "5."), or a space with exactly three digits ("1 500"); or a separator and
+    at least one digit (".5"); then an exponent only when it has a digit. What the separators
+    mean is decided by grouped_number_text.
     """
     n = len(text)
     i = 0
@@ -293,10 +305,17 @@ def number_end(text):
     if i < n and is_digit(text[i]):
         while i < n and is_digit(text[i]):
             i += 1
-        if i < n and (text[i] == "." or text[i] == ","):
-            i += 1
-            while i < n and is_digit(text[i]):
+        going = True
+        while going and i < n:
+            if text[i] == "." or text[i] == ",":
                 i += 1
+                while i < n and is_digit(text[i]):
+                    i += 1
+                going = i < n and is_digit(text[i - 1])
+            elif is_group_at(text, i):
+                i += 4
+            else:
+                going = False
     elif i + 1 < n and (text[i] == "." or text[i] == ",") and is_digit(text[i + 1]):
         i += 2
         while i < n and is_digit(text[i]):
@@ -334,12 +353,116 @@ def split_number(text):
     return [text[0:end], rest]
 
 
+def number_pieces(mantissa):
+    """[runs of digits, separators between them] of a mantissa such as "1,500.25" ->
+    [["1", "500", "25"], [",", "."]] (a leading separator gives a first run "")."""
+    runs = []
+    separators = []
+    current = ""
+    for ch in mantissa:
+        if is_digit(ch):
+            current = current + ch
+        else:
+            runs.append(current)
+            separators.append(ch)
+            current = ""
+    runs.append(current)
+    return [runs, separators]
+
+
+def leads_a_group(first):
+    """True when ``first`` can open a number grouped in thousands: one to three digits, no leading 0."""
+    return len(first) >= 1 and len(first) <= 3 and first[0] != "0"
+
+
+def all_three_digits(runs, start, stop):
+    """True when runs[start:stop] all have exactly three digits."""
+    for k in range(start, stop):
+        if len(runs[k]) != 3:
+            return False
+    return True
+
+
+def without_trailing_zeros(digits):
+    """"500" -> "5", "250" -> "25", "000" -> "0" (the decimal reading of a three-digit group)."""
+    end = len(digits)
+    while end > 1 and digits[end - 1] == "0":
+        end -= 1
+    return digits[0:end]
+
+
+def ambiguous_group_message(number_text, whole, group, separator):
+    """The refusal for "1,500": the two readings and how to write each."""
+    as_thousands = whole + group
+    as_decimal = whole + "." + without_trailing_zeros(group)
+    if separator == ",":
+        return ("“" + number_text + "” could be " + as_thousands + " (comma between thousands) or " + as_decimal
+                + " (decimal comma): write " + as_thousands + " or " + as_decimal)
+    return ("“" + number_text + "” could be " + as_decimal + " (decimal point) or " + as_thousands
+            + " (point between thousands): write " + as_decimal + " or " + as_thousands)
+
+
+def grouped_number_text(number_text, field):
+    """The number as Python and JS read it ("1,500,000" -> "1500000", "12,500.5" -> "12500.5",
+    "1 500" -> "1500", "0,820" -> "0.820"); a CoreError naming ``field`` when the separators can be
+    read two ways or make no number.
+
+    The rule (README, "Typing numbers"): a run of groups of exactly three digits after a first group
+    of one to three digits (no leading 0) separated by one kind of mark (",", "." or a space) is
+    thousands; a single "," followed by exactly three digits ("1,500", "12,250") could be either
+    convention and is refused with both readings, unless the number starts with 0 or has an
+    exponent (neither can be grouped); any other single "," or "." is the decimal mark (a "."
+    before three digits is read as decimal and point_reading_note says so); a mark after
+    thousands groups of another kind is the decimal mark.
+    """
+    sign = ""
+    body = number_text
+    if len(body) > 0 and (body[0] == "+" or body[0] == "-"):
+        sign = body[0]
+        body = body[1:]
+    exponent = ""
+    for k in range(len(body)):
+        if body[k] == "e" or body[k] == "E":
+            exponent = body[k:]
+            body = body[0:k]
+            break
+    pieces = number_pieces(body)
+    runs = pieces[0]
+    separators = pieces[1]
+    count = len(separators)
+    if count == 0:
+        return number_text
+    malformed = ("“" + number_text + "” is not a number as written: group thousands by threes with one mark "
+                 "(1,500,000, 1.500.000 or 1 500 000) and use one decimal mark (1500.5 or 1500,5)")
+    last = separators[count - 1]
+    grouping = separators[0]
+    grouped = 0
+    while grouped < count and separators[grouped] == grouping:
+        grouped += 1
+    if count == 1 and grouping != " ":
+        # one mark: the decimal mark, unless it could be a thousands separator as well
+        if grouping == "," and len(exponent) == 0 and leads_a_group(runs[0]) and len(runs[1]) == 3:
+            raise CoreError(ambiguous_group_message(number_text, sign + runs[0], runs[1], grouping), field)
+        return sign + runs[0] + "." + runs[1] + exponent
+    if not leads_a_group(runs[0]) or grouped < count - 1:
+        raise CoreError(malformed, field)
+    if grouped == count:
+        # every mark alike: all of them group thousands ("1,500,000", "1 500")
+        if not all_three_digits(runs, 1, count + 1):
+            raise CoreError(malformed, field)
+        return sign + "".join(runs) + exponent
+    # thousands groups, then the other mark as the decimal mark ("12,500.5", "1 500,5")
+    if last == " " or not all_three_digits(runs, 1, count):
+        raise CoreError(malformed, field)
+    return sign + "".join(runs[0:count]) + "." + runs[count] + exponent
+
+
 def parse_number(text, field):
     """Parse the leading number of ``text``; return [value, rest_of_text].
 
-    A decimal comma is accepted when it is the only separator ("2,5 mm"); a number with both
-    a comma and a point ("1,234.5") is refused as ambiguous rather than guessed, and so is a
-    second separator right after the number and its spaces ("1,2.5", "1. 5").
+    Separators are read by grouped_number_text (thousands groups, decimal comma or point; a
+    comma before exactly three digits is refused with both readings); a second separator right
+    after the number and its spaces ("1. 5", "5 .5") is refused rather than guessed.
     """
     pieces = split_number(text)
     if pieces is None:
@@ -350,14 +473,31 @@ def parse_number(text, field):
     if second:
         raise CoreError("“" + text + "” mixes a decimal comma and a decimal point, or has two separators; "
                         "write it as 1234.5 or 1234,5", field)
-    if number_text.find(",") >= 0:
-        if number_text.find(".") >= 0:
-            raise CoreError("“" + number_text + "” mixes a decimal comma and a decimal point", field)
-        number_text = number_text.replace(",", ".")
-    value = float(number_text)
+    plain = grouped_number_text(number_text, field)
+    value = float(plain)
     if not (value - value == 0):
         raise CoreError("“" + number_text + "” is not a finite number", field)
     return [value, rest]
+
+
+def point_reading_note(text, field):
+    """A note when ``text`` starts with a number whose only mark is a "." before exactly three digits
+    ("1.500 m", "9.346 mm"): read with a decimal point, which a reader of the thousands-point
+    convention would read as 1500; "" otherwise. The calculators show it with the results."""
+    pieces = split_number(normalise_text(text))
+    if pieces is None:
+        return ""
+    number_text = pieces[0]
+    if len(number_text) > 0 and (number_text[0] == "+" or number_text[0] == "-"):
+        number_text = number_text[1:]
+    if number_text.find("e") >= 0 or number_text.find("E") >= 0:
+        return ""
+    split = number_pieces(number_text)
+    runs = split[0]
+    if len(split[1]) != 1 or split[1][0] != "." or not leads_a_group(runs[0]) or len(runs[1]) != 3:
+        return ""
+    return (field + ": “" + number_text + "” is read with a decimal point as " + runs[0] + "."
+            + without_trailing_zeros(runs[1]) + "; for " + runs[0] + runs[1] + " write " + runs[0] + runs[1])
 
 
 def known_units(kind):
