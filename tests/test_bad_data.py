@@ -3,8 +3,8 @@ file and the field, all problems of a run are printed together, the build exits 
 traceback, and the site already in the output folder is left byte-for-byte as it was.
 
 Each corpus file lists the lines the loader must print for it as ``# expect: field: message``.
-Cases that cannot sensibly be committed (a huge file, a directory, a broken symlink, a named
-pipe, one id in two overlay folders) are made in a temporary folder here.
+Cases that cannot sensibly be committed (a huge file, a directory, a broken symlink, a link
+loop, a named pipe, one id in two overlay folders) are made in a temporary folder here.
 """
 
 from __future__ import annotations
@@ -80,11 +80,13 @@ def fs_cases(folder: Path) -> dict[str, str]:
     size = huge.stat().st_size
     (folder / "a-folder.toml").mkdir()
     (folder / "dangling.toml").symlink_to(folder / "no-such-target.toml")
+    (folder / "loop.toml").symlink_to(folder / "loop.toml")
     os.mkfifo(folder / "pipe.toml")
     return {
         "huge.toml": f"is {size} bytes; a material file may be at most {MAX_FILE_BYTES} bytes",
         "a-folder.toml": "is a directory, expected a .toml file",
         "dangling.toml": "is a broken link",
+        "loop.toml": "is a symbolic link loop (a link that leads back to itself)",
         "pipe.toml": "is not a regular file (a device, pipe or socket), expected a .toml file",
     }
 

@@ -2,10 +2,15 @@
 
 from __future__ import annotations
 
+import errno
+import os
 import subprocess
 import sys
 
+import pytest
+
 from conductor_atlas.cli import main
+from conductor_atlas.errors import BuildError
 
 
 def run_cli(*args, cwd=None):
@@ -53,3 +58,93 @@ def test_calc_unknown_material_lists_nearest_and_exits_1():
     assert result.returncode == 1
     assert "--material: unknown material “coper”; nearest: copper" in result.stderr
     assert "Traceback" not in result.stderr
+
+
+# --- file-system refusals and bad options: one line naming the file or option, exit 1, no traceback ---
+
+LONG_NAME = "x" * 300  # longer than the 255 bytes a Linux file name may have (NAME_MAX)
+
+
+def assert_one_line_error(capsys, args, words):
+    """``main(args)`` in process: an exception would fail the test, as a traceback would fail a user."""
+    assert main(args) == 1
+    stderr = capsys.readouterr().err
+    assert words in stderr, stderr
+    assert all(line.startswith("conductor-atlas: ") for line in stderr.splitlines()), stderr
+    return stderr
+
+
+def test_data_folder_that_is_a_symlink_loop(capsys, tmp_path):
+    loop = tmp_path / "loop"
+    loop.symlink_to(loop)
+    assert_one_line_error(capsys, ["check", "--data", str(loop)], f"{loop}: is a symbolic link loop")
+
+
+def test_data_folder_name_too_long(capsys, tmp_path):
+    assert_one_line_error(capsys, ["check", "--data", str(tmp_path / LONG_NAME)],
+                          f"{tmp_path / LONG_NAME}: has a name too long for the file system")
+
+
+def test_output_folder_that_is_a_symlink_loop(capsys, tmp_path):
+    loop = tmp_path / "site"
+    loop.symlink_to(loop)
+    assert_one_line_error(capsys, ["build", "--out", str(loop)],
+                          f"{loop} is a symbolic link loop; choose another --out")
+
+
+def test_output_folder_name_too_long(capsys, tmp_path):
+    out = tmp_path / ("s" * 252)  # the folder name fits; its lock file ".<name>.lock" does not
+    assert_one_line_error(capsys, ["build", "--out", str(out)],
+                          f"cannot write beside the output folder {out}: File name too long")
+
+
+def test_output_folder_under_a_file(capsys, tmp_path):
+    """The parent of --out cannot hold a lock file (here it is a file; read-only or full disks take the same path)."""
+    (tmp_path / "plain-file").write_text("not a folder\n")
+    out = tmp_path / "plain-file" / "site"
+    assert_one_line_error(capsys, ["build", "--out", str(out)], f"cannot write beside the output folder {out}:")
+
+
+@pytest.mark.skipif(os.geteuid() == 0, reason="root writes into a folder whatever its mode")
+def test_output_folder_in_a_read_only_folder(capsys, tmp_path):
+    parent = tmp_path / "locked"
+    parent.mkdir()
+    parent.chmod(0o555)
+    try:
+        assert_one_line_error(capsys, ["build", "--out", str(parent / "site")],
+                              "cannot write beside the output folder")
+    finally:
+        parent.chmod(0o755)
+
+
+@pytest.mark.parametrize("errno_code", [errno.EROFS, errno.ENOSPC, errno.EDQUOT])
+def test_lock_file_refused_by_the_disk(tmp_path, monkeypatch, errno_code):
+    """A read-only, full (no space or no inodes) or over-quota disk refuses the lock file; root
+    cannot make one here, so the refusal is the OS error the open would raise."""
+    from conductor_atlas import publish
+
+    def refuse(path, *args, **kwargs):
+        raise OSError(errno_code, os.strerror(errno_code), str(path))
+
+    monkeypatch.setattr(publish, "open", refuse, raising=False)
+    with pytest.raises(BuildError, match=f"cannot write beside the output folder .*: {os.strerror(errno_code)}"):
+        with publish.output_lock(tmp_path / "site"):
+            pass
+
+
+def test_new_material_name_too_long(capsys, tmp_path):
+    long_id = "x" * 300
+    assert_one_line_error(capsys, ["new-material", long_id, "--dir", str(tmp_path)],
+                          f"cannot write {tmp_path / (long_id + '.toml')} (File name too long)")
+
+
+@pytest.mark.parametrize("port", ["-1", "70000"])
+def test_serve_port_out_of_range(capsys, tmp_path, port):
+    (tmp_path / "index.html").write_text("<!doctype html><title>t</title>\n")
+    assert_one_line_error(capsys, ["serve", "--dir", str(tmp_path), "--port", port],
+                          f"--port must be a port number from 0 to 65535 (0: any free port), found {port}")
+
+
+def test_serve_folder_name_too_long(capsys, tmp_path):
+    assert_one_line_error(capsys, ["serve", "--dir", str(tmp_path / LONG_NAME)],
+                          "(File name too long); choose another --dir")

@@ -99,6 +99,9 @@ def main(argv: list[str] | None = None) -> int:
     except AtlasError as exc:
         print(f"conductor-atlas: error: {exc}", file=sys.stderr)
         return 1
+    except OSError as exc:  # last resort: a file-system refusal not met where it happens
+        print(f"conductor-atlas: error: {exc.filename or ''}: {exc.strerror or exc}", file=sys.stderr)
+        return 1
     except KeyboardInterrupt:
         return 130
 

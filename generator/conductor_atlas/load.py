@@ -6,8 +6,10 @@ Reads files only; writes nothing. Every problem found in any file is collected a
 
 from __future__ import annotations
 
+import errno
 import functools
 import math
+import os
 import re
 import tomllib
 from pathlib import Path
@@ -55,15 +57,33 @@ class Problems:
 def display_path(path: Path) -> str:
     try:
         return str(path.resolve().relative_to(Path.cwd().resolve()))
-    except ValueError:
+    except (ValueError, OSError, RuntimeError):  # outside the working folder, a link loop, a name too long
         return str(path)
+
+
+def unreachable(path: Path) -> str | None:
+    """Why ``path`` cannot be opened at all (a link loop, a broken link, a name too long, ...), or None."""
+    try:
+        os.stat(path)
+    except OSError as exc:
+        if exc.errno == errno.ELOOP:
+            return "is a symbolic link loop (a link that leads back to itself)"
+        if exc.errno == errno.ENAMETOOLONG:
+            return "has a name too long for the file system"
+        if exc.errno == errno.ENOENT and os.path.islink(path):
+            return "is a broken link"
+        if exc.errno in (errno.ENOENT, errno.ENOTDIR):
+            return "does not exist"
+        return f"cannot be read ({exc.strerror})"
+    return None
 
 
 def read_toml(path: Path, problems: Problems) -> dict | None:
     """Read one TOML file; report unreadable, oversized, non-UTF-8 or malformed files."""
     where = display_path(path)
-    if path.is_symlink() and not path.exists():
-        problems.add(where, "is a broken link")
+    why = unreachable(path)
+    if why is not None:
+        problems.add(where, why)
         return None
     if path.is_dir():
         problems.add(where, "is a directory, expected a .toml file")
@@ -354,6 +374,22 @@ def material_files(folder: Path) -> list[Path]:
     return sorted(p for p in base.iterdir() if p.name.endswith(".toml") and p.name != "sources.toml")
 
 
+def folder_problem(folder: Path) -> str | None:
+    """Why ``folder`` is not a readable folder of material files, or None."""
+    why = unreachable(folder)
+    if why == "does not exist":
+        return "is not a folder of material files (it does not exist)"
+    if why is not None:
+        return why
+    if not folder.is_dir():
+        return "is not a folder of material files"
+    try:
+        material_files(folder)
+    except OSError as exc:
+        return f"cannot be listed ({exc.strerror})"
+    return None
+
+
 def load_dataset(folders: list[Path]) -> DataSet:
     """Load and validate every folder (the first is the shipped data/), all problems at once.
 
@@ -364,12 +400,15 @@ def load_dataset(folders: list[Path]) -> DataSet:
     problems = Problems()
     sources: dict[str, Source] = {}
     source_origin: dict[str, Path] = {}
+    readable = []
     for folder in folders:
-        if not folder.is_dir():
-            problems.add(display_path(folder), "is not a folder of material files")
+        why = folder_problem(folder)
+        if why is not None:
+            problems.add(display_path(folder), why)
             continue
+        readable.append(folder)
         bib = folder / "sources.toml"
-        if bib.exists():
+        if os.path.lexists(bib):  # a broken link or a link loop is reported, not skipped
             for key, src in read_sources(bib, problems).items():
                 if key in sources:
                     problems.add(f"{display_path(bib)}: {key}", f"source key also defined in {display_path(source_origin[key])}")
@@ -379,9 +418,7 @@ def load_dataset(folders: list[Path]) -> DataSet:
     if not sources and not problems.lines:
         problems.add(display_path(folders[0]), "has no sources.toml (the bibliography)")
     materials: list[Material] = []
-    for folder in folders:
-        if not folder.is_dir():
-            continue
+    for folder in readable:
         for path in material_files(folder):
             m = read_material(path, set(sources), problems)
             if m is not None:

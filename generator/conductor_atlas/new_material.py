@@ -66,13 +66,17 @@ def write_template(material_id: str, folder: Path, klass: str = "copper-alloy") 
                          "e.g. \"shop-bronze-7\"")
     if klass not in CLASSES:
         raise AtlasError(f"unknown class \"{klass}\"; choose one of: {', '.join(CLASSES)}")
-    folder.mkdir(parents=True, exist_ok=True)
     path = folder / f"{material_id}.toml"
-    if path.exists():
-        raise AtlasError(f"{path} already exists; choose another id or edit that file")
     others = ", ".join(f"{n} ({PROPERTIES[n].unit})" for n in PROPERTIES
                        if n not in ("resistivity", "temperature_coefficient", "density"))
-    path.write_text(TEMPLATE.format(material_id=material_id, name=material_id.replace("-", " ").capitalize(),
-                                    klass=klass, classes=", ".join(CLASSES), folder=folder, others=others),
-                    encoding="utf-8")
+    text = TEMPLATE.format(material_id=material_id, name=material_id.replace("-", " ").capitalize(),
+                           klass=klass, classes=", ".join(CLASSES), folder=folder, others=others)
+    try:
+        folder.mkdir(parents=True, exist_ok=True)
+        with open(path, "x", encoding="utf-8") as out:  # "x": never overwrite a file already there
+            out.write(text)
+    except FileExistsError as exc:
+        raise AtlasError(f"{path} already exists; choose another id or edit that file") from exc
+    except OSError as exc:  # a read-only folder, a full disk, a name too long for the file system
+        raise AtlasError(f"cannot write {path} ({exc.strerror}); choose another id or --dir") from exc
     return path

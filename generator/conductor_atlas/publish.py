@@ -47,9 +47,18 @@ def check_replaceable(out: Path) -> None:
 def output_lock(out: Path) -> Iterator[Path]:
     """Hold the exclusive lock of output folder ``out`` (a flock on ".<name>.lock" beside it), or
     raise BuildError at once if another build holds it. Yields the resolved folder."""
-    out = out.resolve()
-    out.parent.mkdir(parents=True, exist_ok=True)
-    with open(out.parent / f".{out.name}.lock", "w") as lock:
+    try:
+        out = out.resolve()
+    except RuntimeError as exc:  # Python 3.11 reports a link loop this way
+        raise BuildError(f"{out} is a symbolic link loop; choose another --out") from exc
+    lock_path = out.parent / f".{out.name}.lock"
+    try:
+        out.parent.mkdir(parents=True, exist_ok=True)
+        lock = open(lock_path, "w")
+    except OSError as exc:  # a read-only or full disk, a name too long, a file where a folder should be
+        raise BuildError(f"cannot write beside the output folder {out}: {exc.strerror} "
+                         f"({exc.filename}); choose another --out") from exc
+    with lock:
         try:
             fcntl.flock(lock, fcntl.LOCK_EX | fcntl.LOCK_NB)
         except BlockingIOError as exc:
