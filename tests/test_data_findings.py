@@ -1,0 +1,31 @@
+"""Findings of the data review, one test each, so none comes back.
+
+Each test states the rule and where the numbers come from; the values are read from the shipped
+data set, so a test fails when a file drifts from the rule again.
+"""
+
+from __future__ import annotations
+
+import pytest
+
+from conductor_atlas.build import data_folders
+from conductor_atlas.derive import linear_model
+from conductor_atlas.load import load_dataset
+
+
+@pytest.fixture(scope="module")
+def data():
+    return load_dataset(data_folders())
+
+
+def test_pure_platinum_has_the_thermometry_coefficient_and_shares_its_slope_with_pt385(data):
+    """Pure platinum's α is the mean 0-100 °C coefficient of thermometry platinum (about 0.003925 /K;
+    ITS-90's W(Ga) ≥ 1.11807 criterion), and by Matthiessen's rule the doped Pt385 grade has the same
+    slope dρ/dT = ρ0·α: 9.6 µΩ·cm (CRC, 273 K) × 0.003925 and 9.8 × 0.00385 agree to 0.2 %.
+    Tolerance 2 %: the 273 K entry is rounded to 0.1 µΩ·cm (1 %)."""
+    pure = data.by_id("platinum")
+    alpha = pure.get("temperature_coefficient")
+    assert alpha is not None and alpha.si == pytest.approx(0.003925, abs=5e-6)
+    rho0_table = pure.table.resistivities[pure.table.temperatures.index(273.0)]
+    sensor = linear_model(data.by_id("platinum-pt385"))
+    assert sensor.rho_ref * sensor.alpha == pytest.approx(rho0_table * alpha.si, rel=0.02)
