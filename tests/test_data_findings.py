@@ -45,3 +45,19 @@ def test_coefficients_derived_from_conductivity_follow_their_stated_rule(data):
         assert alpha.si == pytest.approx(0.00393 * iacs.si / 100.0, rel=2e-3), m.id
         checked.append(m.id)
     assert "chromium-zirconium-copper" in checked
+
+
+@pytest.mark.parametrize("material_id, rho_range, alpha_range", [
+    # supplier spread of the Cu-Mn-Ni family: 43-48 µΩ·cm; α within about ±40 ppm/K
+    ("cu-mn-ni", (43e-8, 48e-8), (-40e-6, 40e-6)),
+    # Cu-Ni 55/45: 49 µΩ·cm ±4 %; α about ±40 ppm/K between 20 and 105 °C
+    ("cu-ni-55-45", (47e-8, 51e-8), (-40e-6, 40e-6)),
+])
+def test_resistance_alloys_carry_supplier_ranges(data, material_id, rho_range, alpha_range):
+    """A single resistivity and a coefficient of exactly zero hid the spread between lots (common
+    practice (no source), from memory): the files give ranges, and the page prints them."""
+    m = data.by_id(material_id)
+    rho, alpha = m.get("resistivity"), m.get("temperature_coefficient")
+    assert (rho.low, rho.high) == pytest.approx(rho_range)
+    assert (alpha.low, alpha.high) == pytest.approx(alpha_range)
+    assert rho.low <= rho.si <= rho.high and alpha.low <= alpha.si <= alpha.high
