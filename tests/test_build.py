@@ -5,6 +5,9 @@ from __future__ import annotations
 import csv
 import io
 import json
+import subprocess
+import sys
+import time
 
 import shutil
 
@@ -119,3 +122,97 @@ def test_a_site_touched_by_hand_is_written_again(tmp_path, touch):
     assert publish(SITE, out).written
     on_disk = {p.relative_to(out).as_posix(): p.read_bytes() for p in out.rglob("*") if p.is_file()}
     assert on_disk == dict(SITE, **{MARKER: (out / MARKER).read_bytes()})
+
+
+# --- the swap: no moment without a site (a reader never gets 404, a crash never leaves none) ---
+
+NEW_SITE = {"index.html": b"<p>home, rebuilt</p>", "static/a.js": b"var a = 2;", "materials/y/index.html": b"<p>y</p>"}
+
+# Run in a child process: publish NEW_SITE, but stop for good right after the first step of the swap
+# that touches the output folder (a rename of it, or the exchange), telling the parent which step.
+PAUSE_AT_SWAP = """
+import os, sys, time
+from pathlib import Path
+from conductor_atlas import publish
+
+out, signal = sys.argv[1], Path(sys.argv[2])
+def pause_after(step, name):
+    def paused(*args):
+        result = step(*args)
+        if out in (os.fspath(args[0]), os.fspath(args[1])):
+            signal.write_text(name)
+            time.sleep(300)
+        return result
+    return paused
+os.rename = pause_after(os.rename, "rename")
+if hasattr(publish, "exchange"):
+    publish.exchange = pause_after(publish.exchange, "exchange")
+publish.publish({0}, Path(out))
+"""
+
+
+def site_files(out):
+    return {p.relative_to(out).as_posix(): p.read_bytes() for p in out.rglob("*") if p.is_file()}
+
+
+def test_a_publish_killed_at_the_swap_leaves_a_whole_site(tmp_path):
+    """kill -9 at the swap: the folder holds the old site or the new one, whole, at every moment.
+    Before the one-step swap, the pause came after rename(out, old): no site at all."""
+    out = (tmp_path / "site").resolve()
+    publish(SITE, out)
+    marker = {MARKER: (out / MARKER).read_bytes()}
+    old, new = dict(SITE, **marker), dict(NEW_SITE, **marker)
+    signal = tmp_path / "at-the-swap"
+    child = subprocess.Popen([sys.executable, "-c", PAUSE_AT_SWAP.format(repr(NEW_SITE)), str(out), str(signal)])
+    try:
+        deadline = time.monotonic() + 120
+        while not signal.exists() and child.poll() is None and time.monotonic() < deadline:
+            time.sleep(0.05)
+        assert signal.exists(), "the child never reached the swap"
+        assert site_files(out) in (old, new)          # what a reader sees while the swap is under way
+        if sys.platform.startswith("linux"):
+            assert signal.read_text() == "exchange"   # the one-step swap, not the two-rename fallback
+    finally:
+        child.kill()
+        child.wait()
+    assert site_files(out) in (old, new)              # and what is left after the crash
+    publish(NEW_SITE, out)                            # the next build clears what the killed one left
+    assert site_files(out) == new
+    assert sorted(p.name for p in tmp_path.iterdir() if p.name.startswith(".site.")) == [".site.lock",
+                                                                                         ".site.published.json"]
+
+
+def test_publish_falls_back_to_two_renames_where_the_exchange_is_missing(tmp_path, monkeypatch):
+    from conductor_atlas import publish as publish_module
+    monkeypatch.setattr(publish_module, "exchange", lambda first, second: False)
+    out = tmp_path / "site"
+    publish(SITE, out)
+    publish(NEW_SITE, out)
+    assert site_files(out) == dict(NEW_SITE, **{MARKER: (out / MARKER).read_bytes()})
+    assert sorted(p.name for p in tmp_path.iterdir()) == [".site.lock", ".site.published.json", "site"]
+
+
+@pytest.mark.skipif(not sys.platform.startswith("linux"), reason="renameat2 is Linux only")
+def test_exchange_swaps_two_folders(tmp_path):
+    from conductor_atlas.publish import exchange
+    (tmp_path / "a").mkdir()
+    (tmp_path / "a" / "f").write_text("a")
+    (tmp_path / "b").mkdir()
+    (tmp_path / "b" / "f").write_text("b")
+    assert exchange(tmp_path / "a", tmp_path / "b")
+    assert (tmp_path / "a" / "f").read_text() == "b" and (tmp_path / "b" / "f").read_text() == "a"
+
+
+def test_leftover_clean_up_matches_only_its_own_folder(tmp_path):
+    """--out "x[ab]": the clean-up once globbed ".x[ab].new-*" and deleted the staging and old
+    folders of the outputs "xa" and "xb" (a build running beside it lost its staging folder)."""
+    others = [tmp_path / ".xa.new-4242", tmp_path / ".xb.old-4242", tmp_path / ".x[ab].new-7.new-8",
+              tmp_path / ".x[ab].news-1"]
+    for folder in others:
+        folder.mkdir()
+        (folder / "keep").write_text("another output's file")
+    (tmp_path / ".x[ab].new-99999").mkdir()      # its own leftovers go
+    (tmp_path / ".x[ab].old-99999").mkdir()
+    publish(SITE, tmp_path / "x[ab]")
+    assert all((folder / "keep").is_file() for folder in others)
+    assert not (tmp_path / ".x[ab].new-99999").exists() and not (tmp_path / ".x[ab].old-99999").exists()

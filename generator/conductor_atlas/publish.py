@@ -1,4 +1,5 @@
-"""Stage 5, the only stage that writes the site: build into a temporary sibling folder, then swap.
+"""Stage 5, the only stage that writes the site: build into a temporary sibling folder, then swap
+(in one atomic step on Linux: ``swap_in``).
 
 A failed build leaves the previous site untouched; two builds into one folder at once are
 refused by a lock; a folder that is not a Conductor Atlas site is never replaced.
@@ -13,10 +14,14 @@ included, is a full rewrite.
 
 from __future__ import annotations
 
+import ctypes
+import errno
 import fcntl
 import json
 import os
+import re
 import shutil
+import sys
 from contextlib import contextmanager
 from pathlib import Path
 from typing import Iterator, NamedTuple
@@ -125,9 +130,7 @@ def _publish_locked(files: dict[str, bytes], out: Path) -> Published:
     if site_unchanged(files, out, digest):
         return Published(out, False)
     # leftovers of a build that was killed mid-publish: safe to remove while we hold the lock
-    for stale in out.parent.glob(f".{out.name}.new-*"):
-        shutil.rmtree(stale, ignore_errors=True)
-    for stale in out.parent.glob(f".{out.name}.old-*"):
+    for stale in leftovers(out):
         shutil.rmtree(stale, ignore_errors=True)
     staging = out.parent / f".{out.name}.new-{os.getpid()}"
     if staging.exists():
@@ -142,14 +145,76 @@ def _publish_locked(files: dict[str, bytes], out: Path) -> Published:
         shutil.rmtree(staging, ignore_errors=True)
         raise BuildError(f"could not write the new site next to {out}: {exc.strerror}") from exc
     record_path(out).unlink(missing_ok=True)
-    old = out.parent / f".{out.name}.old-{os.getpid()}"
-    if out.exists():
-        os.rename(out, old)
-    os.rename(staging, out)
-    if old.exists():
-        shutil.rmtree(old, ignore_errors=True)
+    swap_in(staging, out)
     write_record(out, digest)
     return Published(out, True)
+
+
+def leftovers(out: Path) -> list[Path]:
+    """The staging (".NAME.new-PID") and old (".NAME.old-PID") folders of ``out`` itself, matched
+    exactly: no glob, so a name such as "x[ab]" never matches the folders of "xa" or "xb"."""
+    pattern = re.compile(re.escape(f".{out.name}.") + r"(?:new|old)-[0-9]+")
+    try:
+        return sorted(p for p in out.parent.iterdir() if pattern.fullmatch(p.name))
+    except OSError:
+        return []
+
+
+# renameat2(2) flag from <linux/fs.h>: swap two existing paths in one step (Linux ≥ 3.15, glibc ≥ 2.28;
+# ext4, xfs, btrfs, tmpfs and others)
+RENAME_EXCHANGE = 2
+AT_FDCWD = -100
+
+
+def _renameat2():
+    if not sys.platform.startswith("linux"):
+        return None
+    try:
+        function = ctypes.CDLL(None, use_errno=True).renameat2
+    except (OSError, AttributeError):  # a C library without renameat2 (glibc before 2.28)
+        return None
+    function.argtypes = [ctypes.c_int, ctypes.c_char_p, ctypes.c_int, ctypes.c_char_p, ctypes.c_uint]
+    function.restype = ctypes.c_int
+    return function
+
+
+RENAMEAT2 = _renameat2()
+
+
+def exchange(first: Path, second: Path) -> bool:
+    """Swap two existing paths atomically (renameat2 with RENAME_EXCHANGE); False when this system
+    or file system cannot, so the caller falls back."""
+    if RENAMEAT2 is None:
+        return False
+    if RENAMEAT2(AT_FDCWD, os.fsencode(first), AT_FDCWD, os.fsencode(second), RENAME_EXCHANGE) == 0:
+        return True
+    code = ctypes.get_errno()
+    if code in (errno.EINVAL, errno.ENOSYS, errno.EOPNOTSUPP):  # the kernel or file system lacks it
+        return False
+    raise OSError(code, os.strerror(code), str(first), None, str(second))
+
+
+def swap_in(staging: Path, out: Path) -> None:
+    """Make the site in ``staging`` the one at ``out``, with no moment when ``out`` is missing.
+
+    - no site yet: one rename (atomic);
+    - Linux: one renameat2(RENAME_EXCHANGE) swaps the two folders (atomic: a reader sees the old
+      site or the new one, and a crash at any point leaves one of them whole at ``out``); the old
+      site, now at ``staging``, is then removed;
+    - elsewhere (or a file system without it) the fallback is two renames, out → .NAME.old-PID then
+      staging → out: between them ``out`` is missing for a moment, and a crash there leaves the
+      previous site in .NAME.old-PID and the new one in .NAME.new-PID (the next build removes both).
+    """
+    if not os.path.lexists(out):
+        os.rename(staging, out)
+        return
+    if exchange(staging, out):
+        shutil.rmtree(staging, ignore_errors=True)
+        return
+    old = out.parent / f".{out.name}.old-{os.getpid()}"
+    os.rename(out, old)
+    os.rename(staging, out)
+    shutil.rmtree(old, ignore_errors=True)
 
 
 def write_record(out: Path, digest: str) -> None:
