@@ -48,9 +48,12 @@ function viewOf(form) {
   const section = form.closest('section');
   const fields = fieldsOf(form).map((input) => ({
     input, name: input.name, visible: input.type !== 'hidden',
-    slot: document.getElementById(input.id + '-error'), message: null}));
+    slot: document.getElementById(input.id + '-error'), message: null, shown: null, editing: false, timer: 0}));
+  // the key-result strip repeats some results (data-key-result): each mirrors its data-result cell
+  const keyCells = Array.from(section.querySelectorAll('[data-key-result]'));
   const cells = Array.from(section.querySelectorAll('[data-result]')).map((cell) => ({
-    cell, name: cell.dataset.result, text: null, value: null}));
+    cell, name: cell.dataset.result, text: null, value: null,
+    mirrors: keyCells.filter((key) => key.dataset.keyResult === cell.dataset.result)}));
   return {
     form, fields, cells, inputs: null, state: null, general: null, warnings: null, model: null, sources: null,
     problemsNode: section.querySelector('.calc-problems'),
@@ -60,7 +63,36 @@ function viewOf(form) {
   };
 }
 
+// In the narrow key-result strip a number keeps its unit on its line: "3.2243 µΩ·cm", never a
+// lone "µΩ·cm" below (a no-break space after a digit).
+const keepUnits = (text) => text.replace(/(\d) (?=\S)/g, '$1\u00a0');
+
 const own = (object, key) => Object.prototype.hasOwnProperty.call(object, key);
+
+// A field's message is judged when the person stops: on leaving the field, or after a pause in
+// typing ("5" on the way to "50 m" is not an error yet). While the field is being typed in, a new
+// message waits; a message that no longer holds goes at once. Results update on every keystroke.
+const PAUSE_MS = 900;
+
+function paint(field) {
+  const text = field.editing && field.message !== field.shown ? '' : field.message;
+  if (text === field.shown) return;
+  field.shown = text;
+  if (field.slot) field.slot.textContent = text;
+  if (text) field.input.setAttribute('aria-invalid', 'true'); else field.input.removeAttribute('aria-invalid');
+}
+
+function typing(field) {
+  field.editing = true;
+  clearTimeout(field.timer);
+  field.timer = setTimeout(() => judge(field), PAUSE_MS);
+}
+
+function judge(field) {
+  clearTimeout(field.timer);
+  field.editing = false;
+  paint(field);
+}
 
 // Write only what differs from the last update: most of a form's results and messages stay the
 // same while one field is typed in, and every DOM write costs more than the comparison.
@@ -71,11 +103,8 @@ function show(view, outcome) {
   for (const field of view.fields) {
     if (!field.visible) continue;
     named.add(field.name);
-    const message = own(errors, field.name) ? errors[field.name] : '';
-    if (message === field.message) continue;
-    field.message = message;
-    if (field.slot) field.slot.textContent = message;
-    if (message) field.input.setAttribute('aria-invalid', 'true'); else field.input.removeAttribute('aria-invalid');
+    field.message = own(errors, field.name) ? errors[field.name] : '';
+    paint(field);
   }
   for (const key of Object.keys(errors)) if (!named.has(key)) general.push(key + ': ' + errors[key]);
   for (const entry of view.cells) {
@@ -83,7 +112,11 @@ function show(view, outcome) {
     const shown = result && Number.isFinite(result.value);
     const text = shown ? result.text : '—';
     const value = shown ? String(result.value) : null;
-    if (text !== entry.text) { entry.cell.textContent = text; entry.text = text; }
+    if (text !== entry.text) {
+      entry.cell.textContent = text;
+      for (const mirror of entry.mirrors) mirror.textContent = keepUnits(text);
+      entry.text = text;
+    }
     if (value !== entry.value) {
       if (value === null) delete entry.cell.dataset.value; else entry.cell.dataset.value = value;
       entry.value = value;
@@ -157,8 +190,15 @@ export function start(calculateWith, makeDict) {
       writeQuery(form);
     };
     const remember = () => { due = performance.now() + 250; if (!timer) timer = setTimeout(flush, 250); };
-    form.addEventListener('input', () => { run(view, catalogue); remember(); });
+    const fieldOf = (target) => view.fields.find((field) => field.input === target);
+    form.addEventListener('input', (event) => {
+      const field = fieldOf(event.target);
+      if (field) typing(field);
+      run(view, catalogue);
+      remember();
+    });
     form.addEventListener('change', () => { run(view, catalogue); clearTimeout(timer); timer = 0; writeQuery(form); });
+    form.addEventListener('focusout', (event) => { const field = fieldOf(event.target); if (field) judge(field); });
     form.addEventListener('submit', (event) => event.preventDefault());
     run(view, catalogue);
   }

