@@ -17,8 +17,9 @@ FORM = 'form[data-calculator="resistance"]'
 FORBIDDEN = ("NaN", "Infinity", "undefined")
 
 # Wrong in any field, whatever quantity it expects (a word, a unit alone, a number that is not
-# finite, mixed separators, a unit no field takes, junk, markup)
-BAD_EVERYWHERE = ["abc", "5 kg", "m", "1e309 m", "NaN m", "Infinity", "1,234.5 m", "--5 m", "💥", "5 m m",
+# finite, a comma read two ways, misplaced separators, a unit no field takes, junk, markup;
+# "1,234.5 m" is no longer here: it reads one way, as thousands)
+BAD_EVERYWHERE = ["abc", "5 kg", "m", "1e309 m", "NaN m", "Infinity", "1,500 m", "1.2.3 m", "--5 m", "💥", "5 m m",
                   "<b>5</b> m", "a" * 300]
 # Not errors everywhere, but extreme: whatever the page shows must still be a number or a message
 EXTREME = {
