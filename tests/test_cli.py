@@ -148,3 +148,12 @@ def test_serve_port_out_of_range(capsys, tmp_path, port):
 def test_serve_folder_name_too_long(capsys, tmp_path):
     assert_one_line_error(capsys, ["serve", "--dir", str(tmp_path / LONG_NAME)],
                           "(File name too long); choose another --dir")
+
+
+def test_calc_lists_messages_in_the_order_of_the_form():
+    """The calculators read the material after their own fields (core.calc_common.material_at_temperature);
+    the terminal still lists the messages in the order of FIELDS, as the form shows them."""
+    result = run_cli("calc", "resistance", "--material", "coper", "--length", "abc", "--temperature", "-300 °C")
+    assert result.returncode == 1
+    lines = result.stderr.splitlines()
+    assert [line.split(": ")[2] for line in lines] == ["--material", "--length", "--temperature"], result.stderr

@@ -22,7 +22,7 @@ from hypothesis import HealthCheck, Phase, given, settings
 from hypothesis import strategies as st
 
 from conductor_atlas.build import data_folders
-from conductor_atlas.core.calculators import CALCULATOR_FIELDS, CALCULATORS, FIELD_DEFAULTS, calculate
+from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS, calculate
 from conductor_atlas.core.units import UNITS
 from conductor_atlas.derive import calc_catalogue, catalogue_of
 from conductor_atlas.load import load_dataset
@@ -90,8 +90,8 @@ def catalogues():
 
 def default_inputs(name, material_id):
     """The form's defaults, with the material field (if any) naming ``material_id``."""
-    defaults = FIELD_DEFAULTS.get(name, {})
-    inputs = {f: defaults.get(f, "") for f in CALCULATOR_FIELDS[name]}
+    defaults = CALCULATORS[name].DEFAULTS
+    inputs = {f: defaults.get(f, "") for f in CALCULATORS[name].FIELDS}
     if "material" in inputs:
         inputs["material"] = material_id
     return inputs
@@ -132,7 +132,7 @@ def problems_with(name, outcome):
     """What breaks the property in one outcome (an empty list when it holds)."""
     found = []
     typed = [str(v) for v in outcome["inputs"].values()]
-    fields = set(CALCULATOR_FIELDS[name])
+    fields = set(CALCULATORS[name].FIELDS)
     errors = outcome["errors"]
     for key, message in errors.items():
         if key not in fields:
@@ -174,16 +174,22 @@ def collect(strategy, count):
     return found
 
 
-def test_registry_has_fields_for_every_calculator():
-    assert set(CALCULATORS) <= set(CALCULATOR_FIELDS), "a calculator without CALCULATOR_FIELDS cannot be fuzzed"
-    assert len(CALCULATORS) >= 1
+def test_every_registered_module_keeps_the_calculator_contract():
+    """One registry: each module in CALCULATOR_MODULES is found under its own NAME, runs through
+    ``calculate``, and describes every field it reads (the fuzzing below draws from FIELDS)."""
+    assert len(CALCULATORS) == len(CALCULATOR_MODULES) >= 1, "two calculator modules share a NAME"
+    for module in CALCULATOR_MODULES:
+        assert CALCULATORS[module.NAME] is module
+        assert callable(module.calculate), module.__name__
+        assert set(module.FIELDS) == set(module.FIELD_INFO), module.__name__
+        assert set(module.DEFAULTS) <= set(module.FIELDS), module.__name__
 
 
 def hand_picked_cases(catalogues):
     """Each hand-picked text in each field alone (the others at their defaults), every calculator."""
     cases = []
     for name in sorted(CALCULATORS):
-        for field in CALCULATOR_FIELDS[name]:
+        for field in CALCULATORS[name].FIELDS:
             for text in HAND_PICKED:
                 material_id, catalogue = catalogues[len(cases) % len(catalogues)]
                 inputs = default_inputs(name, material_id)

@@ -11,7 +11,7 @@ import json
 import sys
 from pathlib import Path
 
-from conductor_atlas.core.calculators import CALCULATORS, MODULES, calculate
+from conductor_atlas.core.calculators import CALCULATORS, calculate
 
 
 def option_name(field: str) -> str:
@@ -23,7 +23,7 @@ def add_calc_parser(sub) -> None:
     calcs = p_calc.add_subparsers(dest="calculator", metavar="NAME")
     calcs.required = True
     for name in sorted(CALCULATORS):
-        module = MODULES[name]
+        module = CALCULATORS[name]
         # argparse formats help text with % (so "%IACS" is written "%%IACS" there), not the description
         p = calcs.add_parser(name, help=module.SUMMARY.replace("%", "%%"), description=module.SUMMARY)
         for field in module.FIELDS:
@@ -38,7 +38,7 @@ def add_calc_parser(sub) -> None:
 
 
 def inputs_from(args: argparse.Namespace) -> dict[str, str]:
-    module = MODULES[args.calculator]
+    module = CALCULATORS[args.calculator]
     inputs = {}
     for field in module.FIELDS:
         value = getattr(args, f"field_{field}")
@@ -48,12 +48,21 @@ def inputs_from(args: argparse.Namespace) -> dict[str, str]:
     return inputs
 
 
+def errors_in_form_order(module, errors: dict[str, str]) -> dict[str, str]:
+    """The outcome's messages in the order of the calculator's fields (the order the form shows them),
+    whatever order the calculator read its fields in; any other key last."""
+    place = {field: i for i, field in enumerate(module.FIELDS)}
+    return dict(sorted(errors.items(), key=lambda item: place.get(item[0], len(place))))
+
+
 def run_calc(args: argparse.Namespace) -> int:
     from conductor_atlas.build import data_folders
     from conductor_atlas.derive import catalogue_of
     from conductor_atlas.load import load_dataset
     catalogue = catalogue_of(load_dataset(data_folders(args.data)))
+    module = CALCULATORS[args.calculator]
     outcome = calculate(args.calculator, inputs_from(args), catalogue)
+    outcome["errors"] = errors_in_form_order(module, outcome["errors"])
     if args.json:
         payload = {k: outcome[k] for k in ("calculator", "inputs", "results", "warnings", "errors", "sources",
                                            "material", "model")}
@@ -63,7 +72,6 @@ def run_calc(args: argparse.Namespace) -> int:
         for field, message in outcome["errors"].items():
             print(f"conductor-atlas: calc {args.calculator}: {option_name(field)}: {message}", file=sys.stderr)
         return 1
-    module = MODULES[args.calculator]
     labels = dict(module.RESULT_LABELS)
     width = max((len(labels.get(k, k)) for k in outcome["results"]), default=10)
     title = module.TITLE + (f": {outcome['material']}" if outcome["material"] else "")

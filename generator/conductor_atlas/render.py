@@ -18,7 +18,7 @@ import markdown.treeprocessors
 from markupsafe import Markup
 
 from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows, compare_table
-from conductor_atlas.core.calculators import MODULES, calculator_names
+from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
 from conductor_atlas.derive import CELSIUS, MaterialView, calc_catalogue
 from conductor_atlas.material_charts import material_charts
 from conductor_atlas.core.numfmt import format_number, format_fixed
@@ -131,7 +131,7 @@ def calc_spec(name: str, fixed: dict | None = None, datalist: str = "") -> dict:
 
     ``fixed`` maps fields to values that become hidden inputs (the material on its own page).
     """
-    module = MODULES[name]
+    module = CALCULATORS[name]
     fixed = fixed or {}
     fields = []
     for field in module.FIELDS:
@@ -144,14 +144,9 @@ def calc_spec(name: str, fixed: dict | None = None, datalist: str = "") -> dict:
             "results": [list(r) for r in module.RESULT_LABELS], "caution": module.CAUTION}
 
 
-# The order calculators are listed in: everyday jobs first.
-CALCULATOR_ORDER = ["resistance", "sizing", "temperature-rise", "resistivity", "compare", "skin-effect",
-                    "carriers", "thin-film"]
-
-
 def ordered_calculators() -> list[str]:
-    names = calculator_names()
-    return [n for n in CALCULATOR_ORDER if n in names] + [n for n in names if n not in CALCULATOR_ORDER]
+    """The calculators' names in the registry's order (everyday jobs first)."""
+    return [module.NAME for module in CALCULATOR_MODULES]
 
 
 def material_choices(views: list[MaterialView]) -> list[tuple[str, str]]:
@@ -235,7 +230,7 @@ class Renderer:
         out["compare/index.html"] = self.page(
             "compare.html", "compare/index.html", rows=rows, columns=COMPARE_COLUMNS,
             title="Compare materials",
-            calc=calc_spec("compare", datalist="material-choices") if "compare" in MODULES else None,
+            calc=calc_spec("compare", datalist="material-choices") if "compare" in CALCULATORS else None,
             calc_json=full_catalogue, choices=choices)
         out["methods/index.html"] = self.page("methods.html", "methods/index.html", title="Methods")
         out["references/index.html"] = self.page("references.html", "references/index.html",

@@ -26,16 +26,37 @@ from conductor_atlas.paths import CACHE_DIR, CORE_DIR, PACKAGE_DIR
 FLAGS = ["-b", "-n", "-k"]
 KEEP_TRANSPILED = 3  # older transpiled cores kept besides the current one (0.5 MB each)
 ENTRY = CORE_DIR / "web.py"
+CORE_PACKAGE = "conductor_atlas.core"
 RUNTIME_FILES = ["org.transcrypt.__runtime__.js", "math.js"]
 RE_FILES = ["re.js", "re.translate.js"]  # Transcrypt writes these only when a shipped module imports re
 TIMESTAMP_LINE = re.compile(rb"^// Transcrypt'ed from Python, [^\n]*\n")
 
 
+def imported_core_modules(module: str) -> set[str]:
+    """Dotted names of the core modules that the core module ``module`` imports itself, in either form
+    (``from conductor_atlas.core.x import f`` and ``from conductor_atlas.core import x``)."""
+    tree = ast.parse((CORE_DIR / (module.rsplit(".", 1)[1] + ".py")).read_text(encoding="utf-8"))
+    names = set()
+    for node in ast.walk(tree):
+        if isinstance(node, ast.ImportFrom) and node.module == CORE_PACKAGE:
+            names.update(f"{CORE_PACKAGE}.{alias.name}" for alias in node.names)
+        elif isinstance(node, ast.ImportFrom) and (node.module or "").startswith(CORE_PACKAGE + "."):
+            names.add(node.module)
+    return names
+
+
 def core_modules() -> list[str]:
-    """Dotted names of the core modules that core/web.py imports (the ones shipped to browsers)."""
-    tree = ast.parse(ENTRY.read_text(encoding="utf-8"))
-    names = {node.module for node in ast.walk(tree) if isinstance(node, ast.ImportFrom) and node.module}
-    return sorted(n for n in names if n.startswith("conductor_atlas.core."))
+    """Dotted names of the core modules reached from core/web.py, directly or through other core
+    modules (the ones shipped to browsers; Transcrypt writes exactly these)."""
+    entry = CORE_PACKAGE + "." + ENTRY.stem
+    found: set[str] = set()
+    todo = [entry]
+    while todo:
+        for name in imported_core_modules(todo.pop()):
+            if name not in found and name != entry:
+                found.add(name)
+                todo.append(name)
+    return sorted(found)
 
 
 def imports_re(module: str) -> bool:

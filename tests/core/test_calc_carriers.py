@@ -12,7 +12,7 @@ import math
 import pytest
 from scipy import constants
 
-from conductor_atlas.core.calc_carriers import calculate_carriers
+from conductor_atlas.core.calc_carriers import calculate as calculate_carriers
 from tests.support.outcomes import result_value as value
 
 ME_REL = 3e-9  # m_e (1.4e-9) and epsilon_0 (6.8e-10) differ between CODATA 2018 and 2022

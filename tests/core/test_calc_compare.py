@@ -10,7 +10,7 @@ import math
 
 import pytest
 
-from conductor_atlas.core.calc_compare import calculate_compare
+from conductor_atlas.core.calc_compare import calculate as calculate_compare
 from tests.support.outcomes import result_value as value
 
 RHO_CU = 1.7241e-8

@@ -2,7 +2,7 @@
 
 import pytest
 
-from conductor_atlas.core.calc_resistivity import calculate_resistivity
+from conductor_atlas.core.calc_resistivity import calculate as calculate_resistivity
 from conductor_atlas.core.material_models import local_temperature_coefficient
 from tests.support.outcomes import result_value as value
 

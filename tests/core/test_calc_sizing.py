@@ -9,7 +9,7 @@ import math
 
 import pytest
 
-from conductor_atlas.core.calc_sizing import CAUTION, calculate_sizing
+from conductor_atlas.core.calc_sizing import CAUTION, calculate as calculate_sizing
 from tests.support.outcomes import result_value as value
 
 RHO_70 = 1.7241e-8 * (1 + 0.00393 * 50.0)

@@ -11,7 +11,7 @@ import math
 import pytest
 from scipy import constants, special
 
-from conductor_atlas.core.calc_skin_effect import CAUTION, calculate_skin_effect
+from conductor_atlas.core.calc_skin_effect import CAUTION, calculate as calculate_skin_effect
 from tests.support.outcomes import result_value as value
 
 # scipy 1.17 carries CODATA 2022 mu_0 = 1.25663706127e-6, the core CODATA 2018 1.25663706212e-6:

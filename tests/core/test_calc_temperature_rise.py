@@ -12,7 +12,7 @@ import sys
 
 import pytest
 
-from conductor_atlas.core.calc_temperature_rise import calculate_temperature_rise
+from conductor_atlas.core.calc_temperature_rise import calculate as calculate_temperature_rise
 from tests.support.outcomes import result_value as value
 
 T0 = 273.15

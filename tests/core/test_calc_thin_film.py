@@ -7,8 +7,8 @@ The quad references are those of tests/core/test_size_effect.py (the printed for
 
 import pytest
 
-from conductor_atlas.core.calc_resistivity import calculate_resistivity
-from conductor_atlas.core.calc_thin_film import calculate_thin_film
+from conductor_atlas.core.calc_resistivity import calculate as calculate_resistivity
+from conductor_atlas.core.calc_thin_film import calculate as calculate_thin_film
 from tests.core.test_size_effect import _combined_reference, _fs_reference
 from tests.support.outcomes import result_value as value
 

@@ -153,7 +153,7 @@ def new_calculator_cases(catalogue):
     cases = []
 
     def add(name, function, inputs):
-        cases.append(("conductor_atlas.core.calc_" + name, "calculate_" + name, [inputs, catalogue]))
+        cases.append(("conductor_atlas.core.calc_" + name, "calculate", [inputs, catalogue]))
 
     for material in ("IACS", "Cu", "1350", "Fe", "ni", "stainless-304", "Pt385", "xx", ""):
         for f, size, t in (("50 Hz", "240 mm2", "20 °C"), ("1 MHz", "d 1 mm", "90 °C"), ("10 kHz", "100 x 10 mm", ""),

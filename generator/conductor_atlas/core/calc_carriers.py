@@ -5,11 +5,12 @@ from conductor_atlas.core import carriers as fe
 from conductor_atlas.core.constants import ELECTRON_VOLT
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          has_errors, kelvin_text, new_outcome, read_quantity)
-from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+                                          kelvin_text, new_outcome, read_quantity)
+from conductor_atlas.core.calc_common import material_at_temperature
 from conductor_atlas.core.calc_resistance import read_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
+NAME = "carriers"
 TITLE = "Conduction electrons"
 SUMMARY = ("Free-electron density, relaxation time, mean free path, Fermi energy and velocity, mobility and drift "
            "velocity of a metal at its temperature.")
@@ -68,7 +69,14 @@ def read_current_density(outcome, inputs):
     return current / size["area"]
 
 
-def calculate_carriers(inputs, catalogue):
+def check_electron_density(outcome, m):
+    """The carrier quantities need the material's conduction-electron density."""
+    if not (m["electron_density"] > 0):
+        add_error(outcome, "material", "no conduction-electron density is on record for " + m["name"]
+                  + "; choose a metal with one, e.g. Cu, Ag, Au, Al, Na")
+
+
+def calculate(inputs, catalogue):
     """Free-electron carrier quantities of a metal from its tabulated n and its ρ(T).
 
     Fields: material (must carry a conduction-electron density); temperature (default 20 °C);
@@ -76,19 +84,14 @@ def calculate_carriers(inputs, catalogue):
     τ = m / (n e² ρ); k_F = (3 π² n)^(1/3); E_F = ħ² k_F² / 2m; v_F = ħ k_F / m; ℓ = v_F τ;
     μ = e τ / m; ν_p = sqrt(n e² / (ε0 m)) / 2π; κ_WF = L0 T / ρ (core.carriers).
     """
-    outcome = new_outcome("carriers", inputs)
-    m = read_material(outcome, inputs, catalogue, "material")
-    t = read_temperature(outcome, inputs, "temperature")
+    outcome = new_outcome(NAME, inputs)
     j = read_current_density(outcome, inputs)
-    if m is not None and not (m["electron_density"] > 0):
-        add_error(outcome, "material", "no conduction-electron density is on record for " + m["name"]
-                  + "; choose a metal with one, e.g. Cu, Ag, Au, Al, Na")
-    if has_errors(outcome):
+    opening = material_at_temperature(outcome, inputs, catalogue, check_electron_density)
+    if opening is None:
         return outcome
-    outcome["material"] = m["id"]
-    rho = material_resistivity(outcome, m, t, inputs)
-    if rho is None:
-        return outcome
+    m = opening[0]
+    t = opening[1]
+    rho = opening[2]
     n = m["electron_density"]
     try:
         tau = fe.relaxation_time(rho, n)

@@ -4,7 +4,8 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.lookup import find_material
 from conductor_atlas.core.material_models import resistivity_at
 from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import add_error, add_sources, add_warning, field_text, read_quantity
+from conductor_atlas.core.outcome import (add_error, add_sources, add_warning, field_text, has_errors,
+                                          read_quantity)
 
 
 def read_material(outcome, inputs, catalogue, field):
@@ -44,6 +45,33 @@ def material_resistivity(outcome, m, t, inputs):
         add_warning(outcome, w)
     outcome["model"] = found["label"]
     return found["rho"]
+
+
+def material_at_temperature(outcome, inputs, catalogue, check=None):
+    """The opening of a one-material calculator, called once it has read its own fields: [m, t, ρ] or None.
+
+    Reads the material (field "material") and the temperature [K] (field "temperature", 20 °C when
+    empty); ``check(outcome, m)``, when given, may add errors about the material found (say, a
+    property it lacks). Then resistivity_when_ready. A calculator returns the outcome as it is on None.
+    """
+    m = read_material(outcome, inputs, catalogue, "material")
+    t = read_temperature(outcome, inputs, "temperature")
+    if m is not None and check is not None:
+        check(outcome, m)
+    rho = resistivity_when_ready(outcome, m, t, inputs)
+    if rho is None:
+        return None
+    return [m, t, rho]
+
+
+def resistivity_when_ready(outcome, m, t, inputs):
+    """None when any field of the outcome has a problem; otherwise records m as the outcome's material
+    and returns ρ [Ω·m] of m at t [K] by the model asked in the "model" field (material_resistivity:
+    its warnings and label go into the outcome), or None when no model reaches t."""
+    if has_errors(outcome):
+        return None
+    outcome["material"] = m["id"]
+    return material_resistivity(outcome, m, t, inputs)
 
 
 def quiet_resistivity(m, t):

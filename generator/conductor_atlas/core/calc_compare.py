@@ -3,12 +3,14 @@
 from conductor_atlas.core import practice
 from conductor_atlas.core.geometry import awg_area, awg_name, diameter_from_area, next_awg, next_metric_size
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import (add_result, add_warning, check_finite_results, field_text, has_errors,
-                                          kelvin_text, new_outcome)
-from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.outcome import (add_result, add_warning, check_finite_results, field_text, kelvin_text,
+                                          new_outcome)
+from conductor_atlas.core.calc_common import (material_resistivity, read_material, read_temperature,
+                                              resistivity_when_ready)
 from conductor_atlas.core.calc_resistance import mass_text, read_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
+NAME = "compare"
 TITLE = "Compare two materials at equal resistance"
 SUMMARY = "Cross-section, diameter and mass another material needs to match a conductor's resistance."
 FIELDS = ["material", "other", "size", "temperature", "model"]
@@ -39,7 +41,7 @@ CAUTION = ("Equal resistance at equal length and temperature only: current ratin
            "practice.")
 
 
-def calculate_compare(inputs, catalogue):
+def calculate(inputs, catalogue):
     """Equal-resistance comparison of a reference material and another one.
 
     Fields: material (reference, 1); other (2); size (optional, the reference conductor's size);
@@ -48,17 +50,14 @@ def calculate_compare(inputs, catalogue):
     per mass (σ/δ) other over reference = 1 / (m2/m1). With a size: A2 = A1 · ρ2/ρ1 and the next
     IEC 60228 and AWG sizes at or above it (core.geometry).
     """
-    outcome = new_outcome("compare", inputs)
+    outcome = new_outcome(NAME, inputs)
     m1 = read_material(outcome, inputs, catalogue, "material")
     m2 = read_material(outcome, inputs, catalogue, "other")
     size = None
     if len(field_text(inputs, "size")) > 0:
         size = read_size(outcome, inputs, "size")
     t = read_temperature(outcome, inputs, "temperature")
-    if has_errors(outcome):
-        return outcome
-    outcome["material"] = m1["id"]
-    rho1 = material_resistivity(outcome, m1, t, inputs)
+    rho1 = resistivity_when_ready(outcome, m1, t, inputs)
     if rho1 is None:
         return outcome
     label1 = outcome["model"]

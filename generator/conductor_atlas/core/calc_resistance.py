@@ -6,12 +6,12 @@ from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          has_errors, kelvin_text, new_outcome, note_point_reading, read_quantity,
+                                          kelvin_text, new_outcome, note_point_reading, read_quantity,
                                           require_positive)
-from conductor_atlas.core.calc_common import (material_resistivity, read_material, read_temperature,
-                                              recorded_mean_free_path, warn_if_anomalous)
+from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
+NAME = "resistance"
 TITLE = "Resistance of a conductor run"
 SUMMARY = "DC and AC resistance, voltage drop, I²R loss and mass of a conductor at its temperature."
 FIELDS = ["material", "length", "size", "temperature", "current", "frequency", "model"]
@@ -68,7 +68,7 @@ def mass_text(mass):
     return format_number(mass, 4) + " kg"
 
 
-def calculate_resistance(inputs, catalogue):
+def calculate(inputs, catalogue):
     """DC (and optionally AC) resistance of a conductor run.
 
     Fields: material; length (conductor length, e.g. "50 m": for a two-wire circuit enter both
@@ -77,11 +77,9 @@ def calculate_resistance(inputs, catalogue):
     table, bloch-gruneisen, callendar-van-dusen).
     R = ρ(T) L / A; U = I R; P = I² R; J = I / A; R_ac = R · (R_ac/R_dc).
     """
-    outcome = new_outcome("resistance", inputs)
-    m = read_material(outcome, inputs, catalogue, "material")
+    outcome = new_outcome(NAME, inputs)
     length_m = read_quantity(outcome, inputs, "length", "length", True)
     size = read_size(outcome, inputs, "size")
-    t = read_temperature(outcome, inputs, "temperature")
     current = read_quantity(outcome, inputs, "current", "current", False)
     f = read_quantity(outcome, inputs, "frequency", "frequency", False)
     require_positive(outcome, "length", length_m, "length")
@@ -89,12 +87,12 @@ def calculate_resistance(inputs, catalogue):
         add_error(outcome, "current", "must not be negative (enter the magnitude)")
     if f is not None and f < 0:
         add_error(outcome, "frequency", "must not be negative")
-    if has_errors(outcome):
+    opening = material_at_temperature(outcome, inputs, catalogue)
+    if opening is None:
         return outcome
-    outcome["material"] = m["id"]
-    rho = material_resistivity(outcome, m, t, inputs)
-    if rho is None:
-        return outcome
+    m = opening[0]
+    t = opening[1]
+    rho = opening[2]
     area = size["area"]
     r = dc.resistance(rho, length_m, area)
     add_result(outcome, "temperature", t, "K", kelvin_text(t))

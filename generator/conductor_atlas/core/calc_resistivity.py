@@ -2,11 +2,11 @@
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import (add_result, check_finite_results, field_text, has_errors, kelvin_text,
-                                          new_outcome)
-from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.outcome import add_result, check_finite_results, field_text, kelvin_text, new_outcome
+from conductor_atlas.core.calc_common import material_at_temperature
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO, local_temperature_coefficient
 
+NAME = "resistivity"
 TITLE = "Resistivity at a temperature"
 SUMMARY = "Resistivity, conductivity, %IACS and the local temperature coefficient by the model that fits."
 FIELDS = ["material", "temperature", "model"]
@@ -22,7 +22,7 @@ RESULT_LABELS = [
 ]
 CAUTION = "Values follow the named model and its sources; outside a model's range the result carries a warning."
 
-def calculate_resistivity(inputs, catalogue):
+def calculate(inputs, catalogue):
     """Resistivity of a material at a temperature by the model that fits there.
 
     Results: resistivity [Ω·m], conductivity [S/m], iacs_percent (100·ρ_IACS/ρ, comparing at the
@@ -30,15 +30,13 @@ def calculate_resistivity(inputs, catalogue):
     α(T) = (dρ/dT)/ρ(T) by material_models.local_temperature_coefficient (none when only a
     reference value is on record).
     """
-    outcome = new_outcome("resistivity", inputs)
-    m = read_material(outcome, inputs, catalogue, "material")
-    t = read_temperature(outcome, inputs, "temperature")
-    if has_errors(outcome):
+    outcome = new_outcome(NAME, inputs)
+    opening = material_at_temperature(outcome, inputs, catalogue)
+    if opening is None:
         return outcome
-    outcome["material"] = m["id"]
-    rho = material_resistivity(outcome, m, t, inputs)
-    if rho is None:
-        return outcome
+    m = opening[0]
+    t = opening[1]
+    rho = opening[2]
     add_result(outcome, "temperature", t, "K", kelvin_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "conductivity", 1.0 / rho, "S/m", format_number(1e-6 / rho, 4) + " MS/m")

@@ -9,10 +9,11 @@ from conductor_atlas.core.lookup import fold
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
                                           has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
-from conductor_atlas.core.calc_common import material_resistivity, read_material, read_temperature
+from conductor_atlas.core.calc_common import material_at_temperature
 from conductor_atlas.core.units import normalise_text, parse_number, parse_quantity
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
+NAME = "sizing"
 TITLE = "Conductor size for a voltage-drop limit"
 SUMMARY = "Smallest cross-section, and the next metric and AWG size, that keep the voltage drop within a limit."
 FIELDS = ["material", "length", "current", "max_drop", "supply", "conductors", "temperature", "model"]
@@ -114,7 +115,7 @@ def read_max_drop(outcome, inputs, supply):
     return drop
 
 
-def calculate_sizing(inputs, catalogue):
+def calculate(inputs, catalogue):
     """Minimum cross-section for a voltage-drop limit, and the next standard sizes.
 
     Fields: material; length (one-way route length L); current I; max_drop (a voltage, or a
@@ -123,8 +124,7 @@ def calculate_sizing(inputs, catalogue):
     A_min = factor · ρ(T) · L · I / ΔU_max (core.practice); the next IEC 60228 and AWG sizes at
     or above A_min (core.geometry); at the metric size: R = factor_R ρ L / A, ΔU = factor ρ L I / A.
     """
-    outcome = new_outcome("sizing", inputs)
-    m = read_material(outcome, inputs, catalogue, "material")
+    outcome = new_outcome(NAME, inputs)
     route = read_quantity(outcome, inputs, "length", "length", True)
     require_positive(outcome, "length", route, "the route length")
     current = read_quantity(outcome, inputs, "current", "current", True)
@@ -135,13 +135,11 @@ def calculate_sizing(inputs, catalogue):
         supply = None
     drop = read_max_drop(outcome, inputs, supply)
     circuit = read_conductors(outcome, inputs)
-    t = read_temperature(outcome, inputs, "temperature")
-    if has_errors(outcome):
+    opening = material_at_temperature(outcome, inputs, catalogue)
+    if opening is None:
         return outcome
-    outcome["material"] = m["id"]
-    rho = material_resistivity(outcome, m, t, inputs)
-    if rho is None:
-        return outcome
+    t = opening[1]
+    rho = opening[2]
     factor = circuit[0]
     try:
         a_min = practice.voltage_drop_min_area(rho, current, route, drop, factor)

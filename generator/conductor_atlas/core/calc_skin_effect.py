@@ -6,12 +6,12 @@ from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
-                                          field_text, has_errors, kelvin_text, new_outcome, read_quantity)
-from conductor_atlas.core.calc_common import (material_resistivity, read_material, read_temperature,
-                                              recorded_mean_free_path, warn_if_anomalous)
+                                          field_text, kelvin_text, new_outcome, read_quantity)
+from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
 from conductor_atlas.core.calc_resistance import ac_ratio, read_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
+NAME = "skin-effect"
 TITLE = "Skin effect"
 SUMMARY = "Skin depth, surface resistance and the AC/DC resistance ratio of a conductor at a frequency."
 FIELDS = ["material", "frequency", "size", "temperature", "model"]
@@ -42,7 +42,7 @@ def half_thickness(size):
     return size["diameter"] / 2.0
 
 
-def calculate_skin_effect(inputs, catalogue):
+def calculate(inputs, catalogue):
     """Skin depth and AC resistance of a conductor at a frequency.
 
     Fields: material; frequency (> 0); size (optional, geometry.parse_size); temperature
@@ -51,21 +51,19 @@ def calculate_skin_effect(inputs, catalogue):
     Kelvin solution for round wire (or an area taken as round) and the bar approximation for
     "w x t" bars (core.skin_effect), R_ac per metre = R_dc · ratio.
     """
-    outcome = new_outcome("skin-effect", inputs)
-    m = read_material(outcome, inputs, catalogue, "material")
+    outcome = new_outcome(NAME, inputs)
     f = read_quantity(outcome, inputs, "frequency", "frequency", True)
     size = None
     if len(field_text(inputs, "size")) > 0:
         size = read_size(outcome, inputs, "size")
-    t = read_temperature(outcome, inputs, "temperature")
     if f is not None and not (f > 0):
         add_error(outcome, "frequency", "must be greater than zero (at DC there is no skin effect)")
-    if has_errors(outcome):
+    opening = material_at_temperature(outcome, inputs, catalogue)
+    if opening is None:
         return outcome
-    outcome["material"] = m["id"]
-    rho = material_resistivity(outcome, m, t, inputs)
-    if rho is None:
-        return outcome
+    m = opening[0]
+    t = opening[1]
+    rho = opening[2]
     mu_r = m["mu_r"]
     if mu_r > 1.5:
         add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(mu_r, 3)

@@ -10,6 +10,7 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_warning, ch
 from conductor_atlas.core.calc_common import read_material
 from conductor_atlas.core.units import normalise_text, normalise_unit, parse_number, parse_quantity
 
+NAME = "temperature-rise"
 TITLE = "Winding temperature by the resistance method"
 SUMMARY = "Mean temperature and temperature rise of a winding from its cold and hot resistance."
 FIELDS = ["material", "resistance_cold", "temperature_cold", "resistance_hot", "coolant", "k"]
@@ -115,7 +116,7 @@ def material_k(outcome, m, catalogue):
     return k
 
 
-def calculate_temperature_rise(inputs, catalogue):
+def calculate(inputs, catalogue):
     """Winding temperature and rise from a cold and a hot resistance measurement.
 
     Fields: material (optional when k is given); resistance_cold R1; temperature_cold t1;
@@ -125,7 +126,7 @@ def calculate_temperature_rise(inputs, catalogue):
     (core.practice). k from the material when empty: 234.5 for copper conductors, 225 for EC
     aluminium, else 1/α − t_ref from the material's own temperature coefficient.
     """
-    outcome = new_outcome("temperature-rise", inputs)
+    outcome = new_outcome(NAME, inputs)
     k = read_k(outcome, inputs)
     m = None
     if len(field_text(inputs, "material")) > 0:

@@ -5,12 +5,12 @@ from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import size_effect as sz
 from conductor_atlas.core.numfmt import format_number, format_si
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
-from conductor_atlas.core.calc_common import (material_resistivity, mean_free_path_origin, read_material,
-                                              read_temperature, recorded_mean_free_path,
+                                          kelvin_text, new_outcome, read_quantity, require_positive)
+from conductor_atlas.core.calc_common import (material_at_temperature, mean_free_path_origin, recorded_mean_free_path,
                                               recorded_mean_free_path_temperature)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
+NAME = "thin-film"
 TITLE = "Thin-film resistivity"
 SUMMARY = ("Resistivity of a thin film from surface scattering (Fuchs–Sondheimer) and, with a reflection "
            "coefficient, grain-boundary scattering (Mayadas–Shatzkes).")
@@ -101,7 +101,7 @@ def range_warnings(outcome, kappa, alpha, grains):
                     + ", where the model's integral was checked")
 
 
-def calculate_thin_film(inputs, catalogue):
+def calculate(inputs, catalogue):
     """Thin-film resistivity by Fuchs–Sondheimer, or the combined Mayadas–Shatzkes film model.
 
     Fields: material; thickness d; specularity p (0 <= p < 1, default 0); reflection R
@@ -111,8 +111,7 @@ def calculate_thin_film(inputs, catalogue):
     κ = d / ℓ; without R: ρ_f/ρ = fuchs_sondheimer_ratio(κ, p); with R: α = (ℓ/D) R/(1 − R),
     ρ_f/ρ = film_resistivity_ratio(κ, p, α) (core.size_effect). Sheet resistance ρ_f / d.
     """
-    outcome = new_outcome("thin-film", inputs)
-    m = read_material(outcome, inputs, catalogue, "material")
+    outcome = new_outcome(NAME, inputs)
     d = read_quantity(outcome, inputs, "thickness", "length", True)
     if require_positive(outcome, "thickness", d, "thickness") and d < THICKNESS_MIN:
         add_error(outcome, "thickness", "is thinner than one atomic layer (0.1 nm); the film models need a "
@@ -123,13 +122,12 @@ def calculate_thin_film(inputs, catalogue):
     if len(field_text(inputs, "grain_size")) > 0:
         grain = read_quantity(outcome, inputs, "grain_size", "length", True)
         require_positive(outcome, "grain_size", grain, "grain size")
-    t = read_temperature(outcome, inputs, "temperature")
-    if has_errors(outcome):
+    opening = material_at_temperature(outcome, inputs, catalogue)
+    if opening is None:
         return outcome
-    outcome["material"] = m["id"]
-    rho = material_resistivity(outcome, m, t, inputs)
-    if rho is None:
-        return outcome
+    m = opening[0]
+    t = opening[1]
+    rho = opening[2]
     mfp = bulk_mean_free_path(outcome, inputs, m, rho, t)
     if mfp is None:
         return outcome

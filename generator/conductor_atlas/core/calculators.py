@@ -1,7 +1,10 @@
-"""The calculator registry: name -> function(inputs, catalogue) -> outcome (see core.outcome).
+"""The calculator registry: one list of calculator modules, in the order the site lists them.
 
-The same functions serve the web forms (through the transpiled JS) and ``conductor-atlas calc``.
-``inputs`` maps field names to the text a person typed; ``catalogue`` is the calculators'
+Each calculator module defines NAME (its name in URLs and the command line), TITLE, SUMMARY, FIELDS,
+DEFAULTS, FIELD_INFO, RESULT_LABELS, CAUTION and ``calculate(inputs, catalogue) -> outcome`` (see
+core.outcome); adding a calculator is adding its module to CALCULATOR_MODULES (and a differential
+case). The same functions serve the web forms (through the transpiled JS) and ``conductor-atlas
+calc``. ``inputs`` maps field names to the text a person typed; ``catalogue`` is the calculators'
 material catalogue (conductor_atlas.derive.calc_catalogue), and the material is chosen by the
 "material" field (id, alias or chemical symbol). Bad input never raises: messages go under
 outcome["errors"][field].
@@ -17,38 +20,18 @@ from conductor_atlas.core import calc_temperature_rise
 from conductor_atlas.core import calc_compare
 from conductor_atlas.core import calc_sizing
 
-# name -> module; each module defines TITLE, SUMMARY, FIELDS, DEFAULTS, FIELD_INFO, RESULT_LABELS,
-# CAUTION and the calculate_* function registered below.
-MODULES = {
-    "resistance": calc_resistance,
-    "resistivity": calc_resistivity,
-    "skin-effect": calc_skin_effect,
-    "carriers": calc_carriers,
-    "thin-film": calc_thin_film,
-    "temperature-rise": calc_temperature_rise,
-    "compare": calc_compare,
-    "sizing": calc_sizing,
-}
+# everyday jobs first: the order of the calculator pages and lists
+CALCULATOR_MODULES = [calc_resistance, calc_sizing, calc_temperature_rise, calc_resistivity, calc_compare,
+                      calc_skin_effect, calc_carriers, calc_thin_film]
 
-CALCULATORS = {
-    "resistance": calc_resistance.calculate_resistance,
-    "resistivity": calc_resistivity.calculate_resistivity,
-    "skin-effect": calc_skin_effect.calculate_skin_effect,
-    "carriers": calc_carriers.calculate_carriers,
-    "thin-film": calc_thin_film.calculate_thin_film,
-    "temperature-rise": calc_temperature_rise.calculate_temperature_rise,
-    "compare": calc_compare.calculate_compare,
-    "sizing": calc_sizing.calculate_sizing,
-}
-
-CALCULATOR_FIELDS = {}
-FIELD_DEFAULTS = {}
-for _name in MODULES.keys():
-    CALCULATOR_FIELDS[_name] = MODULES[_name].FIELDS
-    FIELD_DEFAULTS[_name] = MODULES[_name].DEFAULTS
+# name -> module
+CALCULATORS = {}
+for _module in CALCULATOR_MODULES:
+    CALCULATORS[_module.NAME] = _module
 
 
 def calculator_names():
+    """The registered names in alphabetical order."""
     names = []
     for key in CALCULATORS.keys():
         names.append(key)
@@ -63,4 +46,4 @@ def calculate(name, inputs, catalogue):
         add_error(outcome, "calculator", "unknown calculator “" + name + "”; choose one of: "
                   + ", ".join(calculator_names()))
         return outcome
-    return CALCULATORS[name](inputs, catalogue)
+    return CALCULATORS[name].calculate(inputs, catalogue)

@@ -1,17 +1,10 @@
-"""Entry module for the transpiler: every core module the browser needs is imported here.
+"""Entry module for the transpiler: every core module the browser needs is reached from here.
 
-conductor_atlas.transpile ships exactly the modules imported below (and checks each was written).
+conductor_atlas.transpile ships exactly the core modules imported below, directly or through other core
+modules (the calculators through the registry, core.calculators), and checks each was written.
 """
 
-from conductor_atlas.core.calculators import calculate, CALCULATOR_FIELDS, FIELD_DEFAULTS
-from conductor_atlas.core.calc_resistance import calculate_resistance
-from conductor_atlas.core.calc_resistivity import calculate_resistivity
-from conductor_atlas.core.calc_skin_effect import calculate_skin_effect
-from conductor_atlas.core.calc_carriers import calculate_carriers
-from conductor_atlas.core.calc_thin_film import calculate_thin_film
-from conductor_atlas.core.calc_temperature_rise import calculate_temperature_rise
-from conductor_atlas.core.calc_compare import calculate_compare
-from conductor_atlas.core.calc_sizing import calculate_sizing
+from conductor_atlas.core.calculators import calculate, CALCULATORS
 from conductor_atlas.core.carriers import relaxation_time
 from conductor_atlas.core.size_effect import film_resistivity_ratio
 from conductor_atlas.core.practice import resistance_method_temperature
