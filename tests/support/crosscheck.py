@@ -68,6 +68,18 @@ KNOWN_OUTLIERS = {
         "190 W/(m·K) is a two-figure value of another compilation; the CRC 300 K entry is 200 (mendeleev 201)",
     ("Fe", "resistivity", "resistivity-20c-copy"):
         "10.0 µΩ·cm is a rounded value for commercial iron; high-purity iron is 9.61 at 20 °C (CRC, pymatgen-core)",
+    ("K", "density", "pymatgen-core 2026.10.16"):
+        "0.856 g/cm³: compilations differ by 4 % for potassium; the CRC value 0.89 is in two copies",
+    ("K", "density", "periodictable 2.1.0"):
+        "0.862 g/cm³: compilations differ by 4 % for potassium; the CRC value 0.89 is in two copies",
+    ("Ru", "density", "pymatgen-core 2026.10.16"):
+        "12.37 g/cm³ is the density from the lattice constants (12.36 for a = 2.706, c = 4.282 Å); CRC gives 12.1",
+    ("Ru", "density", "periodictable 2.1.0"):
+        "12.41 g/cm³ is close to the density from the lattice constants (12.36); CRC gives 12.1",
+    ("Ta", "density", "pymatgen-core 2026.10.16"):
+        "16.65 g/cm³ is close to the density from the lattice constant (16.7 for a = 3.301 Å); CRC gives 16.4",
+    ("Ta", "density", "periodictable 2.1.0"):
+        "16.654 g/cm³ is close to the density from the lattice constant (16.7); CRC gives 16.4",
     ("Ir", "melting_point", "pymatgen-core 2026.10.16"):
         "2739 K (2466 °C) is the older handbook value; current CRC editions give 2446 °C (2719 K), as mendeleev",
     ("W", "resistivity", "resistivity-20c-copy"):
