@@ -1039,6 +1039,35 @@ def filter_value(index, record, filters, columns):
     return sort_value
 
 
+def lacks_value(index, record, columns):
+    """True for a material with no recorded value for some filter's property (it cannot be
+    compared, so the filter leaves it out: the outcome's note says so instead of dropping it silently)."""
+    material = record[E_MATERIAL]
+    if material < 0:
+        return False
+    for c in columns:
+        if c < 0 or index["values"][c][material] is None:
+            return True
+    return False
+
+
+def unknown_note(titles, filters):
+    """"Not listed: 2 materials with no recorded density (A, B)." with at most four names."""
+    labels = []
+    for f in filters:
+        if f["label"] not in labels:
+            labels.append(f["label"])
+    shown = []
+    for i in range(len(titles)):
+        if i < 4:
+            shown.append(titles[i])
+    names = ", ".join(shown)
+    if len(titles) > 4:
+        names = names + " and " + str(len(titles) - 4) + " more"
+    count = str(len(titles)) + (" material" if len(titles) == 1 else " materials")
+    return "Not listed: " + count + " with no recorded " + " or ".join(labels) + " (" + names + ")."
+
+
 # __pragma__ ('kwargs')
 
 
@@ -1090,10 +1119,13 @@ def search(index, query, limit):
     columns = filter_columns(index, filters)
     top = []
     total = 0
+    unknown = []
     if len(query_words) == 0:
         for position in index["material_positions"]:
             record = entries[position]
             sort_value = filter_value(index, record, filters, columns)
+            if sort_value is None and lacks_value(index, record, columns):
+                unknown.append(record[E_TITLE])
             if sort_value is not None:
                 total += 1
                 keep_hit(top, [0, sort_value, kind_orders[record[E_KIND]], record[E_TITLE], record[E_ID], position, -1],
@@ -1137,6 +1169,8 @@ def search(index, query, limit):
                 record = entries[position]
                 sort_value = filter_value(index, record, filters, columns)
                 if sort_value is None:
+                    if lacks_value(index, record, columns):
+                        unknown.append(record[E_TITLE])
                     continue
                 total += 1
             else:
@@ -1171,6 +1205,10 @@ def search(index, query, limit):
             outcome["note"] = "No material matches " + filter_summary(filters) + "."
         else:
             outcome["note"] = "Nothing matches “" + text + "”."
+    if len(unknown) > 0:
+        unknown.sort()
+        extra = unknown_note(unknown, filters)
+        outcome["note"] = extra if len(outcome["note"]) == 0 else outcome["note"] + " " + extra
     return outcome
 
 
