@@ -12,6 +12,7 @@ import math
 import os
 import re
 import tomllib
+import unicodedata
 from pathlib import Path
 from types import MappingProxyType
 
@@ -19,8 +20,9 @@ import pint
 
 from conductor_atlas.errors import DataError
 from conductor_atlas.model import DataSet, Material, ResistivityTable, Source, Value
-from conductor_atlas.schema import (CLASSES, MAX_FILE_BYTES, PROPERTIES, RECORD_KEYS, SCHEMA_VERSION,
-                                    TABLE_KEYS, TOP_LEVEL_KEYS)
+from conductor_atlas.schema import (CLASSES, MAX_FILE_BYTES, MAX_TABLE_POINTS, PROPERTIES, RECORD_KEYS,
+                                    SCHEMA_VERSION, TABLE_KEYS, TABLE_RESISTIVITY_OHM_M, TABLE_TEMPERATURE_K,
+                                    TOP_LEVEL_KEYS, YEARS)
 
 UREG = pint.UnitRegistry()
 NUMBER_UNIT = re.compile(r"^\s*([+-]?(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(.*)$")
@@ -100,6 +102,9 @@ def read_toml(path: Path, problems: Problems) -> dict | None:
     except OSError as exc:
         problems.add(where, f"cannot be read ({exc.strerror})")
         return None
+    if raw.startswith(b"\xef\xbb\xbf"):
+        problems.add(where, "starts with a byte-order mark (BOM); save it as UTF-8 without BOM")
+        return None
     try:
         text = raw.decode("utf-8")
     except UnicodeDecodeError as exc:
@@ -110,6 +115,30 @@ def read_toml(path: Path, problems: Problems) -> dict | None:
     except tomllib.TOMLDecodeError as exc:
         problems.add(where, f"is not valid TOML: {exc}")
         return None
+
+
+# Hangul fillers and the braille blank are letters or symbols to Unicode but print as nothing
+INVISIBLE_LETTERS = {"\u115f", "\u1160", "\u3164", "\uffa0", "\u2800"}
+
+
+def invisible_character(text: str) -> str | None:
+    """The first character of ``text`` a reader cannot see or that is not text at all (controls
+    such as NUL, zero-width and direction marks, line separators, unassigned or private code
+    points), as "U+200B (ZERO WIDTH SPACE)"; None when there is none."""
+    for ch in text:
+        if unicodedata.category(ch) in ("Cc", "Cf", "Cn", "Co", "Cs", "Zl", "Zp") or ch in INVISIBLE_LETTERS:
+            return f"U+{ord(ch):04X} ({unicodedata.name(ch, 'no name')})"
+    return None
+
+
+def read_locator(record: dict, where: str, problems: Problems) -> str | None:
+    """A locator (table, page, clause) is non-empty text."""
+    locator = record["locator"]
+    if not isinstance(locator, str) or not locator.strip():
+        problems.add(f"{where}.locator", f"expected the place in the source as text, such as \"table 3, p. 12\", "
+                     f"found {locator!r}")
+        return None
+    return locator.strip()
 
 
 def parse_quantity(text: object, unit: str, where: str, problems: Problems) -> float | None:
@@ -190,6 +219,11 @@ def read_record(name: str, record: object, where: str, sources: set[str], proble
     elif source not in sources:
         problems.add(f"{where}.source", f"unknown source key \"{source}\"; add it to data/sources.toml or to a sources.toml in the same --data folder")
         ok = False
+    if read_locator(record, where, problems) is None:
+        ok = False
+    if "note" in record and not isinstance(record["note"], str):
+        problems.add(f"{where}.note", f"expected text, found {record['note']!r}")
+        ok = False
     value = parse_quantity(record["value"], spec.unit, f"{where}.value", problems)
     low = parse_quantity(record["min"], spec.unit, f"{where}.min", problems) if "min" in record else None
     high = parse_quantity(record["max"], spec.unit, f"{where}.max", problems) if "max" in record else None
@@ -216,7 +250,7 @@ def read_record(name: str, record: object, where: str, sources: set[str], proble
     if not ok:
         return None
     return Value(name=name, si=value, unit=spec.unit, text=record["value"], source=source,
-                 locator=str(record["locator"]), note=str(record.get("note", "")), temperature=temperature,
+                 locator=record["locator"].strip(), note=record.get("note", ""), temperature=temperature,
                  low=low, high=high, valid_from=valid_from, valid_to=valid_to)
 
 
@@ -240,9 +274,15 @@ def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
     if table["source"] not in sources:
         problems.add(f"{where}.source", f"unknown source key \"{table['source']}\"; add it to data/sources.toml or to a sources.toml in the same --data folder")
         return None
+    if read_locator(table, where, problems) is None:
+        return None
     points = table["points"]
     if not isinstance(points, list) or len(points) < 2:
         problems.add(f"{where}.points", "expected a list of at least two [temperature, resistivity] pairs")
+        return None
+    if len(points) > MAX_TABLE_POINTS:
+        problems.add(f"{where}.points", f"holds {len(points)} points; a table may hold at most {MAX_TABLE_POINTS} "
+                     f"(a page shows every point)")
         return None
     t_unit, r_unit = table["temperature_unit"], table["resistivity_unit"]
     try:
@@ -273,6 +313,15 @@ def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
         if rho <= 0:
             problems.add(here, f"resistivity must be positive, found {pair[1]} {r_unit}")
             return None
+        if not TABLE_TEMPERATURE_K[0] <= t <= TABLE_TEMPERATURE_K[1]:
+            in_kelvin = "" if t_unit == "K" else f" = {t:g} K"
+            problems.add(here, f"expected a temperature between {TABLE_TEMPERATURE_K[0]:g} and "
+                         f"{TABLE_TEMPERATURE_K[1]:g} K, found {pair[0]} {t_unit}{in_kelvin}")
+            return None
+        if not TABLE_RESISTIVITY_OHM_M[0] <= rho <= TABLE_RESISTIVITY_OHM_M[1]:
+            problems.add(here, f"expected a resistivity between {TABLE_RESISTIVITY_OHM_M[0]:g} and "
+                         f"{TABLE_RESISTIVITY_OHM_M[1]:g} ohm * m, found {pair[1]} {r_unit} = {rho:g} ohm * m")
+            return None
         if temps and t <= temps[-1]:
             problems.add(here, f"temperatures must increase strictly, found {pair[0]} after "
                          f"{points[i - 1][0]} {t_unit}")
@@ -283,7 +332,7 @@ def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
             return None
         temps.append(t)
         rhos.append(rho)
-    return ResistivityTable(tuple(temps), tuple(rhos), table["source"], str(table["locator"]),
+    return ResistivityTable(tuple(temps), tuple(rhos), table["source"], table["locator"].strip(),
                             str(table.get("note", "")))
 
 
@@ -301,8 +350,13 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
     for key in ("id", "name", "class", "summary"):
         if not isinstance(data.get(key), str) or not data.get(key, "").strip():
             problems.add(f"{where}: {key}", f"expected a non-empty string, found {data.get(key)!r}")
+    for key in ("name", "summary"):
+        text = data.get(key)
+        found = invisible_character(text) if isinstance(text, str) else None
+        if found is not None:
+            problems.add(f"{where}: {key}", f"contains the invisible character {found}; type it without")
     material_id = data.get("id", "")
-    if isinstance(material_id, str) and material_id and not ID_PATTERN.match(material_id):
+    if isinstance(material_id, str) and material_id and not ID_PATTERN.fullmatch(material_id):
         problems.add(f"{where}: id", f"expected a lowercase slug like \"copper-annealed\", found \"{material_id}\"")
     klass = data.get("class")
     if isinstance(klass, str) and klass not in CLASSES:
@@ -324,6 +378,12 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
         value = read_record(name, raw_props[name], f"{where}: properties.{name}", sources, problems)
         if value is not None:
             properties[name] = value
+    melting = properties.get("melting_point")
+    for name, value in properties.items():
+        if melting is not None and value.temperature is not None and value.temperature >= melting.si:
+            problems.add(f"{where}: properties.{name}.temperature", f"is at or above the melting point "
+                         f"({melting.si:g} K): a solid's value needs a temperature below it, "
+                         f"found \"{raw_props[name]['temperature']}\"")
     if "resistivity" not in raw_props and "conductivity_iacs" not in raw_props:
         problems.add(f"{where}: properties.resistivity", "is missing (give resistivity or conductivity_iacs)")
     table = None
@@ -346,6 +406,10 @@ def read_sources(path: Path, problems: Problems) -> dict[str, Source]:
     allowed = {"kind", "title", "authors", "publisher", "edition", "year", "number", "doi", "note"}
     out: dict[str, Source] = {}
     for key, entry in data.items():
+        if not ID_PATTERN.fullmatch(key):
+            problems.add(f"{where}: {key}", "expected a source key that is a lowercase slug such as \"iec60028\" "
+                         "or \"smith-2004\" (letters, digits, single hyphens)")
+            continue
         if not isinstance(entry, dict):
             problems.add(f"{where}: {key}", "expected a table [key] with kind and title")
             continue
@@ -358,8 +422,11 @@ def read_sources(path: Path, problems: Problems) -> dict[str, Source]:
             problems.add(f"{where}: {key}.title", "is missing")
             continue
         year = entry.get("year")
-        if year is not None and not isinstance(year, int):
+        if year is not None and (not isinstance(year, int) or isinstance(year, bool)):
             problems.add(f"{where}: {key}.year", f"expected a year as a number, found {year!r}")
+            continue
+        if year is not None and not YEARS[0] <= year <= YEARS[1]:
+            problems.add(f"{where}: {key}.year", f"expected a year between {YEARS[0]} and {YEARS[1]}, found {year}")
             continue
         out[key] = Source(key=key, kind=entry["kind"], title=entry["title"].strip(),
                           **{k: str(entry[k]) for k in ("authors", "publisher", "edition", "number", "doi", "note")

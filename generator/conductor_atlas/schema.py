@@ -72,3 +72,14 @@ DISPLAY_UNITS = {
 }
 
 MAX_FILE_BYTES = 1_000_000
+
+# [resistivity_table] limits (typo checks, like PROPERTIES): published ρ(T) tables run from liquid
+# helium (4.2 K) to beyond the melting point, and from about 1e-12 Ω·m (high-purity metals at a few
+# kelvin) to 1e-4 Ω·m. A page shows every point, so a table holds at most MAX_TABLE_POINTS
+# (the shipped tables have at most 18).
+TABLE_TEMPERATURE_K = (1.0, 6000.0)
+TABLE_RESISTIVITY_OHM_M = (1e-13, 1e-4)
+MAX_TABLE_POINTS = 500
+
+# a source's year of publication
+YEARS = (1600, 2100)
