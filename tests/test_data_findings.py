@@ -69,3 +69,26 @@ def test_every_pure_metal_has_a_density(data):
     compares them with the other datasets."""
     missing = [m.id for m in data.materials if m.klass == "pure-metal" and m.get("density") is None]
     assert missing == []
+
+
+@pytest.mark.parametrize("material_id", ["iridium", "rhodium", "ruthenium"])
+def test_resistivities_that_datasets_list_unmarked_say_they_are_at_0_c(data, material_id):
+    """The CRC entries for Ir, Rh, Ru are 0 °C values, which room-temperature datasets carry
+    unmarked (pymatgen-core: 4.71, 4.33, 7.1 µΩ·cm); the file says 0 °C, and the page with it."""
+    rho = data.by_id(material_id).get("resistivity")
+    assert rho.temperature == pytest.approx(273.15)
+    assert "0 degC value, not 20 degC" in rho.note
+
+
+@pytest.mark.parametrize("material_id", ["sodium", "potassium"])
+def test_alkali_electron_densities_are_5_k_values(data, material_id):
+    """Ashcroft & Mermin Table 1.1 gives the alkali metals at 5 K; the page shows the condition."""
+    n = data.by_id(material_id).get("electron_density")
+    assert n.temperature == pytest.approx(5.0)
+
+
+def test_tungsten_melting_point_names_its_edition(data):
+    """Editions print 3410, 3414 or 3422 °C; the value (3695 K = 3422 °C) is the 95th edition's."""
+    tm = data.by_id("tungsten").get("melting_point")
+    assert tm.si == pytest.approx(3422.0 + 273.15, abs=0.5)
+    assert "95th edition" in tm.locator and data.sources[tm.source].edition == "95th"
