@@ -92,3 +92,31 @@ def test_tungsten_melting_point_names_its_edition(data):
     tm = data.by_id("tungsten").get("melting_point")
     assert tm.si == pytest.approx(3422.0 + 273.15, abs=0.5)
     assert "95th edition" in tm.locator and data.sources[tm.source].edition == "95th"
+
+
+def test_citations_have_no_doubled_full_stops(data):
+    """"10th ed.. 1990" was printed for every entry with an edition."""
+    doubled = [key for key, s in data.sources.items() if ".." in s.citation()]
+    assert doubled == []
+    assert data.sources["asm-hb-vol1"].citation().endswith("ASM International. 10th ed. 1990")
+
+
+def test_every_bibliography_entry_is_cited_or_says_why_not(data):
+    """An entry no value cites is cited by the code or templates (AWG table, demos) or its note
+    says where it is used."""
+    from pathlib import Path
+    root = Path(__file__).resolve().parents[1]
+    code = "".join(p.read_text(encoding="utf-8") for folder in ("generator", "templates", "examples")
+                   for p in (root / folder).rglob("*") if p.suffix in (".py", ".html", ".toml"))
+    cited = {k for m in data.materials for k in m.source_keys()}
+    silent = [k for k, s in data.sources.items()
+              if k not in cited and k not in code and not s.note.startswith("Cited")]
+    assert silent == []
+
+
+def test_smithells_locators_name_chapter_19(data):
+    """A public page citing the 8th edition for these coefficients gives pp. 19-1 to 19-2."""
+    for m in data.materials:
+        for v in m.properties.values():
+            if v.source == "smithells-8":
+                assert "Chapter 19" in v.locator, m.id

@@ -33,7 +33,9 @@ class Source:
             parts.append(f"{self.edition} ed.")
         if self.year:
             parts.append(str(self.year))
-        text = ". ".join(parts)
+        # a part that ends in a full stop ("10th ed.", "et al.") is not given a second one
+        text = "".join(p if i == len(parts) - 1 else (p + " " if p.endswith(".") else p + ". ")
+                       for i, p in enumerate(parts))
         if self.doi:
             text += f". doi:{self.doi}"
         return text
