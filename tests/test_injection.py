@@ -236,3 +236,42 @@ def test_static_scripts_never_insert_text_as_html():
             if sinks.search(line):
                 found.append(f"{path.name}:{number}: {line.strip()}")
     assert found == []
+
+
+@pytest.mark.parametrize("notes, shown", [
+    ("Keep `R < 1 mΩ & dry` at the joint.", "R < 1 mΩ & dry"),
+    ("Example:\n\n    if r < limit && ok:\n        pass\n", "if r < limit && ok:\n    pass\n"),
+    ("``<b>not bold</b> &amp;``", "<b>not bold</b> &amp;"),
+])
+def test_code_in_notes_is_escaped_once(notes, shown):
+    """`<` and `&` inside Markdown code spans and blocks were shown as "&lt;" and "&amp;" (the
+    source was escaped before Markdown, which escapes code again); a reader sees them as typed."""
+    from conductor_atlas.render import markdown_safe
+
+    class Code(HTMLParser):
+        def __init__(self):
+            super().__init__(convert_charrefs=True)
+            self.inside, self.text, self.tags = 0, [], []
+
+        def handle_starttag(self, tag, attrs):
+            self.tags.append(tag)
+            self.inside += tag == "code"
+
+        def handle_endtag(self, tag):
+            self.inside -= tag == "code"
+
+        def handle_data(self, data):
+            if self.inside:
+                self.text.append(data)
+
+    code = Code()
+    code.feed(markdown_safe(notes))
+    assert "".join(code.text) == shown
+    assert "b" not in code.tags
+
+
+def test_raw_html_and_entities_in_notes_stay_text():
+    from conductor_atlas.render import markdown_safe
+    html = markdown_safe('<div onclick="x()">raw <em>HTML</em></div> and <!-- a comment --> & more')
+    assert "<div" not in html and "<em>" not in html and "<!--" not in html
+    assert "&lt;div onclick=" in html and "&amp; more" in html

@@ -80,15 +80,21 @@ class InertLinks(markdown.treeprocessors.Treeprocessor):
 
 
 class InertLinksExtension(markdown.extensions.Extension):
+    """Raw HTML and entities stay text: Markdown's passes that keep them as markup are removed, so
+    the serializer escapes ``<`` and ``&`` once, in text and code alike (escaping the source first
+    escaped them twice inside code spans and blocks); unsafe links and images become text."""
+
     def extendMarkdown(self, md):  # noqa: N802 - the Markdown API's name
+        md.preprocessors.deregister("html_block")
+        md.inlinePatterns.deregister("html")
+        md.inlinePatterns.deregister("entity")
         md.treeprocessors.register(InertLinks(md), "inert_links", 0)
 
 
 def markdown_safe(text: str) -> str:
-    """Markdown to HTML with any raw HTML in the source shown as text, never as markup; links to
-    javascript: (or any scheme but http, https, mailto) and images are shown as their text."""
-    escaped = text.replace("&", "&amp;").replace("<", "&lt;")
-    return markdown.markdown(escaped, output_format="html", extensions=[InertLinksExtension()])
+    """Markdown to HTML with any raw HTML or entity in the source shown as text, never as markup;
+    links to javascript: (or any scheme but http, https, mailto) and images are shown as their text."""
+    return markdown.markdown(text, output_format="html", extensions=[InertLinksExtension()])
 
 
 def condition_text(t: float | None) -> str:
