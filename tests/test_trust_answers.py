@@ -54,3 +54,46 @@ def test_a_closed_pipe_ends_calc_without_a_traceback():
 def test_calc_help_shows_a_single_percent_sign():
     result = run_cli("calc", "resistivity", "--help")
     assert "%IACS" in result.stdout and "%%" not in result.stdout
+
+
+# --- 2. the material used is named; trade words mean the conductor grade ----------------------------
+@pytest.mark.parametrize("typed, grade, rho_uohm_cm", [
+    # IEC 60028: standard annealed copper 1/58 Ω·mm²/m = 1.7241 µΩ·cm at 20 °C (value in the data file)
+    ("copper", "copper-annealed", 1.7241),
+    ("Copper", "copper-annealed", 1.7241),
+    # 1350 hard-drawn at 61.0 %IACS: 1.7241 / 0.610 = 2.8264 µΩ·cm (ASTM B230 figure, as in the data file)
+    ("aluminium", "aluminium-1350", 2.8264),
+    ("aluminum", "aluminium-1350", 2.8264),
+])
+def test_trade_words_give_the_conductor_grade_and_say_so(catalogue, typed, grade, rho_uohm_cm):
+    outcome = calculate("resistivity", {"material": typed}, catalogue)
+    assert outcome["material"] == grade
+    # 1e-4: the four figures the sources print
+    assert outcome["results"]["resistivity"]["value"] * 1e8 == pytest.approx(rho_uohm_cm, rel=1e-4)
+    material_id, name, klass, note = outcome["used"][0]
+    assert material_id == grade and klass == "conductor grade"
+    assert note.startswith(f"“{typed}” is read as the conductor grade {name}; for ")
+    assert note.endswith(" enter Cu") or note.endswith(" enter Al")
+
+
+@pytest.mark.parametrize("typed, element", [("Cu", "copper"), ("cu", "copper"), ("Al", "aluminium")])
+def test_chemical_symbols_keep_meaning_the_element(catalogue, typed, element):
+    outcome = calculate("resistivity", {"material": typed}, catalogue)
+    assert outcome["material"] == element
+    assert outcome["used"] == [[element, catalogue["materials"][element]["name"], "pure metal", ""]]
+
+
+def test_terminal_and_json_name_the_material_first():
+    text = run_cli("calc", "resistance", "--material", "copper", "--length", "10 m", "--size", "2.5 mm2")
+    lines = text.stdout.splitlines()
+    assert lines[1].split() == ["Material", "Standard", "annealed", "copper", "(conductor", "grade,", "id",
+                                "copper-annealed)"]
+    assert "for Copper (high purity) enter Cu" in lines[2]
+    data = json.loads(run_cli("calc", "resistance", "--material", "IACS", "--json").stdout)
+    assert data["materials_used"] == [{"id": "copper-annealed", "name": "Standard annealed copper",
+                                       "class": "conductor grade", "note": ""}]
+
+
+def test_compare_names_both_materials(catalogue):
+    outcome = calculate("compare", {"material": "copper", "other": "1350"}, catalogue)
+    assert [entry[0] for entry in outcome["used"]] == ["copper-annealed", "aluminium-1350"]

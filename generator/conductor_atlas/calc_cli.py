@@ -66,6 +66,8 @@ def run_calc(args: argparse.Namespace) -> int:
     if args.json:
         payload = {k: outcome[k] for k in ("calculator", "inputs", "results", "warnings", "errors", "sources",
                                            "material", "model")}
+        payload["materials_used"] = [{"id": i, "name": n, "class": k, "note": note}
+                                     for i, n, k, note in outcome["used"]]
         print(json.dumps(payload, ensure_ascii=False, indent=1))
         return 1 if outcome["errors"] else 0
     if outcome["errors"]:
@@ -73,9 +75,13 @@ def run_calc(args: argparse.Namespace) -> int:
             print(f"conductor-atlas: calc {args.calculator}: {option_name(field)}: {message}", file=sys.stderr)
         return 1
     labels = dict(module.RESULT_LABELS)
-    width = max((len(labels.get(k, k)) for k in outcome["results"]), default=10)
+    width = max([len(labels.get(k, k)) for k in outcome["results"]] + [len("Material")])
     title = module.TITLE + (f": {outcome['material']}" if outcome["material"] else "")
     print(title + (f" ({outcome['model']})" if outcome["model"] else ""))
+    for material_id, name, klass, note in outcome["used"]:
+        print(f"  {'Material'.ljust(width)}  {name} ({klass}, id {material_id})")
+        if note:
+            print(f"  {''.ljust(width)}  {note}")
     for name, result in outcome["results"].items():
         print(f"  {labels.get(name, name).ljust(width)}  {result['text']}")
     for warning in outcome["warnings"]:

@@ -19,6 +19,7 @@ from markupsafe import Markup
 
 from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows, compare_table
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
+from conductor_atlas.core.lookup import TRADE_WORDS
 from conductor_atlas.derive import CELSIUS, MaterialView, calc_catalogue
 from conductor_atlas.material_charts import material_charts
 from conductor_atlas.core.numfmt import format_number, format_fixed
@@ -203,7 +204,8 @@ class Renderer:
         out[f"{base}/index.html"] = self.page(
             "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view),
             notes_html=markdown_safe(m.notes), sources=used, title=m.name,
-            calc_json=catalogue, charts=charts, class_title=CLASSES[m.klass], calc=calc_spec("resistance", {"material": m.id}))
+            calc_json=catalogue, charts=charts, class_title=CLASSES[m.klass], calc=calc_spec("resistance", {"material": m.id}),
+            material_key=TRADE_WORDS[m.id][2] if m.id in TRADE_WORDS else m.id)  # "copper" is the grade: link "Cu"
         for table in view.tables:
             out[f"{base}/{table.id}.csv"] = table.to_csv().encode("utf-8")
             out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")

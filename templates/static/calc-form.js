@@ -58,7 +58,7 @@ function viewOf(form) {
     form, fields, cells, inputs: null, state: null, general: null, warnings: null, model: null, sources: null,
     problemsNode: section.querySelector('.calc-problems'),
     warningsNode: section.querySelector('.calc-warnings'),
-    modelNode: section.querySelector('[data-model]'),
+    modelNode: section.querySelector('[data-model]'), materialNode: section.querySelector('[data-material]'), used: null,
     sourcesNode: section.querySelector('[data-sources]'),
   };
 }
@@ -135,6 +135,7 @@ function show(view, outcome) {
     }
   }
   view.warnings = warnings;
+  showMaterials(view, outcome.used || []);
   const model = outcome.model ? 'Model: ' + outcome.model : '';
   if (view.modelNode && model !== view.model) view.modelNode.textContent = model;
   view.model = model;
@@ -144,6 +145,30 @@ function show(view, outcome) {
   const state = Object.keys(errors).length ? 'error' : 'ok';
   if (state !== view.state) view.form.dataset.state = state;
   view.state = state;
+}
+
+// The first result line: each material the results were computed for, linked to its page, with the
+// note on how a trade word was read. outcome.used holds [id, name, class, note] lists.
+function showMaterials(view, used) {
+  const key = used.map((entry) => entry.join('\u0001')).join('\u0000');
+  if (!view.materialNode || key === view.used) return;
+  view.used = key;
+  view.materialNode.replaceChildren();
+  used.forEach(([id, name, klass, note], index) => {
+    if (index > 0) view.materialNode.appendChild(document.createTextNode(' · '));
+    view.materialNode.appendChild(document.createTextNode(index === 0 ? 'Material: ' : ''));
+    const link = document.createElement('a');
+    link.href = view.materialNode.dataset.root + 'materials/' + encodeURIComponent(id) + '/index.html';
+    link.textContent = name;
+    view.materialNode.appendChild(link);
+    view.materialNode.appendChild(document.createTextNode(' (' + klass + ', id ' + id + ')'));
+    if (note) {
+      const small = document.createElement('span');
+      small.className = 'material-note';
+      small.textContent = note;
+      view.materialNode.appendChild(small);
+    }
+  });
 }
 
 // One Transcrypt dict of inputs per form, refilled on each update: the core only reads it (the

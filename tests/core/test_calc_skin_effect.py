@@ -122,7 +122,7 @@ CU_RHO_LAMBDA = 6.70e-16
 
 
 def test_mean_free_path_at_its_record_temperature_is_the_record(catalogue):
-    out = calculate_skin_effect({"material": "copper", "frequency": "10 GHz", "temperature": "295 K"}, catalogue)
+    out = calculate_skin_effect({"material": "Cu", "frequency": "10 GHz", "temperature": "295 K"}, catalogue)
     assert value(out, "mean_free_path") == pytest.approx(CU_MFP_295K, rel=1e-12)
     rho = value(out, "resistivity")
     assert value(out, "path_ratio") == pytest.approx(CU_MFP_295K / delta_ref(rho, 1e10), rel=MU0_REL)
@@ -132,7 +132,7 @@ def test_mean_free_path_at_its_record_temperature_is_the_record(catalogue):
 
 
 def test_cold_copper_at_microwave_frequency_is_flagged_anomalous(catalogue):
-    out = calculate_skin_effect({"material": "copper", "frequency": "1 GHz", "temperature": "20 K"}, catalogue)
+    out = calculate_skin_effect({"material": "Cu", "frequency": "1 GHz", "temperature": "20 K"}, catalogue)
     mfp, rho = value(out, "mean_free_path"), value(out, "resistivity")
     assert mfp * rho == pytest.approx(CU_RHO_LAMBDA, rel=0.03)      # ρ·ℓ held constant
     assert value(out, "path_ratio") == pytest.approx(mfp / delta_ref(rho, 1e9), rel=MU0_REL)
@@ -160,9 +160,9 @@ def test_no_mean_free_path_without_a_record_or_a_carrier_density(catalogue):
 
 def test_resistance_calculator_gives_the_same_caution(catalogue):
     from conductor_atlas.core.calculators import calculate
-    cold = {"material": "copper", "length": "1 m", "size": "d 1 mm", "temperature": "20 K", "frequency": "1 GHz"}
+    cold = {"material": "Cu", "length": "1 m", "size": "d 1 mm", "temperature": "20 K", "frequency": "1 GHz"}
     run = calculate("resistance", cold, catalogue)
-    skin = calculate_skin_effect({"material": "copper", "frequency": "1 GHz", "temperature": "20 K"}, catalogue)
+    skin = calculate_skin_effect({"material": "Cu", "frequency": "1 GHz", "temperature": "20 K"}, catalogue)
     caution = [w for w in skin["warnings"] if "anomalous skin effect" in w]
     assert len(caution) == 1 and caution[0] in run["warnings"]
     mains = calculate("resistance", {**cold, "temperature": "20 °C", "frequency": "50 Hz"}, catalogue)

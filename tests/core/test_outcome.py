@@ -11,7 +11,7 @@ from conductor_atlas.core.outcome import add_error, add_result, check_finite_res
 def test_new_outcome_has_every_part_empty():
     out = new_outcome("thin-film", {"thickness": "20 nm"})
     assert out == {"calculator": "thin-film", "material": "", "inputs": {"thickness": "20 nm"}, "results": {},
-                   "warnings": [], "errors": {}, "sources": [], "model": ""}
+                   "warnings": [], "errors": {}, "sources": [], "model": "", "used": []}
 
 
 def test_new_outcome_keeps_a_copy_of_the_inputs():

@@ -127,7 +127,8 @@ def calculator_cases():
         {"length": "1 m", "size": "d 1 mm", "temperature": "20 K", "frequency": "1 GHz"},  # anomalous skin effect
     ]
     cases = []
-    names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", ""]
+    names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", "", "copper",
+             "Aluminum"]
     for name in names:
         for inp in inputs:
             cases.append(("conductor_atlas.core.calculators", "calculate",
@@ -137,8 +138,12 @@ def calculator_cases():
                 cases.append(("conductor_atlas.core.calculators", "calculate",
                               ["resistivity", {"material": name, "temperature": t, "model": model}, catalogue]))
     cases.append(("conductor_atlas.core.calculators", "calculate", ["nonsense", {}, catalogue]))
-    for text in ("Cu", "cu", " IACS ", "annealed copper", "Standard annealed copper", "alu", "", "Xx"):
+    for text in ("Cu", "cu", " IACS ", "annealed copper", "Standard annealed copper", "alu", "", "Xx", "copper",
+                 "ALUMINIUM", " aluminum "):
         cases.append(("conductor_atlas.core.lookup", "find_material", [catalogue, text, "material"]))
+        cases.append(("conductor_atlas.core.lookup", "trade_word_note", [catalogue, text]))
+    for material_id in ("copper", "aluminium", "copper-annealed", "silver"):
+        cases.append(("conductor_atlas.core.lookup", "lookup_text", [catalogue, material_id]))
     # the pruned nearest-name search: unknown names typed a keystroke at a time, several counts
     for text in ("1", "13", "135", "1485.001", "cooper", "alumin", "c1720", "zzzzzzzzzzzzzzzz", "  ni ", "ÅÄ"):
         for count in (0, 1, 5, 12):

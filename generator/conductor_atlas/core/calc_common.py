@@ -1,21 +1,23 @@
 """Steps shared by several calculators: pick the material, read temperature and model, get ρ."""
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.lookup import find_material
+from conductor_atlas.core.lookup import find_material, trade_word_note
 from conductor_atlas.core.material_models import resistivity_at
 from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import (add_error, add_sources, add_warning, field_text, has_errors,
-                                          read_quantity)
+from conductor_atlas.core.outcome import (add_error, add_material_used, add_sources, add_warning, field_text,
+                                          has_errors, read_quantity)
 
 
 def read_material(outcome, inputs, catalogue, field):
-    """The material named in ``field`` (or None, with errors[field] set)."""
+    """The material named in ``field`` (or None, with errors[field] set), named in outcome["used"]."""
+    text = field_text(inputs, field)
     try:
-        m = find_material(catalogue, field_text(inputs, field), field)
+        m = find_material(catalogue, text, field)
     except CoreError as problem:
         add_error(outcome, field, problem.message)
         return None
     add_sources(outcome, m["sources"])
+    add_material_used(outcome, m, trade_word_note(catalogue, text))
     return m
 
 

@@ -137,12 +137,58 @@ def nearest_names(catalogue, text, count):
     return names
 
 
+# The plain words a practitioner types for conductor metal mean the conductor grade that is bought
+# and measured, not the high-purity element (common practice (no source)); the chemical symbol keeps
+# meaning the element. word -> [grade id, the element's id, the element's symbol]
+TRADE_WORDS = {
+    "copper": ["copper-annealed", "copper", "Cu"],
+    "aluminium": ["aluminium-1350", "aluminium", "Al"],
+    "aluminum": ["aluminium-1350", "aluminium", "Al"],
+}
+
+
+def trade_word_grade(catalogue, wanted):
+    """The grade id the folded trade word ``wanted`` stands for, "" when it is none (or the grade is
+    not in the catalogue)."""
+    if wanted in TRADE_WORDS:
+        grade = TRADE_WORDS[wanted][0]
+        if grade in catalogue["materials"]:
+            return grade
+    return ""
+
+
+def trade_word_note(catalogue, text):
+    """What a result says when ``text`` is a trade word: which grade it was read as and how to ask for
+    the high-purity metal; "" otherwise."""
+    wanted = fold(text)
+    grade = trade_word_grade(catalogue, wanted)
+    if len(grade) == 0:
+        return ""
+    pure = TRADE_WORDS[wanted][1]
+    note = "“" + str(text).strip() + "” is read as the conductor grade " + catalogue["materials"][grade]["name"]
+    if pure in catalogue["materials"]:
+        note = (note + "; for " + catalogue["materials"][pure]["name"] + " enter " + TRADE_WORDS[wanted][2])
+    return note
+
+
+def lookup_text(catalogue, material_id):
+    """Text that find_material reads as ``material_id``: the id, or for an id that is also a trade
+    word ("copper") the element's symbol ("Cu"). Pages and links fill material fields with it."""
+    if len(trade_word_grade(catalogue, material_id)) == 0:
+        return material_id
+    return TRADE_WORDS[material_id][2]
+
+
 def find_material(catalogue, text, field="material"):
-    """The catalogue record named by ``text`` (id, alias, symbol; any case)."""
+    """The catalogue record named by ``text`` (id, alias, name or symbol; any case). A trade word
+    (TRADE_WORDS) gives its conductor grade."""
     wanted = fold(text)
     if len(wanted) == 0:
         raise CoreError("is empty: name a material by id, alias or symbol (e.g. Cu, IACS, 1350)", field)
     materials = catalogue["materials"]
+    grade = trade_word_grade(catalogue, wanted)
+    if len(grade) > 0:
+        return materials[grade]
     if wanted in materials:
         return materials[wanted]
     aliases = catalogue["aliases"]

@@ -2,7 +2,10 @@
 
     {"calculator": name, "material": id, "inputs": {field: text}, "results": {name: {"value": SI float,
      "unit": SI symbol, "text": what a person reads}}, "warnings": [str], "errors": {field: message},
-     "sources": [source keys], "model": str}
+     "sources": [source keys], "model": str, "used": [[id, name, class, note]]}
+
+"used" names each material a result was computed for (pages and the terminal show it first);
+its note says how a trade word was read ("" otherwise).
 
 Bad input never raises out of a calculator: the message goes under errors[field].
 """
@@ -26,7 +29,7 @@ def keyed_record():
 def outcome_record(name, inputs):
     """The outcome's own record; "results" and "errors" are set by new_outcome."""
     return {"calculator": name, "material": "", "inputs": inputs, "results": None, "warnings": [],
-            "errors": None, "sources": [], "model": ""}
+            "errors": None, "sources": [], "model": "", "used": []}
 
 
 def result_entry(value, unit, text):
@@ -49,6 +52,14 @@ def new_outcome(name, inputs):
 def add_result(outcome, name, value, unit, text):
     """Store one result (SI value, SI unit symbol, text a person reads)."""
     outcome["results"][name] = result_entry(value, unit, text)
+
+
+def add_material_used(outcome, m, note):
+    """Name material record ``m`` among those the results use (once), with ``note`` ("" for none)."""
+    for entry in outcome["used"]:
+        if entry[0] == m["id"]:
+            return
+    outcome["used"].append([m["id"], m["name"], m["klass"].replace("-", " "), note])
 
 
 def add_error(outcome, field, message):

@@ -1,0 +1,67 @@
+"""Shop-floor tasks at tablet size (834 × 1112), through the calculator pages, each answer checked
+against the Python core (issue 13): the same inputs typed as a person types them."""
+
+from __future__ import annotations
+
+import pytest
+
+from conductor_atlas.core.calculators import calculate
+
+pytestmark = pytest.mark.browser
+
+
+def open_resistance(pg, served_site):
+    pg.goto(f"{served_site}/calculators/resistance/index.html")
+    pg.wait_for_selector("html.calc-ready")
+
+
+def type_inputs(pg, inputs):
+    for name, text in inputs.items():
+        pg.fill(f"#in-resistance-{name}", text)
+
+
+def shown_values(pg):
+    return pg.eval_on_selector_all(
+        "[data-result]", "els => Object.fromEntries(els.map(e => [e.dataset.result, e.dataset.value ?? null]))")
+
+
+def assert_page_matches_core(pg, catalogue, inputs):
+    expected = calculate("resistance", inputs, catalogue)
+    assert expected["errors"] == {}, expected["errors"]
+    shown = shown_values(pg)
+    for name, result in expected["results"].items():
+        assert shown[name] is not None, name
+        assert float(shown[name]) == pytest.approx(result["value"], rel=1e-12, abs=0)
+    return expected
+
+
+def test_b_fifteen_hundred_feet_written_with_a_comma_is_refused_then_computed(tablet_page, served_site, catalogue):
+    pg = tablet_page
+    open_resistance(pg, served_site)
+    type_inputs(pg, {"material": "IACS", "length": "1,500 ft", "size": "12 AWG", "temperature": "20 °C"})
+    message = pg.text_content("#in-resistance-length-error")
+    assert "could be 1500" in message and "or 1.5" in message and "write 1500 or 1.5" in message
+    assert pg.text_content("[data-result=resistance]") == "—"
+    pg.fill("#in-resistance-length", "1500 ft")
+    expected = assert_page_matches_core(pg, catalogue, {"material": "IACS", "length": "1500 ft", "size": "12 AWG",
+                                                       "temperature": "20 °C"})
+    # 12 AWG annealed copper: 1.588 Ω per 1000 ft at 20 °C (AWG tables on ASTM B258 and IACS, from memory)
+    assert expected["results"]["resistance"]["value"] == pytest.approx(2.382, rel=5e-3)
+    assert pg.text_content("#in-resistance-length-error") == ""
+    assert pg.errors == []
+
+
+def test_c_copper_names_standard_annealed_copper(tablet_page, served_site, catalogue):
+    pg = tablet_page
+    open_resistance(pg, served_site)
+    type_inputs(pg, {"material": "copper", "length": "10 m", "size": "2.5 mm2"})
+    line = pg.text_content("[data-material]")
+    assert line.startswith("Material: Standard annealed copper (conductor grade, id copper-annealed)")
+    assert "for Copper (high purity) enter Cu" in line
+    # the first thing in the results block, and a link to the material's page
+    first = pg.eval_on_selector(".calc-results", "el => el.firstElementChild.dataset.material !== undefined")
+    assert first
+    pg.click("[data-material] a")
+    pg.wait_for_load_state()
+    assert pg.url.endswith("/materials/copper-annealed/index.html")
+    assert pg.errors == []
