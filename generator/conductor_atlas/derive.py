@@ -16,6 +16,7 @@ from conductor_atlas.core.lookup import fold
 from conductor_atlas.core.material_models import resistivity_at
 from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
 from conductor_atlas.model import DataSet, Material
+from conductor_atlas.standards import limits_record
 from conductor_atlas.tables import Table
 from conductor_atlas.material_tables import material_tables
 
@@ -52,6 +53,20 @@ def reference_resistivity(m: Material) -> tuple[float, float, str]:
         return value.si, value.temperature or T20, value.source
     iacs = m.get("conductivity_iacs")
     return dc.resistivity_from_iacs(iacs.si), iacs.temperature or T20, iacs.source
+
+
+def resistivity_range(m: Material) -> tuple[float, float]:
+    """(lowest, highest) ρ [Ω·m] the record's min/max allow, at the reference value's temperature;
+    (0, 0) when the record gives no range. A %IACS range turns over: its max is the lowest ρ."""
+    value = m.get("resistivity")
+    if value is not None:
+        if value.low is None or value.high is None:
+            return 0.0, 0.0
+        return value.low, value.high
+    iacs = m.get("conductivity_iacs")
+    if iacs.low is None or iacs.high is None:
+        return 0.0, 0.0
+    return dc.resistivity_from_iacs(iacs.high), dc.resistivity_from_iacs(iacs.low)
 
 
 def linear_model(m: Material) -> LinearModel | None:
@@ -130,11 +145,16 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
     rho_ref = model.rho_ref if model else rho
     t_ref = model.t_ref if model else t_rho
     mfp_si, mfp_t, mfp_source, mfp_how = own_mean_free_path(m, rho_ref, t_ref)
+    low, high = resistivity_range(m)
     return {
         "id": m.id,
         "name": m.name,
         "klass": m.klass,
         "rho_ref": rho_ref,
+        # the recorded range as fractions of the recorded value (0, 0: no range); a calculator
+        # scales ρ(T) by them, i.e. the range is taken to keep its relative width at every T
+        "rho_low_ratio": low / rho if low > 0 else 0.0,
+        "rho_high_ratio": high / rho if high > 0 else 0.0,
         "t_ref": t_ref,
         "alpha": model.alpha if model else 0.0,
         "valid_from": model.valid_from if model else t_rho,
@@ -147,6 +167,10 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "mean_free_path_t": mfp_t,
         "mean_free_path_how": mfp_how,
         "thermal_conductivity": si_or(m, "thermal_conductivity", 0.0),
+        "specific_heat": si_or(m, "specific_heat", 0.0),
+        "melting_point": si_or(m, "melting_point", 0.0),
+        "specific_heat_t": m.get("specific_heat").temperature if m.get("specific_heat") else 0.0,
+        "specific_heat_source": m.get("specific_heat").source if m.get("specific_heat") else "",
         "table_t": list(m.table.temperatures) if m.table else [],
         "table_rho": list(m.table.resistivities) if m.table else [],
         "bg_rho0": fit.rho0 if fit else 0.0,
@@ -174,9 +198,10 @@ def model_sources(m: Material) -> list[str]:
     return sorted(keys)
 
 
-def calc_catalogue(records: list[dict], materials: list[Material]) -> dict:
-    """{"materials": {id: record}, "aliases": {folded alias or name: id}, "display_aliases": {...}}."""
-    catalogue = {"materials": {}, "aliases": {}, "display_aliases": {}}
+def calc_catalogue(records: list[dict], materials: list[Material], limits: tuple = ()) -> dict:
+    """{"materials": {id: record}, "aliases": {folded alias or name: id}, "display_aliases": {...},
+    "limits": [conductor-standard tables, standards.limits_record]}."""
+    catalogue = {"materials": {}, "aliases": {}, "display_aliases": {}, "limits": limits_record(limits)}
     taken = {r["id"] for r in records}
     by_id = {m.id: m for m in materials}
     for record in records:
@@ -233,4 +258,4 @@ def derive(dataset: DataSet) -> list[MaterialView]:
 def catalogue_of(dataset: DataSet) -> dict:
     """The calculators' catalogue of every material, without computing any page table."""
     records = [calc_record(m, linear_model(m), bloch_gruneisen(m)) for m in dataset.materials]
-    return calc_catalogue(records, list(dataset.materials))
+    return calc_catalogue(records, list(dataset.materials), dataset.limits)

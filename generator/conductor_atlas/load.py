@@ -20,6 +20,7 @@ import pint
 
 from conductor_atlas.errors import DataError
 from conductor_atlas.model import DataSet, Material, ResistivityTable, Source, Value
+from conductor_atlas.standards import read_standard, standard_files
 from conductor_atlas.schema import (CLASSES, MAX_FILE_BYTES, MAX_TABLE_POINTS, PROPERTIES, RECORD_KEYS,
                                     SCHEMA_VERSION, TABLE_KEYS, TABLE_RESISTIVITY_OHM_M, TABLE_TEMPERATURE_K,
                                     TOP_LEVEL_KEYS, YEARS)
@@ -510,7 +511,14 @@ def load_dataset(folders: list[Path]) -> DataSet:
     from conductor_atlas.derived_checks import material_problems  # imports derive, which imports numpy
     for m in materials:
         problems.lines.extend(material_problems(m, display_path(m.path)))
+    limits = []
+    material_ids = {m.id for m in materials}
+    for folder in folders:
+        if folder.is_dir():
+            for path in standard_files(folder):
+                limits.extend(read_standard(path, set(sources), material_ids, problems))
     if problems.lines:
         raise DataError(problems.lines)
     materials.sort(key=lambda m: m.id)
-    return DataSet(materials=tuple(materials), sources=MappingProxyType(dict(sorted(sources.items()))))
+    return DataSet(materials=tuple(materials), sources=MappingProxyType(dict(sorted(sources.items()))),
+                   limits=tuple(limits))

@@ -112,6 +112,8 @@ class DataSet:
 
     materials: tuple[Material, ...]
     sources: Mapping[str, Source] = field(default_factory=lambda: MappingProxyType({}))
+    # conductor-standard tables (conductor_atlas.standards.LimitTable), from each folder's standards/
+    limits: tuple = ()
 
     def by_id(self, material_id: str) -> Material:
         for m in self.materials:

@@ -40,6 +40,7 @@ CARD_UNITS = {
     "debye_temperature": (1.0, "K", 4),
     "melting_point": (1.0, "K", 6),
     "thermal_conductivity": (1.0, "W/(m·K)", 4),
+    "specific_heat": (1.0, "J/(kg·K)", 4),
     "relative_permeability": (1.0, "", 4),
     "curie_temperature": (1.0, "K", 5),
     "mean_free_path": (1e9, "nm", 3),
@@ -222,7 +223,7 @@ class Renderer:
         out["index.html"] = self.page("index.html", "index.html", groups=groups, views=views,
                                       calcs=[calc_spec(name) for name in ordered_calculators()], title=SITE_NAME)
         out["search/index.html"] = self.page("search.html", "search/index.html", title="Search")
-        full_catalogue = calc_catalogue([v.calc for v in views], [v.material for v in views])
+        full_catalogue = calc_catalogue([v.calc for v in views], [v.material for v in views], dataset.limits)
         choices = material_choices(views)
         calcs = [calc_spec(name, datalist="material-choices") for name in ordered_calculators()]
         out["calculators/index.html"] = self.page("calculators.html", "calculators/index.html", calcs=calcs,

@@ -50,6 +50,8 @@ PROPERTIES = {
     "debye_temperature": PropertySpec("K", "Debye temperature", 10.0, 2500.0),
     "melting_point": PropertySpec("K", "melting point", 200.0, 4000.0),
     "thermal_conductivity": PropertySpec("W / (m * K)", "thermal conductivity", 0.5, 5000.0, True),
+    # specific heat capacity at constant pressure (the short-circuit calculator's heat balance)
+    "specific_heat": PropertySpec("J / (kg * K)", "specific heat capacity", 50.0, 5000.0, True),
     "relative_permeability": PropertySpec("dimensionless", "relative permeability", 0.9, 1e6),
     "curie_temperature": PropertySpec("K", "Curie temperature", 100.0, 2000.0),
     "mean_free_path": PropertySpec("m", "electron mean free path", 1e-11, 1e-6, True),
@@ -67,7 +69,7 @@ PROPERTIES = {
 # SI unit symbols shown on pages for each property
 DISPLAY_UNITS = {
     "ohm * m": "Ω·m", "percent": "%", "1 / K": "1/K", "kg / m ** 3": "kg/m³", "kg / mol": "kg/mol",
-    "dimensionless": "", "1 / m ** 3": "m⁻³", "K": "K", "W / (m * K)": "W/(m·K)", "m": "m",
+    "dimensionless": "", "1 / m ** 3": "m⁻³", "K": "K", "W / (m * K)": "W/(m·K)", "J / (kg * K)": "J/(kg·K)", "m": "m",
     "Pa": "Pa", "1 / K ** 2": "1/K²", "1 / K ** 4": "1/K⁴",
 }
 

@@ -15,6 +15,7 @@ PINT_NAME = {
     "cmil": "circular_mil", "kcmil": "kilocircular_mil", "mcm": "kilocircular_mil",
     "k": "K", "degc": "degC", "c": "degC", "degf": "degF", "f": "degF",
     "a": "A", "ma": "mA", "ka": "kA",
+    "s": "s", "ms": "ms", "min": "min",
     "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
     "v": "V", "mv": "mV", "kv": "kV",
     "ohm": "ohm", "mohm": "milliohm", "uohm": "microohm", "kohm": "kiloohm",
@@ -30,7 +31,8 @@ PINT_NAME = {
 SI_IN_PINT = {"length": "m", "area": "m**2", "temperature": "K", "current": "A", "frequency": "Hz",
               "voltage": "V", "resistance": "ohm", "resistivity": "ohm*m", "power": "W",
               "current_density": "A/m**2", "ratio": "dimensionless",
-              "density": "kg/m**3", "temperature_coefficient": "1/K", "thermal_conductivity": "W/(m*K)"}
+              "density": "kg/m**3", "temperature_coefficient": "1/K", "thermal_conductivity": "W/(m*K)",
+              "time": "s"}
 
 
 def test_every_unit_has_a_pint_counterpart():

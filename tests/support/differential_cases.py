@@ -202,7 +202,41 @@ def new_calculator_cases(catalogue):
                       {"max_drop": "150 %"}, {"length": "1 mm", "current": "1 mA", "max_drop": "10 V"}):
             add("sizing", "", {"material": material, "length": "30 m", "current": "16 A", "max_drop": "3 %",
                                "supply": "230 V", "conductors": "2", "temperature": "70 °C", **extra})
-    for name in ("skin-effect", "carriers", "thin-film", "temperature-rise", "compare", "sizing"):
+    check = {"material": "IACS", "resistance": "0.736 ohm", "temperature": "23.5 °C", "length": "100 m",
+             "size": "2.5 mm2", "conductor_class": "2", "model": "auto"}
+    for material in ("IACS", "tinned copper", "1350", "copper-hard-drawn", "6101", "stainless-304", "Pt385", "xx", ""):
+        for extra in ({}, {"conductor_class": "1"}, {"conductor_class": "5", "size": "95 mm2", "resistance": "20 mohm"},
+                      {"conductor_class": "6", "size": "300 mm2"}, {"conductor_class": "class 2", "size": "3 mm2"},
+                      {"size": "12 AWG", "resistance": "0.53 ohm"}, {"size": "d 1.6 mm"}, {"size": "40 x 5 mm"},
+                      {"conductor_class": ""}, {"conductor_class": "4"}, {"temperature": "45 °C", "length": "0.5 m"},
+                      {"temperature": "-300 °C"}, {"resistance": "-1 ohm", "length": "0 m"},
+                      {"resistance": "1e308 ohm", "length": "1e-300 m"}, {"size": "10 mm2", "temperature": "4.2 K",
+                                                                            "model": "table"}):
+            add("measured_check", "", {**check, "material": material, **extra})
+    fault = {"material": "IACS", "current": "12 kA", "duration": "0.5 s", "size": "95 mm2", "initial": "90 °C",
+             "final": "250 °C", "model": "auto"}
+    for material in ("IACS", "Cu", "1350", "Al", "6101", "Ag", "Fe", "stainless-304", "xx"):
+        for extra in ({}, {"size": ""}, {"duration": ""}, {"final": ""}, {"final": "", "size": "1 mm2"},
+                      {"duration": "10 s", "final": "160 °C"}, {"initial": "300 °C"}, {"current": "0 A"},
+                      {"duration": "200 ms", "size": "4/0 AWG", "final": ""}, {"size": "", "final": ""},
+                      {"size": "60 x 10 mm", "current": "40 kA"}, {"model": "table", "initial": "20 °C"}):
+            add("short_circuit", "", {**fault, "material": material, **extra})
+    cf = "conductor_atlas.core.conformance"
+    for t in (278.15, 293.15, 296.65, 308.15):
+        for beta in (234.5, 228.0):
+            cases.append((cf, "iec60228_correction_factor", [t, beta]))
+    cases.append((cf, "margin_to_limit", [7.26e-3, 7.41e-3]))
+    cases.append((cf, "nominal_row", [[5e-7, 7.5e-7, 1e-6, 1.5e-6], 1.0e-6]))
+    sc = "conductor_atlas.core.short_circuit"
+    for k, beta in ((226e6, 234.5), (148e6, 228.0)):
+        cases.append((sc, "iec60949_final_temperature", [12000.0, 0.5, 95e-6, k, beta, 363.15]))
+        cases.append((sc, "iec60949_min_area", [12000.0, 0.5, k, beta, 363.15, 523.15]))
+        cases.append((sc, "iec60949_max_time", [12000.0, 95e-6, k, beta, 363.15, 523.15]))
+    cases.append((sc, "iec60949_k", [3.45e6, 1.7241e-8, 234.5]))
+    cases.append((sc, "iec60949_max_time", [1e-300, 95e-6, 226e6, 234.5, 363.15, 523.15]))
+    cases.append((sc, "linear_heat_integral", [3.45e6, 1.7241e-8, 0.00393, 293.15, 363.15, 523.15]))
+    for name in ("skin-effect", "carriers", "thin-film", "temperature-rise", "compare", "sizing", "measured-check",
+                 "short-circuit"):
         cases.append(("conductor_atlas.core.calculators", "calculate", [name, {"material": "Cu"}, catalogue]))
     sz = "conductor_atlas.core.size_effect"
     for kappa in (1e-3, 0.05, 0.5, 3.0, 100.0):

@@ -19,9 +19,12 @@ from conductor_atlas.core import calc_thin_film
 from conductor_atlas.core import calc_temperature_rise
 from conductor_atlas.core import calc_compare
 from conductor_atlas.core import calc_sizing
+from conductor_atlas.core import calc_measured_check
+from conductor_atlas.core import calc_short_circuit
 
 # everyday jobs first: the order of the calculator pages and lists
-CALCULATOR_MODULES = [calc_resistance, calc_sizing, calc_temperature_rise, calc_resistivity, calc_compare,
+CALCULATOR_MODULES = [calc_resistance, calc_sizing, calc_temperature_rise, calc_measured_check,
+                      calc_short_circuit, calc_resistivity, calc_compare,
                       calc_skin_effect, calc_carriers, calc_thin_film]
 
 # name -> module

@@ -31,6 +31,7 @@ SI_UNIT = {
     "ratio": "",
     "temperature_coefficient": "1/K",
     "thermal_conductivity": "W/(m·K)",
+    "time": "s",
 }
 
 # normalised spelling -> [kind, factor, offset]; offset only for temperatures
@@ -66,6 +67,10 @@ UNITS = {
     "a": ["current", 1.0, 0.0],
     "ma": ["current", 0.001, 0.0],
     "ka": ["current", 1000.0, 0.0],
+    # time (a fault's duration)
+    "s": ["time", 1.0, 0.0],
+    "ms": ["time", 0.001, 0.0],
+    "min": ["time", 60.0, 0.0],
     # frequency
     "hz": ["frequency", 1.0, 0.0],
     "khz": ["frequency", 1e3, 0.0],
@@ -118,6 +123,7 @@ CASE_SENSITIVE = {
     "MA": "megaampere",
     "MV": "megavolt",
     "Mm": "megametre",
+    "Ms": "megasecond",
 }
 
 KIND_WORDS = {
@@ -135,6 +141,7 @@ KIND_WORDS = {
     "density": "a density (e.g. 8.9 g/cm³, 2700 kg/m³)",
     "temperature_coefficient": "a temperature coefficient (e.g. 0.0039 1/K, 3900 ppm/K)",
     "thermal_conductivity": "a thermal conductivity (e.g. 400 W/(m·K))",
+    "time": "a time (e.g. 0.5 s, 200 ms)",
 }
 
 

@@ -1,0 +1,284 @@
+"""Calculator "short-circuit": a bare conductor's final temperature, least cross-section and longest time
+under a fault current, by the adiabatic heat balance with the material's own ρ(T), IEC 60949 beside it."""
+
+from conductor_atlas.core import short_circuit as sc
+from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.geometry import next_metric_size, parse_size
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at
+from conductor_atlas.core.numfmt import format_fixed, format_number, format_si
+from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+                                          field_text, has_errors, kelvin_text, new_outcome, note_point_reading, read_quantity,
+                                          require_positive)
+from conductor_atlas.core.calc_common import read_material
+from conductor_atlas.core.calc_temperature_rise import is_copper, is_ec_aluminium
+
+NAME = "short-circuit"
+TITLE = "Short-circuit heating of a conductor"
+SUMMARY = ("Final temperature, least cross-section or longest time for a fault current, by the adiabatic heat "
+           "balance with the material's own ρ(T) and heat capacity; IEC 60949's formula beside it.")
+FIELDS = ["material", "current", "duration", "size", "initial", "final", "model"]
+DEFAULTS = {"material": "IACS", "current": "12 kA", "duration": "0.5 s", "size": "95 mm2", "initial": "90 °C",
+            "final": "250 °C", "model": "auto"}
+FIELD_INFO = {
+    "material": ["Conductor material", "id, alias or symbol, e.g. IACS, 1350, Cu: needs a specific heat on record"],
+    "current": ["Fault current", "r.m.s. over the fault, e.g. 12 kA, 800 A"],
+    "duration": ["Fault duration", "e.g. 0.5 s, 200 ms; empty: the longest time the size can carry"],
+    "size": ["Cross-section", "e.g. 95 mm², 4/0 AWG, 60 x 10 mm; empty: the least cross-section"],
+    "initial": ["Temperature before the fault", "e.g. 90 °C: the conductor's operating temperature"],
+    "final": ["Final temperature limit", "your insulation's short-circuit limit, e.g. 160 °C for PVC, 250 °C for "
+                                         "XLPE or EPR (common practice (no source): take the figure from the cable "
+                                         "standard or maker); empty: the final temperature"],
+    "model": MODEL_FIELD_INFO,
+}
+RESULT_LABELS = [
+    ["final_temperature", "Final temperature (heat balance)"], ["final_temperature_iec", "Final temperature (IEC 60949)"],
+    ["limit_margin", "Against the final temperature limit"],
+    ["min_area", "Least cross-section (heat balance)"], ["min_area_iec", "Least cross-section (IEC 60949)"],
+    ["next_size", "Next IEC 60228 nominal size"],
+    ["max_time", "Longest time (heat balance)"], ["max_time_iec", "Longest time (IEC 60949)"],
+    ["current_density", "Current density"], ["volumetric_heat", "Volumetric heat capacity used"],
+]
+CAUTION = ("An adiabatic estimate for a bare conductor: all the heat stays in the metal. The protective device's "
+           "clearing time, the mechanical forces of the fault current, the insulation and the installation rules of "
+           "the local electrical code decide a real installation; defer to licensed practice.")
+
+# Above this the heat lost to the surroundings is no longer small: IEC 60949 treats faults up to
+# about 5 s as adiabatic (from memory of its scope); longer ones need its non-adiabatic factor.
+ADIABATIC_LIMIT = 5.0  # [s]
+# How far above the initial temperature the final-temperature search looks when no melting point is
+# on record (our bound: no conductor metal survives 1500 K of rise).
+SEARCH_SPAN = 1500.0  # [K]
+AGREEMENT = 0.02  # the integrated answer and IEC 60949's formula are expected to agree within 2 %
+
+
+def iec_constants(m, catalogue):
+    """[K [A·s^½/m²], β [K], "copper" / "aluminium"] of IEC 60949 for the material, or None."""
+    if is_copper(m, catalogue):
+        return [sc.IEC60949_K_COPPER, sc.IEC60949_BETA_COPPER, "copper"]
+    if is_ec_aluminium(m, catalogue) or m["id"] == "aluminium":
+        return [sc.IEC60949_K_ALUMINIUM, sc.IEC60949_BETA_ALUMINIUM, "aluminium"]
+    return None
+
+
+def resistivities(m, points, model):
+    """ρ [Ω·m] of m at each temperature of ``points`` by ``model`` (warnings are read separately)."""
+    out = []
+    for t in points:
+        out.append(resistivity_at(m, t, model)["rho"])
+    return out
+
+
+def heat_integral_of(m, model, lo, hi, cv):
+    """∫ c_v/ρ(θ) dθ from lo to hi [K] with m's own ρ(T), [A²·s/m⁴]."""
+    return sc.heat_integral(resistivities(m, sc.integration_points(lo, hi), model), lo, hi, cv)
+
+
+def final_temperature(m, model, t_i, target, cv, cap):
+    """θf [K] where the heat integral from t_i reaches ``target`` = J² t, by bisection; -1.0 beyond ``cap``."""
+    if heat_integral_of(m, model, t_i, cap, cv) < target:
+        return -1.0
+    lo = t_i
+    hi = cap
+    for i in range(200):
+        mid = 0.5 * (lo + hi)
+        if heat_integral_of(m, model, t_i, mid, cv) < target:
+            lo = mid
+        else:
+            hi = mid
+        if hi - lo <= 1e-10 * hi:
+            break
+    return 0.5 * (lo + hi)
+
+
+def guard_squares(outcome, current, size):
+    """I² and S² enter the heat balance: refuse values whose square underflows or overflows."""
+    try:
+        if current is not None:
+            sc.check_squarable(current, "current", "the fault current")
+        if size is not None:
+            sc.check_squarable(size["area"], "size", "the cross-section")
+    except CoreError as problem:
+        add_error(outcome, problem.field, problem.message)
+
+
+def read_temperature_field(outcome, inputs, field, required):
+    t = read_quantity(outcome, inputs, field, "temperature", required)
+    if t is not None and not (t > 0):
+        add_error(outcome, field, "must be above absolute zero (−273.15 °C)")
+        return None
+    return t
+
+
+def celsius_text(t):
+    return format_fixed(t - ZERO_CELSIUS, 1) + " °C"
+
+
+def difference_text(value, reference):
+    """"(heat balance −1.23 % from IEC 60949)" style: value against reference, signed percent."""
+    d = (value - reference) / reference * 100.0
+    sign = "+"
+    if d < 0:
+        sign = "−"
+        d = -d
+    return sign + format_fixed(d, 2) + " %"
+
+
+def calculate(inputs, catalogue):
+    """Adiabatic short-circuit heating of a conductor.
+
+    Fields: material; current I; duration t (optional); size S (optional); initial θi;
+    final θf (optional); model. Two of duration, size and final are needed:
+    size + duration → θf from J² t = ∫ c_v/ρ(θ) dθ (J = I/S), solved for θf;
+    duration + final → S = I √(t / ∫…); size + final → t = S² ∫… / I².
+    c_v = density · c_p (c_p as recorded, held constant); ρ(θ) by the material's temperature model.
+    For copper and aluminium the same answers by IEC 60949: I² t = K² S² ln((θf + β)/(θi + β)).
+    """
+    outcome = new_outcome(NAME, inputs)
+    m = read_material(outcome, inputs, catalogue, "material")
+    current = read_quantity(outcome, inputs, "current", "current", True)
+    require_positive(outcome, "current", current, "the fault current")
+    duration = read_quantity(outcome, inputs, "duration", "time", False)
+    if duration is not None:
+        require_positive(outcome, "duration", duration, "the duration")
+    size = None
+    if len(field_text(inputs, "size")) > 0:
+        try:
+            size = parse_size(field_text(inputs, "size"), "size")
+            note_point_reading(outcome, field_text(inputs, "size"), "size")
+        except CoreError as problem:
+            add_error(outcome, "size", problem.message)
+    t_i = read_temperature_field(outcome, inputs, "initial", True)
+    t_f = read_temperature_field(outcome, inputs, "final", False)
+    guard_squares(outcome, current, size)
+    if has_errors(outcome):
+        return outcome
+    given = 0
+    for thing in [duration, size, t_f]:
+        if thing is not None:
+            given += 1
+    if given < 2:
+        for field in ["duration", "size", "final"]:
+            if len(field_text(inputs, field)) == 0:
+                add_error(outcome, field, "is empty: enter two of duration, cross-section and final temperature")
+                return outcome
+    if t_f is not None and not (t_f > t_i):
+        add_error(outcome, "final", "must lie above the temperature before the fault (" + celsius_text(t_i) + ")")
+        return outcome
+    if not (m["specific_heat"] > 0 and m["density"] > 0):
+        add_error(outcome, "material", "no specific heat and density are on record for " + m["name"]
+                  + ": the heat balance needs both (choose a conductor metal, e.g. IACS or 1350)")
+        return outcome
+    outcome["material"] = m["id"]
+    model = field_text(inputs, "model")
+    if len(model) == 0:
+        model = "auto"
+    cap = t_i + SEARCH_SPAN
+    if m["melting_point"] > t_i:
+        cap = m["melting_point"]
+    top = cap
+    if t_f is not None:
+        top = t_f
+    try:
+        here = resistivity_at(m, t_i, model)
+        resistivity_at(m, top, model)
+    except CoreError as problem:
+        field = problem.field
+        if field == "temperature":
+            field = "final"
+        add_error(outcome, field, problem.message)
+        return outcome
+    outcome["model"] = "adiabatic heat balance, ρ(T) by the " + here["label"]
+    cv = m["density"] * m["specific_heat"]
+    add_sources(outcome, m["sources"])
+    if len(m["specific_heat_source"]) > 0:
+        add_sources(outcome, [m["specific_heat_source"]])
+    iec = iec_constants(m, catalogue)
+    try:
+        worst = compute(outcome, m, model, current, duration, size, t_i, t_f, cv, cap, iec)
+    except CoreError as problem:
+        field = problem.field
+        if len(field) == 0 or field == "temperature":
+            field = "final"
+        add_error(outcome, field, problem.message)
+        outcome["results"] = {}
+        return outcome
+    if has_errors(outcome):
+        return outcome
+    if worst > 0:
+        for w in resistivity_at(m, worst, model)["warnings"]:
+            add_warning(outcome, w)
+    add_result(outcome, "volumetric_heat", cv, "J/(K·m³)", format_number(cv / 1e6, 4) + " MJ/(K·m³) (density × c_p "
+               + "at " + celsius_text(m["specific_heat_t"]) + ", held constant)")
+    add_warning(outcome, "c_p is held at its recorded value (" + celsius_text(m["specific_heat_t"]) + "); it rises "
+                         "with temperature (copper by about 5 % up to 250 °C, from memory), so the heat balance "
+                         "slightly overstates the final temperature: on the safe side")
+    if duration is not None and duration > ADIABATIC_LIMIT:
+        add_warning(outcome, "a fault longer than 5 s is no longer adiabatic (IEC 60949's limit for the adiabatic "
+                             "method, from memory): heat lost to the surroundings makes the real temperature lower "
+                             "than shown")
+    check_finite_results(outcome, "current")
+    return outcome
+
+
+def compute(outcome, m, model, current, duration, size, t_i, t_f, cv, cap, iec):
+    """Fill the results for whatever the two or three given quantities allow; the highest temperature the
+    answer reaches [K] (for the model's warnings), or -1.0 when an error was recorded."""
+    worst = -1.0
+    if iec is not None:
+        add_sources(outcome, ["iec60949"])
+    if size is not None:
+        area = size["area"]
+        add_result(outcome, "current_density", current / area, "A/m²", format_number(current / area / 1e6, 4)
+                   + " A/mm² over " + format_number(area * 1e6, 4) + " mm²")
+    if size is not None and duration is not None:
+        j = current / size["area"]
+        target = j * j * duration
+        theta = final_temperature(m, model, t_i, target, cv, cap)
+        if theta < 0:
+            add_error(outcome, "current", "the conductor would pass " + celsius_text(cap) + " (" + limit_name(m)
+                      + ") before the fault ends: it fuses; enter a larger cross-section or a shorter time")
+            outcome["results"] = {}
+            return -1.0
+        worst = theta
+        add_result(outcome, "final_temperature", theta, "K", kelvin_text(theta))
+        if iec is not None:
+            theta_iec = sc.iec60949_final_temperature(current, duration, size["area"], iec[0], iec[1], t_i)
+            add_result(outcome, "final_temperature_iec", theta_iec, "K", kelvin_text(theta_iec) + ", K = "
+                       + format_number(iec[0] / 1e6, 3) + " A·s^½/mm², β = " + format_number(iec[1], 4) + " ("
+                       + iec[2] + "); the rise by the heat balance is "
+                       + difference_text(theta - t_i, theta_iec - t_i) + " from it")
+        if t_f is not None:
+            margin = t_f - theta
+            words = format_fixed(margin, 1) + " K below the limit of " + celsius_text(t_f)
+            if margin < 0:
+                words = "FAIL: " + format_fixed(-margin, 1) + " K above the limit of " + celsius_text(t_f)
+            add_result(outcome, "limit_margin", margin, "K", words)
+    if t_f is not None:
+        worst = t_f
+        g = heat_integral_of(m, model, t_i, t_f, cv)
+        if duration is not None:
+            area = current * (duration / g) ** 0.5
+            add_result(outcome, "min_area", area, "m²", format_number(area * 1e6, 4) + " mm²")
+            if iec is not None:
+                area_iec = sc.iec60949_min_area(current, duration, iec[0], iec[1], t_i, t_f)
+                add_result(outcome, "min_area_iec", area_iec, "m²", format_number(area_iec * 1e6, 4) + " mm²; the "
+                           "heat balance is " + difference_text(area, area_iec) + " from it")
+            nominal = next_metric_size(area)
+            if nominal > 0:
+                add_result(outcome, "next_size", nominal * 1e-6, "m²", format_number(nominal, 4)
+                           + " mm² (the next nominal size up; check its real resistance and the cable standard)")
+        if size is not None:
+            t_max = g * size["area"] * size["area"] / (current * current)
+            add_result(outcome, "max_time", t_max, "s", format_si(t_max, "s", 4))
+            if iec is not None:
+                t_iec = sc.iec60949_max_time(current, size["area"], iec[0], iec[1], t_i, t_f)
+                add_result(outcome, "max_time_iec", t_iec, "s", format_si(t_iec, "s", 4) + "; the heat balance is "
+                           + difference_text(t_max, t_iec) + " from it")
+    return worst
+
+
+def limit_name(m):
+    if m["melting_point"] > 0:
+        return "its melting point"
+    return "the search's upper bound"

@@ -1,0 +1,148 @@
+"""A bare conductor heated by a fault current with no time to lose heat (the adiabatic case).
+
+Heat balance per unit volume while the current density J flows:
+    ρ(θ) J² dt = c_v(θ) dθ   ⇒   J² t = ∫ c_v(θ)/ρ(θ) dθ  from θi to θf     (1)
+This module integrates (1) with any ρ(θ) (a function of the temperature [K]) and a volumetric heat
+capacity c_v = density · c_p held constant, and gives IEC 60949's closed form beside it:
+    I² t = K² S² ln((θf + β)/(θi + β))                                              (2)
+which is (1) for ρ linear in θ (ρ = ρ20 (β + θ)/(β + 20)) and c_v constant, K² = c_v (β + 20)/ρ20.
+
+SI floats in and out (temperatures in K; (2) converts to °C internally), the Transcrypt subset,
+CoreError for impossible inputs. Not a cable rating: the insulation, the protective device and the
+mechanical forces decide a real installation.
+"""
+
+import math
+
+from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.errors import CoreError
+
+# IEC 60949:1988, Table I (from memory of the standard): K [A·s^½/mm²] and β [K] per conductor
+# material, for θ in °C in (2). Converted to SI here: K [A·s^½/m²] = K [A·s^½/mm²] · 1e6.
+IEC60949_K_COPPER = 226.0e6
+IEC60949_BETA_COPPER = 234.5
+IEC60949_K_ALUMINIUM = 148.0e6
+IEC60949_BETA_ALUMINIUM = 228.0
+
+SIMPSON_PANELS = 64  # even; Simpson's rule on 1/ρ over ≤ 1000 K is far below 1e-6 relative for linear ρ
+
+
+def check_squarable(x, field, what):
+    """CoreError unless x is finite, above 0, and x² neither underflows to 0 nor overflows (I², S² appear)."""
+    if not (x - x == 0) or not (x > 0):
+        raise CoreError(what + " must be a finite number above 0", field)
+    square = x * x
+    if not (square > 0) or not (square - square == 0):
+        raise CoreError(what + " is too small or too large to compute with", field)
+
+
+def iec60949_final_temperature(current, time_s, area, k, beta, theta_i):
+    """Final temperature after an adiabatic short circuit by IEC 60949's formula (2).
+
+    θf = (θi + β) · exp(I² t / (K² S²)) − β
+
+    current : float  Fault current I (r.m.s. over the duration), [A]
+    time_s : float   Duration t, [s]
+    area : float     Conductor cross-section S, [m²]
+    k : float        K of the conductor material, [A·s^½/m²] (copper 226e6, aluminium 148e6)
+    beta : float     β of the conductor material, [K] (copper 234.5, aluminium 228)
+    theta_i : float  Initial temperature, [K]
+
+    Returns θf [K]. Source: IEC 60949:1988, clause 3 (from memory).
+    """
+    check_squarable(current, "current", "the current")
+    check_squarable(time_s, "duration", "the duration")
+    check_squarable(area, "size", "the cross-section")
+    check_squarable(k, "k", "K")
+    ti = theta_i - ZERO_CELSIUS
+    if not (ti + beta > 0):
+        raise CoreError("the initial temperature lies below −β", "initial")
+    x = current * current * time_s / (k * k * area * area)
+    return (ti + beta) * math.exp(x) - beta + ZERO_CELSIUS
+
+
+def iec60949_min_area(current, time_s, k, beta, theta_i, theta_f):
+    """Smallest cross-section that keeps the final temperature at θf, by IEC 60949's formula (2).
+
+    S = I √t / (K √ln((θf + β)/(θi + β))),  [m²]. Arguments as iec60949_final_temperature;
+    theta_f [K] above theta_i.
+    """
+    check_squarable(current, "current", "the current")
+    check_squarable(time_s, "duration", "the duration")
+    return current * math.sqrt(time_s) / (k * math.sqrt(iec60949_log_ratio(beta, theta_i, theta_f)))
+
+
+def iec60949_max_time(current, area, k, beta, theta_i, theta_f):
+    """Longest duration a cross-section carries I from θi to θf, IEC 60949 (2): t = K² S² ln(…)/I², [s]."""
+    check_squarable(current, "current", "the current")
+    check_squarable(area, "size", "the cross-section")
+    return k * k * area * area * iec60949_log_ratio(beta, theta_i, theta_f) / (current * current)
+
+
+def iec60949_log_ratio(beta, theta_i, theta_f):
+    """ln((θf + β)/(θi + β)) with θ in °C (θi, θf given in K), [-]."""
+    ti = theta_i - ZERO_CELSIUS
+    tf = theta_f - ZERO_CELSIUS
+    if not (ti + beta > 0):
+        raise CoreError("the initial temperature lies below −β", "initial")
+    if not (tf > ti):
+        raise CoreError("the final temperature must lie above the initial one", "final")
+    return math.log((tf + beta) / (ti + beta))
+
+
+def iec60949_k(volumetric_heat, rho_20, beta):
+    """IEC 60949's K from material data: K = √(c_v (β + 20) / ρ20), [A·s^½/m²].
+
+    volumetric_heat : float  c_v, [J/(K·m³)] (copper 3.45e6, aluminium 2.5e6 in IEC 60949)
+    rho_20 : float           Resistivity at 20 °C, [Ω·m]
+    beta : float             [K]
+    Example: copper, √(3.45e6 · 254.5 / 1.7241e-8) = 225.7e6 (the standard rounds to 226).
+    """
+    check_squarable(volumetric_heat, "material", "the volumetric heat capacity")
+    check_squarable(rho_20, "material", "the resistivity")
+    return math.sqrt(volumetric_heat * (beta + 20.0) / rho_20)
+
+
+def heat_integral(rho_values, theta_lo, theta_hi, volumetric_heat):
+    """∫ c_v / ρ(θ) dθ from θlo to θhi by Simpson's rule, [A²·s/m⁴] (the right side of (1)).
+
+    rho_values : list of float  ρ [Ω·m] at the SIMPSON_PANELS + 1 equally spaced temperatures
+                                integration_points(theta_lo, theta_hi) gives
+    theta_lo, theta_hi : float  Limits, [K]
+    volumetric_heat : float     c_v, [J/(K·m³)], held constant
+    """
+    n = len(rho_values) - 1
+    if n < 2 or n % 2 != 0:
+        raise CoreError("Simpson's rule needs an even number of panels", "")
+    h = (theta_hi - theta_lo) / n
+    total = 0.0
+    for i in range(n + 1):
+        w = 2.0
+        if i == 0 or i == n:
+            w = 1.0
+        elif i % 2 == 1:
+            w = 4.0
+        rho = rho_values[i]
+        if not (rho > 0):
+            raise CoreError("the resistivity model gives no positive value in this temperature span", "final")
+        total += w / rho
+    return volumetric_heat * total * h / 3.0
+
+
+def integration_points(theta_lo, theta_hi):
+    """The SIMPSON_PANELS + 1 equally spaced temperatures [K] heat_integral expects ρ at."""
+    points = []
+    h = (theta_hi - theta_lo) / SIMPSON_PANELS
+    for i in range(SIMPSON_PANELS + 1):
+        points.append(theta_lo + h * i)
+    return points
+
+
+def linear_heat_integral(volumetric_heat, rho_ref, alpha, t_ref, theta_lo, theta_hi):
+    """The closed form of heat_integral for ρ = ρref (1 + α (θ − θref)), [A²·s/m⁴]:
+
+    c_v / (ρref α) · ln(ρ(θhi) / ρ(θlo))   (the check on the numerical integral)
+    """
+    rho_lo = rho_ref * (1.0 + alpha * (theta_lo - t_ref))
+    rho_hi = rho_ref * (1.0 + alpha * (theta_hi - t_ref))
+    return volumetric_heat / (rho_ref * alpha) * math.log(rho_hi / rho_lo)
