@@ -513,10 +513,9 @@ def load_dataset(folders: list[Path]) -> DataSet:
         problems.lines.extend(material_problems(m, display_path(m.path)))
     limits = []
     material_ids = {m.id for m in materials}
-    for folder in folders:
-        if folder.is_dir():
-            for path in standard_files(folder):
-                limits.extend(read_standard(path, set(sources), material_ids, problems))
+    for folder in readable:
+        for path in standard_files(folder, problems):
+            limits.extend(read_standard(path, set(sources), material_ids, problems))
     if problems.lines:
         raise DataError(problems.lines)
     materials.sort(key=lambda m: m.id)

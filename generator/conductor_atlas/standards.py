@@ -11,6 +11,7 @@ The calculators get the tables as plain data (``limits_record``): areas in m², 
 from __future__ import annotations
 
 import math
+import os
 from dataclasses import dataclass
 from pathlib import Path
 
@@ -41,12 +42,24 @@ class LimitTable:
     limits: tuple[float, ...]
 
 
-def standard_files(folder: Path) -> list[Path]:
-    """FOLDER/standards/*.toml, sorted (none when the folder has no standards/)."""
+def standard_files(folder: Path, problems) -> list[Path]:
+    """FOLDER/standards/*.toml, sorted (none when the folder has no standards/; a standards/ that
+    cannot be opened or is not a folder is reported)."""
+    from conductor_atlas.load import display_path, unreachable
     sub = folder / "standards"
-    if not sub.is_dir():
+    if not os.path.lexists(sub):
         return []
-    return sorted(p for p in sub.iterdir() if p.name.endswith(".toml"))
+    why = unreachable(sub)
+    if why is None and not sub.is_dir():
+        why = "is not a folder (expected standards/*.toml)"
+    if why is not None:
+        problems.add(display_path(sub), why)
+        return []
+    try:
+        return sorted(p for p in sub.iterdir() if p.name.endswith(".toml"))
+    except OSError as exc:
+        problems.add(display_path(sub), f"cannot be read ({exc.strerror})")
+        return []
 
 
 def read_standard(path: Path, sources: set[str], material_ids: set[str], problems) -> list[LimitTable]:
