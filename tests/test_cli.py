@@ -157,3 +157,16 @@ def test_calc_lists_messages_in_the_order_of_the_form():
     assert result.returncode == 1
     lines = result.stderr.splitlines()
     assert [line.split(": ")[2] for line in lines] == ["--material", "--length", "--temperature"], result.stderr
+
+
+def test_calc_overflow_is_reported_on_the_field_that_caused_it(capsys):
+    """A current of 1e300 A makes the voltage drop infinite; the message was on --length."""
+    assert main(["calc", "resistance", "--material", "Cu", "--size", "2.5 mm2", "--length", "10 m",
+                 "--current", "1e300 A"]) == 1
+    err = capsys.readouterr().err
+    assert err == ("conductor-atlas: calc resistance: --current: the inputs are too extreme to compute a finite "
+                   "result; check the values\n")
+    # here the resistance itself overflows (ρ·L/A ≈ 2e310 Ω): the length is named, not the current
+    assert main(["calc", "resistance", "--material", "Cu", "--size", "d 0.01 mm", "--length", "1e308 m",
+                 "--current", "1 A"]) == 1
+    assert "--length: the inputs are too extreme" in capsys.readouterr().err

@@ -125,6 +125,10 @@ def calculator_cases():
         {"length": "12 m", "size": "0.5 mm2", "temperature": "77 K", "model": "table"},
         {"length": "12 m", "size": "0.5 mm2", "model": "nonsense"},
         {"length": "1 m", "size": "d 1 mm", "temperature": "20 K", "frequency": "1 GHz"},  # anomalous skin effect
+        # an overflow is reported on the input that caused it (the current, not the length)
+        {"length": "10 m", "size": "2.5 mm2", "current": "1e300 A"},
+        {"length": "10 m", "size": "2.5 mm2", "current": "1e300 A", "frequency": "50 Hz"},
+        {"length": "1e300 m", "size": "2.5 mm2", "current": "1e300 A"},
     ]
     cases = []
     names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", "", "copper",

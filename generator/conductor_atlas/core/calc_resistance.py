@@ -35,6 +35,11 @@ RESULT_LABELS = [
     ["power_loss", "I²R loss"], ["current_density", "Current density"], ["skin_depth", "Skin depth"],
     ["ac_dc_ratio", "AC/DC ratio"], ["resistance_ac", "AC resistance"], ["power_loss_ac", "I²R loss at AC"],
 ]
+# result -> the input a non-finite value of it comes from, when the results before it are finite
+# (outcome.check_finite_results); any other result: "length"
+CAUSES = {"area": "size", "voltage_drop": "current", "power_loss": "current", "current_density": "current",
+          "skin_depth": "frequency", "ac_dc_ratio": "frequency", "resistance_ac": "frequency",
+          "power_loss_ac": "current"}
 CAUTION = ("A physics estimate, not an ampacity rating. Size real installations to the local electrical code and "
            "licensed practice.")
 
@@ -130,5 +135,5 @@ def calculate(inputs, catalogue):
         if current is not None:
             p_ac = dc.power_loss(r * ratio, current)
             add_result(outcome, "power_loss_ac", p_ac, "W", format_si(p_ac, "W", 4))
-    check_finite_results(outcome, "length")
+    check_finite_results(outcome, "length", CAUSES)
     return outcome

@@ -138,16 +138,21 @@ def require_positive(outcome, field, value, what):
     return True
 
 
-def check_finite_results(outcome, field):
-    """Turn any non-finite result into a message on ``field`` (no NaN or ∞ reaches a page)."""
-    bad = False
+def check_finite_results(outcome, field, causes=None):
+    """Turn any non-finite result into a message (no NaN or ∞ reaches a page), on the input that
+    caused it: results are added in the order they are computed, so the first non-finite one
+    names it through ``causes`` (result name -> input field; ``field`` for any result not listed).
+    E.g. with a finite resistance, an infinite voltage drop comes from the current."""
+    culprit = ""
     for key in outcome["results"].keys():
         v = outcome["results"][key]["value"]
-        if not (v - v == 0):
-            bad = True
-    if bad:
+        if len(culprit) == 0 and not (v - v == 0):
+            culprit = field
+            if causes is not None and key in causes:
+                culprit = causes[key]
+    if len(culprit) > 0:
         outcome["results"] = {}
-        add_error(outcome, field, "the inputs are too extreme to compute a finite result; check the values")
+        add_error(outcome, culprit, "the inputs are too extreme to compute a finite result; check the values")
 
 
 def kelvin_text(t):
