@@ -268,9 +268,37 @@ def new_calculator_cases(catalogue):
     return cases
 
 
+def filament_cases():
+    """The filament solver and its geometric mean distances (small, fast layouts)."""
+    fi = "conductor_atlas.core.filament_inductance"
+    fs = "conductor_atlas.core.filament_solver"
+    cl = "conductor_atlas.core.complex_linear"
+    cases = []
+    for placement in ([0.0, 0.0, 1e-3, 1e-3, 0.0, 0.0, 1e-3, 1e-3], [0.0, 0.0, 2e-3, 5e-4, 1.5e-3, 2e-4, 1e-3, 1e-3],
+                      [0.0, 0.0, 1e-3, 1e-3, 4e-3, 3e-3, 1e-3, 2e-3], [0.0, 0.0, 1e-3, 1e-3, 0.05, -0.02, 1e-3, 2e-3]):
+        cases.append((fi, "rectangle_log_gmd", placement))
+    for placement in ([0.0, 0.0, 1e-3, 1e-3, 0.0, 0.0, 1e-3, 1e-3], [0.0, 0.0, 2e-3, 5e-4, 1.5e-3, 2e-4, 1e-3, 1e-3]):
+        cases.append((fi, "rectangle_log_gmd_exact", placement))  # near: where the closed form is used
+    cases.append((fi, "rectangle_log_gmd_far", [0.0, 0.0, 1e-3, 1e-3, 0.05, -0.02, 1e-3, 2e-3]))
+    for rings in ([0.0, 1e-3, 0.0, 1e-3], [0.0, 1e-3, 1e-3, 2e-3], [1e-3, 2e-3, 0.0, 1e-3], [1e-3, 1.1e-3, 1e-3, 1.1e-3]):
+        cases.append((fi, "annulus_log_gmd", rings))
+    cases.append((cl, "solve_complex", [[2.0, 1.0, 0.5, 3.0], [0.1, -1.0, 2.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    cases.append((cl, "solve_complex", [[0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    for args in ([0.0, 0.05, False, True, 9.3e-3, 1], [0.0, 0.005, True, True, 9.3e-3, 2], [0.0, 0.1, False, False, 1e-3, 1]):
+        cases.append((fs, "graded_cells", args))
+    rho = 1.7241e-8
+    cases.append((fs, "bar_group_solution", [0.04, 0.005, 1, 0.0, rho, 50.0]))
+    cases.append((fs, "bar_group_solution", [0.02, 0.003, 3, 0.005, rho, 50.0]))
+    cases.append((fs, "bar_group_solution", [0.02, 0.003, 0, 0.005, rho, 50.0]))
+    cases.append((fs, "bar_pair_solution", [0.02, 0.003, 0.01, rho, 60.0]))
+    cases.append((fs, "round_layers_solution", [[[9.49e-4, 2.8264e-8], [1e-3, rho]], 1e6]))
+    cases.append((fs, "round_layers_solution", [[[5e-3, rho]], 50.0]))
+    return cases
+
+
 def all_cases():
     return (unit_cases() + geometry_cases() + numfmt_cases() + resistance_cases() + calculator_cases()
-            + search_cases() + model_cases() + physics_cases())
+            + search_cases() + model_cases() + physics_cases() + filament_cases())
 
 
 SEARCH_QUERIES = [

@@ -20,3 +20,4 @@ from conductor_atlas.core.temperature_models import interpolate_table
 from conductor_atlas.core.skin_effect import skin_depth
 from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.search import search, prepare_index, search_entries
+from conductor_atlas.core.filament_solver import bar_group_solution, bar_pair_solution, round_layers_solution

@@ -1,0 +1,97 @@
+"""A small dense complex linear solver, complex numbers held as pairs of float lists.
+
+Pure Python in the Transcrypt subset (JS has no complex type): a matrix is two flat row-major
+lists (real and imaginary parts) of n * n floats, a vector two lists of n floats.
+"""
+
+from conductor_atlas.core.errors import CoreError
+
+
+# __pragma__ ('nokwargs')
+def solve_complex(ar, ai, br, bi, n):
+    """Solve (ar + i ai) x = (br + i bi) by Gaussian elimination with partial pivoting.
+
+    Parameters
+    ----------
+    ar, ai : list
+        Real and imaginary parts of the n x n matrix, row-major, n * n floats each; overwritten
+    br, bi : list
+        Real and imaginary parts of the right-hand side, n floats each; overwritten
+    n : int
+        Order of the system
+
+    Returns
+    -------
+    x : list
+        [xr, xi], the real and imaginary parts of the solution
+
+    Notes
+    -----
+    Row pivoting on the largest modulus in the column (Golub & Van Loan, Matrix Computations,
+    4th ed., 2013, algorithm 3.4.1); about (8/3) n^3 real multiplications and additions. Raises
+    CoreError for a matrix that is singular to working precision.
+    """
+    for k in range(n):
+        # pivot: largest |a_ik| for i >= k
+        p = k
+        best = -1.0
+        for i in range(k, n):
+            m = ar[i * n + k] * ar[i * n + k] + ai[i * n + k] * ai[i * n + k]
+            if m > best:
+                best = m
+                p = i
+        if not (best > 0.0):
+            raise CoreError("the filament system is singular", "")
+        if p != k:
+            for j in range(k, n):
+                t = ar[k * n + j]
+                ar[k * n + j] = ar[p * n + j]
+                ar[p * n + j] = t
+                t = ai[k * n + j]
+                ai[k * n + j] = ai[p * n + j]
+                ai[p * n + j] = t
+            t = br[k]
+            br[k] = br[p]
+            br[p] = t
+            t = bi[k]
+            bi[k] = bi[p]
+            bi[p] = t
+        # 1 / pivot
+        kk = k * n + k
+        inv_r = ar[kk] / best
+        inv_i = -ai[kk] / best
+        for i in range(k + 1, n):
+            row = i * n
+            fr0 = ar[row + k]
+            fi0 = ai[row + k]
+            if fr0 == 0.0 and fi0 == 0.0:
+                continue
+            fr = fr0 * inv_r - fi0 * inv_i
+            fi = fr0 * inv_i + fi0 * inv_r
+            top = k * n
+            for j in range(k + 1, n):
+                ur = ar[top + j]
+                ui = ai[top + j]
+                ar[row + j] -= fr * ur - fi * ui
+                ai[row + j] -= fr * ui + fi * ur
+            br[i] -= fr * br[k] - fi * bi[k]
+            bi[i] -= fr * bi[k] + fi * br[k]
+    xr = []
+    xi = []
+    for i in range(n):
+        xr.append(0.0)
+        xi.append(0.0)
+    i = n - 1
+    while i >= 0:
+        sr = br[i]
+        si = bi[i]
+        row = i * n
+        for j in range(i + 1, n):
+            sr -= ar[row + j] * xr[j] - ai[row + j] * xi[j]
+            si -= ar[row + j] * xi[j] + ai[row + j] * xr[j]
+        d = ar[row + i] * ar[row + i] + ai[row + i] * ai[row + i]
+        xr[i] = (sr * ar[row + i] + si * ai[row + i]) / d
+        xi[i] = (si * ar[row + i] - sr * ai[row + i]) / d
+        i -= 1
+    return [xr, xi]
+# __pragma__ ('kwargs')
