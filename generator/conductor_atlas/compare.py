@@ -11,7 +11,8 @@ from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.material_models import local_temperature_coefficient
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.derive import T20, MaterialView
+from conductor_atlas.core.constants import TWENTY_CELSIUS
+from conductor_atlas.derive import MaterialView
 from conductor_atlas.schema import CLASSES
 from conductor_atlas.tables import Column, Row, Table
 
@@ -52,7 +53,7 @@ def cell(value: float | None, scale: float, sig: int) -> Cell:
 
 def local_alpha(record: dict) -> float | None:
     """α at 20 °C by the core's local coefficient; None where no model holds there without a warning."""
-    alpha, warnings = local_temperature_coefficient(record, T20, "auto")
+    alpha, warnings = local_temperature_coefficient(record, TWENTY_CELSIUS, "auto")
     return None if warnings else alpha
 
 

@@ -11,21 +11,19 @@ from dataclasses import dataclass
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.carriers import electron_density
-from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.lookup import fold
-from conductor_atlas.core.material_models import resistivity_at
+from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
+from conductor_atlas.core.material_models import resistivity_or_none
 from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
 from conductor_atlas.model import DataSet, Material
 from conductor_atlas.standards import limits_record
 from conductor_atlas.tables import Table
 from conductor_atlas.material_tables import material_tables
 
-CELSIUS = 273.15
-T20 = CELSIUS + 20.0
 # The span of the linear model when a file gives none: −50 °C … +200 °C is the trade's usual
 # working range for conductor metals (common practice (no source)); pages say so.
-DEFAULT_VALID_FROM = CELSIUS - 50.0
-DEFAULT_VALID_TO = CELSIUS + 200.0
+DEFAULT_VALID_FROM = ZERO_CELSIUS - 50.0
+DEFAULT_VALID_TO = ZERO_CELSIUS + 200.0
 FIT_LIMIT = 2.0  # fit Bloch–Grüneisen to table points up to this multiple of the Debye temperature
 MAGNETIC_PROPERTIES = ("relative_permeability", "curie_temperature")
 
@@ -50,9 +48,9 @@ def reference_resistivity(m: Material) -> tuple[float, float, str]:
     """(ρ [Ω·m], temperature [K], source key) from resistivity, or from %IACS at 20 °C."""
     value = m.get("resistivity")
     if value is not None:
-        return value.si, value.temperature or T20, value.source
+        return value.si, value.temperature or TWENTY_CELSIUS, value.source
     iacs = m.get("conductivity_iacs")
-    return dc.resistivity_from_iacs(iacs.si), iacs.temperature or T20, iacs.source
+    return dc.resistivity_from_iacs(iacs.si), iacs.temperature or TWENTY_CELSIUS, iacs.source
 
 
 def resistivity_range(m: Material) -> tuple[float, float]:
@@ -80,7 +78,7 @@ def linear_model(m: Material) -> LinearModel | None:
     if alpha is None:
         return None
     rho, t_rho, rho_source = reference_resistivity(m)
-    t_ref = alpha.temperature or T20
+    t_ref = alpha.temperature or TWENTY_CELSIUS
     rho_ref = rho / (1.0 + alpha.si * (t_rho - t_ref))
     sourced = alpha.valid_from is not None and alpha.valid_to is not None
     return LinearModel(
@@ -233,9 +231,8 @@ class MaterialView:
 
 def rho_at_20(record: dict) -> tuple[float, str]:
     """ρ at 20 °C by the model "auto" picks there; the stated value when no model reaches 20 °C."""
-    try:
-        found = resistivity_at(record, T20, "auto")
-    except CoreError:
+    found = resistivity_or_none(record, TWENTY_CELSIUS)
+    if found is None:
         return record["rho_ref"], "reference"
     return found["rho"], found["model"]
 

@@ -18,7 +18,8 @@ import math
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.derive import (T20, carrier_density, derive_material, linear_model, own_mean_free_path,
+from conductor_atlas.core.constants import TWENTY_CELSIUS
+from conductor_atlas.derive import (carrier_density, derive_material, linear_model, own_mean_free_path,
                                     reference_resistivity)
 from conductor_atlas.model import Material
 from conductor_atlas.schema import PROPERTIES
@@ -46,7 +47,7 @@ def linear_model_problems(m: Material, where: str) -> list[str]:
     if alpha is None:
         return []
     rho, t_rho, _ = reference_resistivity(m)
-    t_alpha = alpha.temperature or T20
+    t_alpha = alpha.temperature or TWENTY_CELSIUS
     factor = 1.0 + alpha.si * (t_rho - t_alpha)
     field = f"{where}: properties.temperature_coefficient"
     if not factor > 0 or not plausible("resistivity", rho / factor):

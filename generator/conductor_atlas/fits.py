@@ -10,7 +10,8 @@ from dataclasses import dataclass
 
 import numpy as np
 
-from conductor_atlas.core.temperature_models import GL_NODES, GL_WEIGHTS, bloch_gruneisen_resistivity
+from conductor_atlas.core.quadrature import GL_NODES, GL_WEIGHTS
+from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 
 _NODES = np.asarray(GL_NODES)
 _WEIGHTS = np.asarray(GL_WEIGHTS)

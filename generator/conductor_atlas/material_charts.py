@@ -10,11 +10,10 @@ from dataclasses import dataclass
 
 from conductor_atlas.charts import Series, line_chart
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.material_models import resistivity_at
+from conductor_atlas.core.constants import TWENTY_CELSIUS
+from conductor_atlas.core.material_models import resistivity_or_none
 from conductor_atlas.derive import MaterialView
 
-CELSIUS = 273.15
 
 
 @dataclass(frozen=True)
@@ -29,9 +28,8 @@ def model_curve(record: dict, t_lo: float, t_hi: float, samples: int = 60) -> tu
     xs, ys = [], []
     for i in range(samples + 1):
         t = t_lo + (t_hi - t_lo) * i / samples
-        try:
-            found = resistivity_at(record, t, "auto")
-        except CoreError:
+        found = resistivity_or_none(record, t)
+        if found is None:
             continue
         if found["warnings"]:
             xs.append(t)
@@ -75,9 +73,8 @@ def temperature_chart(view: MaterialView) -> Chart | None:
 
 def skin_depth_chart(view: MaterialView) -> Chart | None:
     record = view.calc
-    try:
-        found = resistivity_at(record, CELSIUS + 20.0, "auto")
-    except CoreError:
+    found = resistivity_or_none(record, TWENTY_CELSIUS)
+    if found is None:
         return None
     rho = found["rho"]
     fs = [50.0 * (1e11 / 50.0) ** (i / 80) for i in range(81)]

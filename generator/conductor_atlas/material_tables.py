@@ -10,16 +10,14 @@ from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import size_effect as film
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.core.geometry import IEC60228_SIZES_MM2, awg_area, awg_name, diameter_from_area
-from conductor_atlas.core.material_models import MODEL_LABELS, resistivity_at
+from conductor_atlas.core.material_models import MODEL_LABELS, resistivity_or_none
 from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_plain
 from conductor_atlas.model import Material
 from conductor_atlas.tables import Column, Row, Table, temperature_row_id
 
-CELSIUS = 273.15
-T20 = CELSIUS + 20.0
 CRYO_K = [4.2, 10.0, 20.0, 40.0, 77.0, 100.0, 150.0, 200.0]
 TABLE_C = [-100.0, -40.0, -20.0, 0.0, 20.0, 40.0, 60.0, 70.0, 80.0, 90.0, 105.0, 120.0, 150.0, 200.0, 250.0,
            300.0, 400.0, 500.0, 600.0, 700.0, 800.0, 1000.0]
@@ -38,11 +36,8 @@ MS_REFLECTION = 0.3
 
 def quiet_rho(record: dict, t: float) -> tuple[float, str] | None:
     """ρ by the auto model when that model covers t without any warning; else None."""
-    try:
-        found = resistivity_at(record, t, "auto")
-    except CoreError:
-        return None
-    if found["warnings"]:
+    found = resistivity_or_none(record, t)
+    if found is None or found["warnings"]:
         return None
     return found["rho"], found["model"]
 
@@ -66,8 +61,8 @@ def size_row_id(mm2: float) -> str:
 
 
 def resistivity_temperature(m: Material, record: dict) -> Table | None:
-    temps = sorted({round(t, 6) for t in CRYO_K + [CELSIUS + c for c in TABLE_C]})
-    rho20 = quiet_rho(record, T20)
+    temps = sorted({round(t, 6) for t in CRYO_K + [ZERO_CELSIUS + c for c in TABLE_C]})
+    rho20 = quiet_rho(record, TWENTY_CELSIUS)
     rows, models = [], set()
     for t in temps:
         found = quiet_rho(record, t)
@@ -76,19 +71,19 @@ def resistivity_temperature(m: Material, record: dict) -> Table | None:
         rho, model = found
         models.add(model)
         ratio = rho / rho20[0] if rho20 else float("nan")
-        values = (t - CELSIUS, t, rho * 1e8, 1e-6 / rho, dc.iacs_percent(rho), ratio, MODEL_LABELS[model])
-        texts = (format_fixed(t - CELSIUS, 1 if abs(t - CELSIUS - round(t - CELSIUS)) > 1e-9 else 0),
+        values = (t - ZERO_CELSIUS, t, rho * 1e8, 1e-6 / rho, dc.iacs_percent(rho), ratio, MODEL_LABELS[model])
+        texts = (format_fixed(t - ZERO_CELSIUS, 1 if abs(t - ZERO_CELSIUS - round(t - ZERO_CELSIUS)) > 1e-9 else 0),
                  format_fixed(t, 2), format_number(rho * 1e8, 5, True), format_number(1e-6 / rho, 4, True),
                  format_number(dc.iacs_percent(rho), 4, True), format_number(ratio, 4, True) if rho20 else "—",
                  model)
-        rows.append(Row(temperature_row_id(t - CELSIUS), values, texts))
+        rows.append(Row(temperature_row_id(t - ZERO_CELSIUS), values, texts))
     if not rows:
         return None
     pieces = []
     if "linear" in models:
         pieces.append(f"linear: ρ(T) = ρ_ref·[1 + α·(T − T_ref)] with ρ_ref = {format_number(record['rho_ref'] * 1e8, 5)} µΩ·cm, "
-                      f"α = {format_number(record['alpha'], 4)} /K, T_ref = {format_fixed(record['t_ref'] - CELSIUS, 0)} °C, "
-                      f"for {format_fixed(record['valid_from'] - CELSIUS, 0)} °C to {format_fixed(record['valid_to'] - CELSIUS, 0)} °C")
+                      f"α = {format_number(record['alpha'], 4)} /K, T_ref = {format_fixed(record['t_ref'] - ZERO_CELSIUS, 0)} °C, "
+                      f"for {format_fixed(record['valid_from'] - ZERO_CELSIUS, 0)} °C to {format_fixed(record['valid_to'] - ZERO_CELSIUS, 0)} °C")
     if "table" in models:
         pieces.append("table: linear interpolation between the sourced points")
     if "bloch-gruneisen" in models:
@@ -139,7 +134,7 @@ def sourced_points(m: Material, record: dict, fit) -> Table | None:
 
 
 def skin_depth_table(m: Material, record: dict) -> Table | None:
-    found = quiet_rho(record, T20)
+    found = quiet_rho(record, TWENTY_CELSIUS)
     if found is None:
         return None
     rho = found[0]
@@ -166,7 +161,7 @@ def skin_depth_table(m: Material, record: dict) -> Table | None:
 
 
 def ac_ratio_table(m: Material, record: dict) -> Table | None:
-    found = quiet_rho(record, T20)
+    found = quiet_rho(record, TWENTY_CELSIUS)
     if found is None:
         return None
     rho = found[0]
@@ -190,12 +185,12 @@ def ac_ratio_table(m: Material, record: dict) -> Table | None:
 
 
 def resistance_tables(m: Material, record: dict) -> list[Table]:
-    temps = [CELSIUS + c for c in OPERATING_C]
+    temps = [ZERO_CELSIUS + c for c in OPERATING_C]
     rhos = [quiet_rho(record, t) for t in temps]
     usable = [(t, r[0]) for t, r in zip(temps, rhos) if r is not None]
     if not usable:
         return []
-    columns_tail = tuple(Column(f"r_{format_fixed(t - CELSIUS, 0)}c", f"R′ at {format_fixed(t - CELSIUS, 0)} °C", "Ω/km")
+    columns_tail = tuple(Column(f"r_{format_fixed(t - ZERO_CELSIUS, 0)}c", f"R′ at {format_fixed(t - ZERO_CELSIUS, 0)} °C", "Ω/km")
                          for t, _ in usable)
     caveat = ("Nominal areas. IEC 60228 specifies a maximum resistance per size and class rather than an area, "
               "and stranded, tinned or compacted conductors differ; for a real cable use its datasheet")
@@ -228,7 +223,7 @@ def carrier_table(m: Material, record: dict) -> Table | None:
         return None
     rows = []
     vf = fe.fermi_velocity(n)
-    for t in [77.0, 200.0, CELSIUS, T20, CELSIUS + 100.0]:
+    for t in [77.0, 200.0, ZERO_CELSIUS, TWENTY_CELSIUS, ZERO_CELSIUS + 100.0]:
         found = quiet_rho(record, t)
         if found is None:
             continue
@@ -237,7 +232,7 @@ def carrier_table(m: Material, record: dict) -> Table | None:
         ell = fe.mean_free_path(rho, n)
         mu = fe.mobility(tau)
         kappa = fe.wiedemann_franz_thermal_conductivity(rho, t)
-        rows.append(Row(temperature_row_id(t - CELSIUS), (t, rho * 1e8, tau * 1e15, ell * 1e9, mu * 1e4, kappa),
+        rows.append(Row(temperature_row_id(t - ZERO_CELSIUS), (t, rho * 1e8, tau * 1e15, ell * 1e9, mu * 1e4, kappa),
                         (format_fixed(t, 2), format_number(rho * 1e8, 4, True), format_number(tau * 1e15, 3, True),
                          format_number(ell * 1e9, 3, True), format_number(mu * 1e4, 3, True), format_number(kappa, 3, True))))
     if not rows:
@@ -260,7 +255,7 @@ def carrier_table(m: Material, record: dict) -> Table | None:
 
 def thin_film_table(m: Material, record: dict) -> Table | None:
     ell = record["mean_free_path"]
-    found = quiet_rho(record, T20)
+    found = quiet_rho(record, TWENTY_CELSIUS)
     if not ell > 0 or found is None:
         return None
     rho = found[0]

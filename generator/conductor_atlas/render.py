@@ -19,8 +19,9 @@ from markupsafe import Markup
 
 from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows, compare_table
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
+from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.lookup import TRADE_WORDS
-from conductor_atlas.derive import CELSIUS, MaterialView, calc_catalogue
+from conductor_atlas.derive import MaterialView, calc_catalogue
 from conductor_atlas.material_charts import material_charts
 from conductor_atlas.core.numfmt import format_number, format_fixed
 from conductor_atlas.model import DataSet, Value
@@ -102,7 +103,7 @@ def markdown_safe(text: str) -> str:
 def condition_text(t: float | None) -> str:
     if t is None:
         return ""
-    return f"at {format_fixed(t - CELSIUS, 0)} °C" if abs((t - CELSIUS) - round(t - CELSIUS)) < 1e-9 \
+    return f"at {format_fixed(t - ZERO_CELSIUS, 0)} °C" if abs((t - ZERO_CELSIUS) - round(t - ZERO_CELSIUS)) < 1e-9 \
         else f"at {format_fixed(t, 2)} K"
 
 

@@ -13,14 +13,8 @@ import scipy.constants as sc
 
 from conductor_atlas.core import carriers as c
 from conductor_atlas.core.errors import CoreError
+from tests.support.approx import approx
 
-
-def approx(expected, rel=None, abs=None):
-    """pytest.approx without its default abs=1e-12, which would swallow SI quantities
-    such as 1e-8 ohm*m or 1e-31 kg and make a relative check vacuous."""
-    if rel is None:
-        return pytest.approx(expected, abs=0.0 if abs is None else abs)
-    return pytest.approx(expected, rel=rel, abs=0.0 if abs is None else abs)
 
 A0 = sc.physical_constants["Bohr radius"][0]
 

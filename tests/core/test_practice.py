@@ -12,13 +12,7 @@ import pytest
 
 from conductor_atlas.core import practice as pr
 from conductor_atlas.core.errors import CoreError
-
-
-def approx(expected, rel=None, abs=None):
-    """pytest.approx without its default abs=1e-12."""
-    if rel is None:
-        return pytest.approx(expected, abs=0.0 if abs is None else abs)
-    return pytest.approx(expected, rel=rel, abs=0.0 if abs is None else abs)
+from tests.support.approx import approx
 
 
 def test_resistance_method_worked_example():

@@ -13,13 +13,7 @@ from scipy import integrate
 
 from conductor_atlas.core import size_effect as sz
 from conductor_atlas.core.errors import CoreError
-
-
-def approx(expected, rel=None, abs=None):
-    """pytest.approx without its default abs=1e-12."""
-    if rel is None:
-        return pytest.approx(expected, abs=0.0 if abs is None else abs)
-    return pytest.approx(expected, rel=rel, abs=0.0 if abs is None else abs)
+from tests.support.approx import approx
 
 
 def _fs_reference(kappa, p):

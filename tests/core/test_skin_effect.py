@@ -21,13 +21,7 @@ from scipy import special
 
 from conductor_atlas.core import skin_effect as se
 from conductor_atlas.core.errors import CoreError
-
-
-def approx(expected, rel=None, abs=None):
-    """pytest.approx without its default abs=1e-12, which would swallow SI quantities."""
-    if rel is None:
-        return pytest.approx(expected, abs=0.0 if abs is None else abs)
-    return pytest.approx(expected, rel=rel, abs=0.0 if abs is None else abs)
+from tests.support.approx import approx
 
 
 ROT = np.exp(3j * np.pi / 4)

@@ -15,14 +15,7 @@ from scipy import integrate, special
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import temperature_models as tm
-
-
-def approx(expected, rel=None, abs=None):
-    """pytest.approx without its default abs=1e-12, which would swallow SI quantities
-    such as 1e-8 ohm*m or 1e-31 kg and make a relative check vacuous."""
-    if rel is None:
-        return pytest.approx(expected, abs=0.0 if abs is None else abs)
-    return pytest.approx(expected, rel=rel, abs=0.0 if abs is None else abs)
+from tests.support.approx import approx
 
 
 def _bg_integrand(x, n):
@@ -38,21 +31,6 @@ def _quad_reference(n, z):
         total += integrate.quad(_bg_integrand, a, b, args=(n,), epsabs=0.0, epsrel=2e-14,
                                 limit=200)[0]
     return total
-
-
-# ---------------------------------------------------------------- Gauss-Legendre
-
-def test_gauss_legendre_matches_numpy():
-    # numpy.polynomial.legendre.leggauss (Golub-Welsch); both are ~1e-15 accurate, so
-    # 1e-14 absolute on nodes and weights (weights <= 0.16 for n = 20).
-    x, w = np.polynomial.legendre.leggauss(20)
-    assert np.allclose(tm.GL_NODES, x, rtol=0, atol=1e-14)
-    assert np.allclose(tm.GL_WEIGHTS, w, rtol=0, atol=1e-14)
-
-
-def test_gauss_legendre_order_checked():
-    with pytest.raises(CoreError, match="between 2 and 100"):
-        tm.gauss_legendre(1)
 
 
 # ---------------------------------------------------------------- Bloch-Grueneisen

@@ -22,6 +22,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 
 from conductor_atlas.build import DATA_DIR, data_folders
+from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.derive import linear_model
 from conductor_atlas.load import convert, load_dataset
 from conductor_atlas.model import DataSet, Material
@@ -29,7 +30,7 @@ from tests.support import element_datasets
 
 FIXTURE = Path(__file__).resolve().parents[1] / "fixtures" / "published_tables.toml"
 RECORD = DATA_DIR / "verification.toml"
-T0, T20 = 273.15, 293.15
+T0, T20 = ZERO_CELSIUS, TWENTY_CELSIUS
 
 # relative tolerance per property, and why it is that wide
 TOLERANCES = {

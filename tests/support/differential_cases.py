@@ -353,6 +353,8 @@ def model_cases():
     for t in (4.2, 20.0, 77.0, 150.0, 293.15, 600.0, 1200.0):
         cases.append((tm, "bloch_gruneisen_resistivity", [t, 1e-11, 5.5e-8, 330.0]))
         cases.append((tm, "interpolate_table", [t, [20.0, 100.0, 300.0, 600.0], [1e-11, 3.5e-9, 1.7e-8, 3.9e-8]]))
+    for n in (2, 10, 20, 100, 1):
+        cases.append(("conductor_atlas.core.quadrature", "gauss_legendre", [n]))
     for t in (73.15, 173.15, 273.15, 373.15, 1123.15, 50.0):
         cases.append((tm, "callendar_van_dusen_resistance", [t, 100.0, 3.9083e-3, -5.775e-7, -4.183e-12]))
     for r in (18.5201, 60.0, 100.0, 138.5055, 390.0, -1.0):
@@ -362,8 +364,16 @@ def model_cases():
     for f in (50.0, 1e3, 1e6, 1e9, 0.0, -5.0):
         cases.append((sk, "skin_depth", [1.7241e-8, f, 1.0]))
         cases.append((sk, "rectangular_bar_resistance_ratio", [0.04, 0.005, 1.7241e-8, f, 1.0]))
-    cases.append(("conductor_atlas.core.outcome", "kelvin_text", [363.15]))
-    cases.append(("conductor_atlas.core.calc_common", "read_temperature",
+    for t in (363.15, 4.2, 0.0, 293.15, 1e4):
+        cases.append(("conductor_atlas.core.numfmt", "temperature_text", [t]))
+    for inputs, field in (({"length": " 1,5 m "}, "length"), ({"length": None}, "length"), ({}, "length"),
+                          ({"size": "2.5\u00a0mm²"}, "size")):
+        cases.append(("conductor_atlas.core.calc_inputs", "field_text", [inputs, field]))
+    for errors in ({}, {"length": "must be greater than zero"}):
+        cases.append(("conductor_atlas.core.outcome", "has_errors", [{"errors": errors}]))
+    for how in ("rho-lambda", "record"):
+        cases.append(("conductor_atlas.core.calc_common", "mean_free_path_origin", [{"mean_free_path_how": how}]))
+    cases.append(("conductor_atlas.core.calc_inputs", "read_temperature",
                   [{"errors": {}, "warnings": []}, {"temperature": "90 °C"}, "temperature"]))
     return cases
 

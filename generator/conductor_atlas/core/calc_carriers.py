@@ -3,11 +3,10 @@
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import carriers as fe
 from conductor_atlas.core.constants import ELECTRON_VOLT
-from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          kelvin_text, new_outcome, read_quantity)
+from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
+from conductor_atlas.core.outcome import add_error, add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
 from conductor_atlas.core.calc_common import material_at_temperature
-from conductor_atlas.core.calc_resistance import read_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "carriers"
@@ -106,7 +105,7 @@ def calculate(inputs, catalogue):
     except CoreError as problem:
         add_error(outcome, "temperature", problem.message)
         return outcome
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "electron_density", n, "1/m³", format_number(n, 4) + " m⁻³")
     add_result(outcome, "relaxation_time", tau, "s", format_si(tau, "s", 4))
@@ -128,12 +127,12 @@ def calculate(inputs, catalogue):
     if m["mean_free_path"] > 0:
         at = ""
         if m["mean_free_path_t"] > 0:
-            at = " at " + kelvin_text(m["mean_free_path_t"])
+            at = " at " + temperature_text(m["mean_free_path_t"])
         add_warning(outcome, "the mean free path on record for " + m["name"] + " is " + format_si(m["mean_free_path"],
                     "m", 3) + at + "; the free-electron value above assumes a spherical Fermi surface")
     if t < 150.0:
         add_warning(outcome, "Wiedemann–Franz holds near and above the Debye temperature and at the lowest "
-                             "temperatures; in between (here " + kelvin_text(t) + ") inelastic scattering makes the "
+                             "temperatures; in between (here " + temperature_text(t) + ") inelastic scattering makes the "
                              "measured thermal conductivity of pure metals differ from L0 T / ρ")
     check_finite_results(outcome, "temperature")
     return outcome

@@ -1,33 +1,11 @@
-"""Steps shared by several calculators: pick the material, read temperature and model, get ρ."""
+"""Steps shared by several calculators: the opening (material, temperature, ρ by the model asked) and
+the mean free path on record."""
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.lookup import find_material, trade_word_note
-from conductor_atlas.core.material_models import resistivity_at
+from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
 from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import (add_error, add_material_used, add_sources, add_warning, field_text,
-                                          has_errors, read_quantity)
-
-
-def read_material(outcome, inputs, catalogue, field):
-    """The material named in ``field`` (or None, with errors[field] set), named in outcome["used"]."""
-    text = field_text(inputs, field)
-    try:
-        m = find_material(catalogue, text, field)
-    except CoreError as problem:
-        add_error(outcome, field, problem.message)
-        return None
-    add_sources(outcome, m["sources"])
-    add_material_used(outcome, m, trade_word_note(catalogue, text))
-    return m
-
-
-def read_temperature(outcome, inputs, field):
-    """Conductor temperature [K]; 20 °C when the field is empty."""
-    t = read_quantity(outcome, inputs, field, "temperature", False, "20 °C")
-    if t is not None and not (t > 0):
-        add_error(outcome, field, "must be above absolute zero (−273.15 °C)")
-        return None
-    return t
+from conductor_atlas.core.outcome import add_error, add_warning, has_errors
+from conductor_atlas.core.calc_inputs import field_text, read_material, read_temperature
 
 
 def material_resistivity(outcome, m, t, inputs):
@@ -76,14 +54,6 @@ def resistivity_when_ready(outcome, m, t, inputs):
     return material_resistivity(outcome, m, t, inputs)
 
 
-def quiet_resistivity(m, t):
-    """ρ of m at t [K] by "auto", or -1.0 when no model reaches t (no messages)."""
-    try:
-        return resistivity_at(m, t, "auto")["rho"]
-    except CoreError:
-        return -1.0
-
-
 def recorded_mean_free_path_temperature(m):
     """The temperature [K] the record's mean free path holds at (the reference temperature if unsaid)."""
     if m["mean_free_path_t"] > 0:
@@ -112,9 +82,9 @@ def recorded_mean_free_path(m, rho, t):
     t_mfp = recorded_mean_free_path_temperature(m)
     if abs(t - t_mfp) <= 0.5:
         return [m["mean_free_path"], "as recorded"]
-    rho_then = quiet_resistivity(m, t_mfp)
-    if rho_then > 0:
-        return [m["mean_free_path"] * rho_then / rho, "scaled"]
+    then = resistivity_or_none(m, t_mfp)
+    if then is not None and then["rho"] > 0:
+        return [m["mean_free_path"] * then["rho"] / rho, "scaled"]
     return [m["mean_free_path"], "unscaled"]
 
 

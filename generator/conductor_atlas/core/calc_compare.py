@@ -2,12 +2,11 @@
 
 from conductor_atlas.core import practice
 from conductor_atlas.core.geometry import awg_area, awg_name, diameter_from_area, next_awg, next_metric_size
-from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import (add_result, add_warning, check_finite_results, field_text, kelvin_text,
-                                          new_outcome)
-from conductor_atlas.core.calc_common import (material_resistivity, read_material, read_temperature,
-                                              resistivity_when_ready)
-from conductor_atlas.core.calc_resistance import mass_text, read_size
+from conductor_atlas.core.numfmt import format_number, temperature_text
+from conductor_atlas.core.outcome import add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.calc_inputs import field_text, read_material, read_size, read_temperature
+from conductor_atlas.core.calc_common import material_resistivity, resistivity_when_ready
+from conductor_atlas.core.calc_resistance import mass_text
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "compare"
@@ -68,7 +67,7 @@ def calculate(inputs, catalogue):
     if m1["id"] == m2["id"]:
         add_warning(outcome, "both fields name the same material, " + m1["name"])
     area_ratio = practice.equal_resistance_area_ratio(rho1, rho2)
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho1, "Ω·m", format_number(rho1 * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "resistivity_other", rho2, "Ω·m", format_number(rho2 * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "conductivity_ratio", rho1 / rho2, "", format_number(rho1 / rho2, 4) + " ("

@@ -3,10 +3,10 @@
 from conductor_atlas.core import conformance as cf
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
-from conductor_atlas.core.numfmt import format_fixed, format_number, format_si
+from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
-                                          field_text, has_errors, kelvin_text, new_outcome, note_point_reading, read_quantity,
-                                          require_positive)
+                                          has_errors, new_outcome)
+from conductor_atlas.core.calc_inputs import field_text, note_point_reading, read_quantity, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature, material_resistivity
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
@@ -248,7 +248,7 @@ def judge(outcome, inputs, catalogue, m, r_t, t, rho_t, sample, size, klass):
         except CoreError:
             add_warning(outcome, "IEC 60228 Annex B's factor does not reach this temperature")
     add_result(outcome, "resistivity_20", rho_20, "Ω·m", format_number(rho_20 * 1e8, 5) + " µΩ·cm")
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     warn_about_sample(outcome, m, size, sample, t, klass)
     check_finite_results(outcome, "resistance")
 

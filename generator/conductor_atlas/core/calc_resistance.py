@@ -3,11 +3,9 @@
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.geometry import parse_size
-from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          kelvin_text, new_outcome, note_point_reading, read_quantity,
-                                          require_positive)
+from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
+from conductor_atlas.core.outcome import add_error, add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
@@ -42,17 +40,6 @@ CAUSES = {"area": "size", "voltage_drop": "current", "power_loss": "current", "c
           "power_loss_ac": "current"}
 CAUTION = ("A physics estimate, not an ampacity rating. Size real installations to the local electrical code and "
            "licensed practice.")
-
-
-def read_size(outcome, inputs, field):
-    text = field_text(inputs, field)
-    try:
-        size = parse_size(text, field)
-    except CoreError as problem:
-        add_error(outcome, field, problem.message)
-        return None
-    note_point_reading(outcome, text, field)
-    return size
 
 
 def ac_ratio(outcome, size, rho, f, mu_r):
@@ -100,7 +87,7 @@ def calculate(inputs, catalogue):
     rho = opening[2]
     area = size["area"]
     r = dc.resistance(rho, length_m, area)
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "area", area, "m²", format_number(area * 1e6, 4) + " mm²")
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "conductivity", 1.0 / rho, "S/m", format_number(1e-6 / rho, 4) + " MS/m")

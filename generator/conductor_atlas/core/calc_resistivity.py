@@ -1,8 +1,9 @@
 """Calculator "resistivity": ρ, σ, %IACS and the local temperature coefficient at a temperature."""
 
 from conductor_atlas.core import resistance as dc
-from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import add_result, check_finite_results, field_text, kelvin_text, new_outcome
+from conductor_atlas.core.numfmt import format_number, temperature_text
+from conductor_atlas.core.outcome import add_result, check_finite_results, new_outcome
+from conductor_atlas.core.calc_inputs import field_text
 from conductor_atlas.core.calc_common import material_at_temperature
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO, local_temperature_coefficient
 
@@ -37,7 +38,7 @@ def calculate(inputs, catalogue):
     m = opening[0]
     t = opening[1]
     rho = opening[2]
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "conductivity", 1.0 / rho, "S/m", format_number(1e-6 / rho, 4) + " MS/m")
     add_result(outcome, "iacs_percent", dc.iacs_percent(rho), "%", format_number(dc.iacs_percent(rho), 4) + " %IACS")

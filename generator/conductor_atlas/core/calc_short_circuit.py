@@ -6,11 +6,11 @@ from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import next_metric_size, parse_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at
-from conductor_atlas.core.numfmt import format_fixed, format_number, format_si
+from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
-                                          field_text, has_errors, kelvin_text, new_outcome, note_point_reading, read_quantity,
-                                          require_positive)
-from conductor_atlas.core.calc_common import read_material
+                                          has_errors, new_outcome)
+from conductor_atlas.core.calc_inputs import (field_text, note_point_reading, read_material, read_quantity,
+                                              require_positive)
 from conductor_atlas.core.calc_temperature_rise import is_copper, is_ec_aluminium
 
 NAME = "short-circuit"
@@ -241,10 +241,10 @@ def compute(outcome, m, model, current, duration, size, t_i, t_f, cv, cap, iec):
             outcome["results"] = {}
             return -1.0
         worst = theta
-        add_result(outcome, "final_temperature", theta, "K", kelvin_text(theta))
+        add_result(outcome, "final_temperature", theta, "K", temperature_text(theta))
         if iec is not None:
             theta_iec = sc.iec60949_final_temperature(current, duration, size["area"], iec[0], iec[1], t_i)
-            add_result(outcome, "final_temperature_iec", theta_iec, "K", kelvin_text(theta_iec) + ", K = "
+            add_result(outcome, "final_temperature_iec", theta_iec, "K", temperature_text(theta_iec) + ", K = "
                        + format_number(iec[0] / 1e6, 3) + " A·s^½/mm², β = " + format_number(iec[1], 4) + " ("
                        + iec[2] + "); the rise by the heat balance is "
                        + difference_text(theta - t_i, theta_iec - t_i) + " from it")

@@ -6,9 +6,10 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
 from conductor_atlas.core.geometry import awg_area, awg_name, next_awg, next_metric_size
 from conductor_atlas.core.lookup import fold
-from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
+from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
+from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, has_errors,
+                                          new_outcome)
+from conductor_atlas.core.calc_inputs import field_text, read_quantity, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature
 from conductor_atlas.core.units import normalise_text, parse_number, parse_quantity
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
@@ -149,7 +150,7 @@ def calculate(inputs, catalogue):
     if not (a_min > 0) or not (a_min - a_min == 0):
         add_error(outcome, "length", "the inputs are too extreme to compute a finite cross-section; check the values")
         return outcome
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     drop_text = format_si(drop, "V", 4)
     if supply is not None:

@@ -4,11 +4,12 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.numfmt import format_number, format_si
+from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
-                                          field_text, kelvin_text, new_outcome, read_quantity)
+                                          new_outcome)
+from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
 from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
-from conductor_atlas.core.calc_resistance import ac_ratio, read_size
+from conductor_atlas.core.calc_resistance import ac_ratio
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "skin-effect"
@@ -80,7 +81,7 @@ def calculate(inputs, catalogue):
     except CoreError as problem:
         add_error(outcome, "frequency", problem.message)
         return outcome
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
     add_result(outcome, "surface_resistance", rs, "Ω", format_si(rs, "Ω", 4) + " per square")

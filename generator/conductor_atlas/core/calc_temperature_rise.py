@@ -4,10 +4,10 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
 from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.lookup import fold
-from conductor_atlas.core.numfmt import format_fixed, format_number
-from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          has_errors, kelvin_text, new_outcome, read_quantity, require_positive)
-from conductor_atlas.core.calc_common import read_material
+from conductor_atlas.core.numfmt import format_fixed, format_number, temperature_text
+from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, has_errors,
+                                          new_outcome)
+from conductor_atlas.core.calc_inputs import field_text, read_material, read_quantity, require_positive
 from conductor_atlas.core.units import normalise_text, normalise_unit, parse_number, parse_quantity
 
 NAME = "temperature-rise"
@@ -172,7 +172,7 @@ def calculate(inputs, catalogue):
         base = coolant
     rise = t2 - base
     outcome["model"] = "resistance method, t2 = (R2/R1)(k + t1) − k"
-    add_result(outcome, "temperature_hot", t2, "K", kelvin_text(t2))
+    add_result(outcome, "temperature_hot", t2, "K", temperature_text(t2))
     if coolant is not None:
         add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the coolant ("
                    + format_fixed(coolant - ZERO_CELSIUS, 1) + " °C)")

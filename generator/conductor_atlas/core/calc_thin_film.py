@@ -3,9 +3,9 @@
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import size_effect as sz
-from conductor_atlas.core.numfmt import format_number, format_si
-from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, field_text,
-                                          kelvin_text, new_outcome, read_quantity, require_positive)
+from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
+from conductor_atlas.core.outcome import add_error, add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.calc_inputs import field_text, read_quantity, require_positive
 from conductor_atlas.core.calc_common import (material_at_temperature, mean_free_path_origin, recorded_mean_free_path,
                                               recorded_mean_free_path_temperature)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
@@ -72,7 +72,7 @@ def bulk_mean_free_path(outcome, inputs, m, rho, t):
         return found[0]
     if found[1] != "none":
         which = ("the mean free path " + mean_free_path_origin(m) + " (" + format_si(m["mean_free_path"], "m", 3)
-                 + " at " + kelvin_text(recorded_mean_free_path_temperature(m)) + ")")
+                 + " at " + temperature_text(recorded_mean_free_path_temperature(m)) + ")")
         if found[1] == "scaled":
             add_warning(outcome, which + " is scaled to the film temperature with ρ·ℓ held constant")
         else:
@@ -165,7 +165,7 @@ def calculate(inputs, catalogue):
         return outcome
     range_warnings(outcome, kappa, alpha, reflection is not None)
     rho_f = rho * ratio
-    add_result(outcome, "temperature", t, "K", kelvin_text(t))
+    add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 4))
     add_result(outcome, "thickness_ratio", kappa, "", format_number(kappa, 4))

@@ -20,16 +20,11 @@ import math
 
 from conductor_atlas.core.constants import (AVOGADRO, BOLTZMANN, ELECTRON_MASS,
                                             ELEMENTARY_CHARGE, EPSILON_0, HBAR)
-from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.errors import check_positive
 
 # Sommerfeld value of the Lorenz number, L0 = (pi^2 / 3) (k_B / e)^2 = 2.443e-8 [W*ohm/K^2]
 # (Ashcroft & Mermin eq. 2.93; Kittel ISSP eq. 6.55).
 LORENZ_SOMMERFELD = math.pi * math.pi / 3.0 * (BOLTZMANN / ELEMENTARY_CHARGE) ** 2
-
-
-def _positive(x, field, what):
-    if not (x - x == 0) or x <= 0.0:
-        raise CoreError(what + " must be a finite number above 0", field)
 
 
 def electron_density(density, molar_mass, valence):
@@ -55,9 +50,9 @@ def electron_density(density, molar_mass, valence):
     ----------
     1. Ashcroft, N. W., Mermin, N. D., Solid State Physics, 1976, eq. 1.1 and Table 1.1.
     """
-    _positive(density, "density", "density")
-    _positive(molar_mass, "molar_mass", "molar mass")
-    _positive(valence, "valence", "valence")
+    check_positive(density, "density", "density")
+    check_positive(molar_mass, "molar_mass", "molar mass")
+    check_positive(valence, "valence", "valence")
     return valence * density * AVOGADRO / molar_mass
 
 
@@ -80,7 +75,7 @@ def wigner_seitz_radius(n):
     ----------
     1. Ashcroft & Mermin 1976, eq. 1.2.
     """
-    _positive(n, "n", "electron density")
+    check_positive(n, "n", "electron density")
     return (3.0 / (4.0 * math.pi * n)) ** (1.0 / 3.0)
 
 
@@ -107,9 +102,9 @@ def relaxation_time(rho, n, m=ELECTRON_MASS):
     ----------
     1. Ashcroft & Mermin 1976, eq. 1.8 and Table 1.3.
     """
-    _positive(rho, "rho", "resistivity")
-    _positive(n, "n", "electron density")
-    _positive(m, "m", "mass")
+    check_positive(rho, "rho", "resistivity")
+    check_positive(n, "n", "electron density")
+    check_positive(m, "m", "mass")
     return m / (n * ELEMENTARY_CHARGE * ELEMENTARY_CHARGE * rho)
 
 
@@ -125,7 +120,7 @@ def fermi_wavenumber(n):
     ----------
     1. Ashcroft & Mermin 1976, eq. 2.21 and Table 2.1.
     """
-    _positive(n, "n", "electron density")
+    check_positive(n, "n", "electron density")
     return (3.0 * math.pi * math.pi * n) ** (1.0 / 3.0)
 
 
@@ -143,7 +138,7 @@ def fermi_energy(n, m=ELECTRON_MASS):
     ----------
     1. Ashcroft & Mermin 1976, eq. 2.27 and Table 2.1.
     """
-    _positive(m, "m", "mass")
+    check_positive(m, "m", "mass")
     k = fermi_wavenumber(n)
     return HBAR * HBAR * k * k / (2.0 * m)
 
@@ -179,7 +174,7 @@ def fermi_velocity(n, m=ELECTRON_MASS):
     ----------
     1. Ashcroft & Mermin 1976, eq. 2.24 and Table 2.1.
     """
-    _positive(m, "m", "mass")
+    check_positive(m, "m", "mass")
     return HBAR * fermi_wavenumber(n) / m
 
 
@@ -257,8 +252,8 @@ def mobility(tau, m=ELECTRON_MASS):
     ----------
     1. Ashcroft & Mermin 1976, ch. 1 (Hall effect), mu = e tau / m.
     """
-    _positive(tau, "tau", "relaxation time")
-    _positive(m, "m", "mass")
+    check_positive(tau, "tau", "relaxation time")
+    check_positive(m, "m", "mass")
     return ELEMENTARY_CHARGE * tau / m
 
 
@@ -283,7 +278,7 @@ def drift_velocity(J, n):
     ----------
     1. Ashcroft & Mermin 1976, eq. 1.4.
     """
-    _positive(n, "n", "electron density")
+    check_positive(n, "n", "electron density")
     return J / (n * ELEMENTARY_CHARGE)
 
 
@@ -312,8 +307,8 @@ def plasma_frequency(n, m=ELECTRON_MASS):
     ----------
     1. Ashcroft & Mermin 1976, eq. 1.38 and 1.40.
     """
-    _positive(n, "n", "electron density")
-    _positive(m, "m", "mass")
+    check_positive(n, "n", "electron density")
+    check_positive(m, "m", "mass")
     return math.sqrt(n * ELEMENTARY_CHARGE * ELEMENTARY_CHARGE / (EPSILON_0 * m))
 
 
@@ -365,6 +360,6 @@ def wiedemann_franz_thermal_conductivity(rho, T, L=LORENZ_SOMMERFELD):
     1. Ashcroft & Mermin 1976, eq. 2.93 and Table 2.2.
     2. Kittel, C., Introduction to Solid State Physics, 8th ed., 2005, eq. 6.55.
     """
-    _positive(rho, "rho", "resistivity")
-    _positive(T, "T", "temperature")
+    check_positive(rho, "rho", "resistivity")
+    check_positive(T, "T", "temperature")
     return L * T / rho

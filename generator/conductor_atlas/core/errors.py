@@ -1,4 +1,5 @@
-"""The core's one exception type, readable from both CPython and the transpiled JS."""
+"""The core's one exception type, readable from both CPython and the transpiled JS, and the one check
+that raises it for a quantity that must be positive."""
 
 
 class CoreError(Exception):
@@ -17,3 +18,9 @@ class CoreError(Exception):
 
     def toString(self):  # noqa: N802 - JS reads exceptions through toString()
         return "CoreError: " + self.message
+
+
+def check_positive(x, field, what):
+    """Raise CoreError(field) unless x is a finite number above 0 (NaN and ±∞ are refused too)."""
+    if not (x - x == 0) or x <= 0.0:
+        raise CoreError(what + " must be a finite number above 0", field)

@@ -15,7 +15,7 @@ range; else the nearest model with a warning. Never silent outside a model's ran
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import temperature_models as tm
-from conductor_atlas.core.outcome import kelvin_text
+from conductor_atlas.core.numfmt import temperature_text
 
 MODEL_LABELS = {
     "linear": "linear temperature-coefficient model",
@@ -103,6 +103,16 @@ def choose_model(m, t):
     return "reference"
 
 
+def resistivity_or_none(m, t):
+    """The "auto" model's answer at t [K] (resistivity_at's record: "rho" [Ω·m], "model", "label",
+    "warnings"), or None where no model reaches t: for tables, charts and estimates that leave a gap
+    or fall back instead of showing a message."""
+    try:
+        return resistivity_at(m, t, "auto")
+    except CoreError:
+        return None
+
+
 def resistivity_at(m, t, model):
     """Resistivity of material record ``m`` at temperature t [K] with ``model`` (or "auto").
 
@@ -119,8 +129,9 @@ def resistivity_at(m, t, model):
         if not has_linear(m):
             raise CoreError("no temperature coefficient is on record for " + m["name"], "model")
         if not in_linear_span(m, t):
-            warnings.append("temperature " + kelvin_text(t) + " is outside the span where the linear model holds for "
-                            + m["name"] + " (" + kelvin_text(m["valid_from"]) + " to " + kelvin_text(m["valid_to"]) + ")")
+            warnings.append("temperature " + temperature_text(t) + " is outside the span where the linear model holds for "
+                            + m["name"] + " (" + temperature_text(m["valid_from"]) + " to "
+                            + temperature_text(m["valid_to"]) + ")")
         rho = dc.resistivity_linear(t, m["rho_ref"], m["alpha"], m["t_ref"])
     elif key == "table":
         if not has_table(m):
@@ -135,9 +146,9 @@ def resistivity_at(m, t, model):
             raise CoreError("no Bloch–Grüneisen fit is available for " + m["name"], "model")
         rho = tm.bloch_gruneisen_resistivity(t, m["bg_rho0"], m["bg_a"], m["bg_theta"])
         if not in_bg_range(m, t):
-            warnings.append("temperature " + kelvin_text(t) + " is outside the range the Bloch–Grüneisen fit of "
-                            + m["name"] + " was fitted over (" + kelvin_text(m["bg_t_min"]) + " to "
-                            + kelvin_text(m["bg_t_max"]) + ")")
+            warnings.append("temperature " + temperature_text(t) + " is outside the range the Bloch–Grüneisen fit of "
+                            + m["name"] + " was fitted over (" + temperature_text(m["bg_t_min"]) + " to "
+                            + temperature_text(m["bg_t_max"]) + ")")
     elif key == "callendar-van-dusen":
         if not has_cvd(m):
             raise CoreError("no Callendar–Van Dusen coefficients are on record for " + m["name"], "model")
@@ -147,7 +158,7 @@ def resistivity_at(m, t, model):
     elif key == "reference":
         if abs(t - m["t_ref"]) > 0.5:
             raise CoreError("no temperature model is on record for " + m["name"] + "; only "
-                            + kelvin_text(m["t_ref"]) + " can be computed", "temperature")
+                            + temperature_text(m["t_ref"]) + " can be computed", "temperature")
         rho = m["rho_ref"]
     else:
         raise CoreError("unknown model “" + model + "”; choose one of: " + ", ".join(MODEL_CHOICES), "model")

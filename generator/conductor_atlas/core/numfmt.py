@@ -10,6 +10,7 @@ byte-identical in both runtimes.
 
 import math
 
+from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 
 SUPERSCRIPT_DIGITS = "⁰¹²³⁴⁵⁶⁷⁸⁹"
@@ -240,3 +241,8 @@ def format_si(x, unit, sig=4):
         return format_number(x, sig) + " " + unit
     scaled = x / math.pow(10, chosen[0])
     return format_number(scaled, sig) + " " + chosen[1] + unit
+
+
+def temperature_text(t):
+    """A temperature in K as text a person reads: "90.0 °C (363.15 K)"."""
+    return format_fixed(t - ZERO_CELSIUS, 1) + " °C (" + format_fixed(t, 2) + " K)"

@@ -7,12 +7,9 @@
 "used" names each material a result was computed for (pages and the terminal show it first);
 its note says how a trade word was read ("" otherwise).
 
-Bad input never raises out of a calculator: the message goes under errors[field].
+Bad input never raises out of a calculator: the message goes under errors[field] (the readers of
+the fields are in core.calc_inputs).
 """
-
-from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity, point_reading_note, portable_text
-from conductor_atlas.core.numfmt import format_fixed
 
 
 # Records read only by key (by the core, the page and JSON) are plain JS objects: the dict
@@ -89,55 +86,6 @@ def has_errors(outcome):
     return len(outcome["errors"].keys()) > 0
 
 
-def field_text(inputs, field):
-    """The text typed in ``field``, or "" when the field is absent or empty."""
-    if field in inputs:
-        value = inputs[field]
-        if value is None:
-            return ""
-        return portable_text(str(value))
-    return ""
-
-
-def read_quantity(outcome, inputs, field, kind, required, default_text=""):
-    """Parse one field as a quantity of ``kind``; on failure record errors[field], return None.
-
-    An empty optional field gives None with no error; an empty field with ``default_text``
-    is read as that text.
-    """
-    text = field_text(inputs, field)
-    if len(text) == 0:
-        if len(default_text) > 0:
-            text = default_text
-        elif not required:
-            return None
-    try:
-        value = parse_quantity(text, kind, field)
-    except CoreError as problem:
-        add_error(outcome, field, problem.message)
-        return None
-    note_point_reading(outcome, text, field)
-    return value
-
-
-def note_point_reading(outcome, text, field):
-    """Say so when ``text`` was read with a decimal point before three digits ("1.500 m" is 1.5 m,
-    1500 m to a reader of the thousands-point convention): units.point_reading_note."""
-    note = point_reading_note(text, field)
-    if len(note) > 0:
-        add_warning(outcome, note)
-
-
-def require_positive(outcome, field, value, what):
-    """Record an error when a parsed value is not > 0; return True when it is fine."""
-    if value is None:
-        return False
-    if not (value > 0):
-        add_error(outcome, field, what + " must be greater than zero")
-        return False
-    return True
-
-
 def check_finite_results(outcome, field, causes=None):
     """Turn any non-finite result into a message (no NaN or ∞ reaches a page), on the input that
     caused it: results are added in the order they are computed, so the first non-finite one
@@ -153,8 +101,3 @@ def check_finite_results(outcome, field, causes=None):
     if len(culprit) > 0:
         outcome["results"] = {}
         add_error(outcome, culprit, "the inputs are too extreme to compute a finite result; check the values")
-
-
-def kelvin_text(t):
-    """A temperature in K as text a person reads: "90.0 °C (363.15 K)"."""
-    return format_fixed(t - 273.15, 1) + " °C (" + format_fixed(t, 2) + " K)"

@@ -9,7 +9,7 @@ impossible inputs.
 """
 
 from conductor_atlas.core.constants import ZERO_CELSIUS
-from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.errors import CoreError, check_positive
 
 # Inferred zero-resistance temperature below 0 degC, [K]. From memory: IEEE Std 118 and
 # IEEE Std 112 use 234.5 for copper (100 % IACS) and 225 for aluminium (EC grade, ~62 % IACS);
@@ -17,11 +17,6 @@ from conductor_atlas.core.errors import CoreError
 # aluminium.
 K_COPPER = 234.5
 K_ALUMINIUM = 225.0
-
-
-def _positive(x, field, what):
-    if not (x - x == 0) or x <= 0.0:
-        raise CoreError(what + " must be a finite number above 0", field)
 
 
 def inferred_zero_from_alpha(alpha, T_ref):
@@ -45,8 +40,8 @@ def inferred_zero_from_alpha(alpha, T_ref):
     -----
     Annealed copper, alpha_20 = 0.00393 /K (IEC 60028 standard annealed copper): k = 234.5.
     """
-    _positive(alpha, "alpha", "temperature coefficient")
-    _positive(T_ref, "T_ref", "reference temperature")
+    check_positive(alpha, "alpha", "temperature coefficient")
+    check_positive(T_ref, "T_ref", "reference temperature")
     return 1.0 / alpha - (T_ref - ZERO_CELSIUS)
 
 
@@ -83,10 +78,10 @@ def resistance_method_temperature(R1, T1, R2, k=K_COPPER):
        determining winding temperature by the resistance method (from memory).
     2. IEEE Std 118, Standard test code for resistance measurement (from memory).
     """
-    _positive(R1, "R1", "cold resistance")
-    _positive(R2, "R2", "hot resistance")
-    _positive(T1, "T1", "temperature")
-    _positive(k, "k", "k")
+    check_positive(R1, "R1", "cold resistance")
+    check_positive(R2, "R2", "hot resistance")
+    check_positive(T1, "T1", "temperature")
+    check_positive(k, "k", "k")
     t1 = T1 - ZERO_CELSIUS
     if not (k + t1 > 0.0):
         raise CoreError("cold temperature lies below the inferred zero -k", "T1")
@@ -120,7 +115,7 @@ def temperature_rise(R1, T1, R2, T_coolant, k=K_COPPER):
     ----------
     1. IEC 60034-1, clause on the resistance method (from memory).
     """
-    _positive(T_coolant, "T_coolant", "coolant temperature")
+    check_positive(T_coolant, "T_coolant", "coolant temperature")
     return resistance_method_temperature(R1, T1, R2, k) - T_coolant
 
 
@@ -139,8 +134,8 @@ def equal_resistance_area_ratio(rho1, rho2):
     ratio : float
         A2 / A1, [-]
     """
-    _positive(rho1, "rho1", "resistivity")
-    _positive(rho2, "rho2", "resistivity")
+    check_positive(rho1, "rho1", "resistivity")
+    check_positive(rho2, "rho2", "resistivity")
     return rho2 / rho1
 
 
@@ -186,8 +181,8 @@ def equal_resistance_mass_ratio(rho1, density1, rho2, density2):
     EC aluminium against annealed copper: about 0.50 (half the mass for the same
     resistance, with 1.64 times the area).
     """
-    _positive(density1, "density1", "density")
-    _positive(density2, "density2", "density")
+    check_positive(density1, "density1", "density")
+    check_positive(density2, "density2", "density")
     return equal_resistance_area_ratio(rho1, rho2) * density2 / density1
 
 
@@ -222,9 +217,9 @@ def voltage_drop_min_area(rho, current, route_length, max_drop, wires=2.0):
     conductor's operating temperature. A physics estimate, not an installation rule: the
     next standard size and the current rating follow the local electrical code.
     """
-    _positive(rho, "rho", "resistivity")
-    _positive(current, "current", "current")
-    _positive(route_length, "route_length", "route length")
-    _positive(max_drop, "max_drop", "allowed voltage drop")
-    _positive(wires, "wires", "wires")
+    check_positive(rho, "rho", "resistivity")
+    check_positive(current, "current", "current")
+    check_positive(route_length, "route_length", "route length")
+    check_positive(max_drop, "max_drop", "allowed voltage drop")
+    check_positive(wires, "wires", "wires")
     return wires * rho * route_length * current / max_drop

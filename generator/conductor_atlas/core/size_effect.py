@@ -5,7 +5,7 @@ boundary scattering), and Mayadas-Shatzkes' combined film expression with both. 
 bulk mean free path l (see conductor_atlas.core.carriers.mean_free_path, or
 rho_lambda_product / rho) and return the ratio rho_film / rho_bulk.
 
-The integrals use composite Gauss-Legendre rules (conductor_atlas.core.temperature_models) on
+The integrals use composite Gauss-Legendre rules (conductor_atlas.core.quadrature) on
 panels graded geometrically toward the boundary layers: 20 points per panel for the single
 Fuchs-Sondheimer integral, 10 per panel for the double integral of the combined model (on
 panels that halve toward a boundary layer a 10-point rule already converges to rounding).
@@ -15,7 +15,7 @@ Pure Python in the Transcrypt subset; SI floats in and out; CoreError for imposs
 import math
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.temperature_models import GL_NODES, GL_WEIGHTS, gauss_legendre
+from conductor_atlas.core.quadrature import GL_NODES, GL_WEIGHTS, gauss_legendre
 
 _HALF_PI = 0.5 * math.pi
 

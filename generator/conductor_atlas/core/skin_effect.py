@@ -15,7 +15,7 @@ Pure Python in the Transcrypt subset; SI floats in and out; CoreError for imposs
 import math
 
 from conductor_atlas.core.constants import MU_0
-from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.errors import CoreError, check_positive
 
 _SQRT2 = math.sqrt(2.0)
 _INV_SQRT2 = 1.0 / math.sqrt(2.0)
@@ -26,11 +26,6 @@ _INV_SQRT2 = 1.0 / math.sqrt(2.0)
 # at 40), the asymptotic error falls like exp(-2 x) (1.3e-13 at 14, 1.6e-15 at 16.5); they
 # cross near 16.5, where both are below 3e-15.
 KELVIN_SWITCH = 16.5
-
-
-def _positive(x, field, what):
-    if not (x - x == 0) or x <= 0.0:
-        raise CoreError(what + " must be a finite number above 0", field)
 
 
 def skin_depth(rho, f, mu_r=1.0):
@@ -63,9 +58,9 @@ def skin_depth(rho, f, mu_r=1.0):
     1. Ramo, S., Whinnery, J. R., Van Duzer, T., Fields and Waves in Communication
        Electronics, 3rd ed., 1994, sec. 3.16, eq. 3.16(7).
     """
-    _positive(rho, "rho", "resistivity")
-    _positive(f, "f", "frequency")
-    _positive(mu_r, "mu_r", "relative permeability")
+    check_positive(rho, "rho", "resistivity")
+    check_positive(f, "f", "frequency")
+    check_positive(mu_r, "mu_r", "relative permeability")
     delta = math.sqrt(rho / (math.pi * f * MU_0 * mu_r))
     if not (delta > 0.0):
         # pi f mu_0 mu_r overflows to infinity near f = 1e308 Hz, and delta would be 0
@@ -347,7 +342,7 @@ def round_wire_resistance_ratio(radius, rho, f, mu_r=1.0):
     ratio : float
         R_ac / R_dc, [-]
     """
-    _positive(radius, "radius", "radius")
+    check_positive(radius, "radius", "radius")
     return kelvin_resistance_ratio(_SQRT2 * radius / skin_depth(rho, f, mu_r))
 
 
@@ -404,7 +399,7 @@ def plate_resistance_ratio(thickness, rho, f, mu_r=1.0):
     1. Dowell, P. L., "Effects of eddy currents in transformer windings", Proc. IEE 113,
        1387 (1966), doi:10.1049/piee.1966.0236 (the single-layer case of its eq. for F).
     """
-    _positive(thickness, "thickness", "thickness")
+    check_positive(thickness, "thickness", "thickness")
     return _plate_factor(thickness / skin_depth(rho, f, mu_r))
 
 
@@ -450,8 +445,8 @@ def rectangular_bar_resistance_ratio(width, thickness, rho, f, mu_r=1.0):
        doi:10.1109/JRPROC.1942.232015.
     2. Dowell, P. L., Proc. IEE 113, 1387 (1966), doi:10.1049/piee.1966.0236.
     """
-    _positive(width, "width", "width")
-    _positive(thickness, "thickness", "thickness")
+    check_positive(width, "width", "width")
+    check_positive(thickness, "thickness", "thickness")
     delta = skin_depth(rho, f, mu_r)
     d_t = thickness / _plate_factor(thickness / delta)
     d_w = width / _plate_factor(width / delta)
@@ -497,9 +492,9 @@ def iec60287_skin_effect_factor(f, R_dc, k_s=1.0):
     1. IEC 60287-1-1:2006, Electric cables - Calculation of the current rating - Part 1-1,
        clause 2.1.2 and Table 2.
     """
-    _positive(f, "f", "frequency")
-    _positive(R_dc, "R_dc", "resistance per unit length")
-    _positive(k_s, "k_s", "k_s")
+    check_positive(f, "f", "frequency")
+    check_positive(R_dc, "R_dc", "resistance per unit length")
+    check_positive(k_s, "k_s", "k_s")
     xs2 = 8.0 * math.pi * f * 1e-7 * k_s / R_dc
     xs = math.sqrt(xs2)
     if xs <= 2.8:

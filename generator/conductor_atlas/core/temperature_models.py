@@ -15,6 +15,7 @@ import math
 
 from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.quadrature import GL_NODES, GL_WEIGHTS
 
 
 def _finite(x):
@@ -24,69 +25,6 @@ def _finite(x):
 def _check_temperature(T, field):
     if not _finite(T) or T <= 0.0:
         raise CoreError("temperature must be a finite number above 0 K", field)
-
-
-# --------------------------------------------------------------------------------------
-# Gauss-Legendre quadrature (also used by conductor_atlas.core.size_effect)
-
-
-def gauss_legendre(n):
-    """Nodes and weights of the n-point Gauss-Legendre rule on [-1, 1].
-
-    Roots of the Legendre polynomial P_n found by Newton's iteration on the three-term
-    recurrence (n + 1) P_{n+1} = (2n + 1) x P_n - n P_{n-1}, started from the Tricomi-type
-    guess cos(pi (i + 0.75) / (n + 0.5)); weights w_i = 2 / ((1 - x_i^2) P_n'(x_i)^2).
-
-    Parameters
-    ----------
-    n : int
-        Number of points, 2 <= n <= 100, [-]
-
-    Returns
-    -------
-    rule : list
-        [nodes, weights], two lists of n floats, nodes ascending.
-
-    References
-    ----------
-    1. Abramowitz, M., Stegun, I. A., Handbook of Mathematical Functions, 1964, eq. 25.4.29
-       and Table 25.4 (nodes and weights to 15 digits).
-    """
-    if n < 2 or n > 100:
-        raise CoreError("Gauss-Legendre order must be between 2 and 100", "n")
-    nodes = []
-    weights = []
-    for i in range(n):
-        x = math.cos(math.pi * (i + 0.75) / (n + 0.5))
-        dp = 1.0
-        for _ in range(100):
-            p0 = 1.0
-            p1 = x
-            for j in range(2, n + 1):
-                p2 = ((2 * j - 1) * x * p1 - (j - 1) * p0) / j
-                p0 = p1
-                p1 = p2
-            dp = n * (x * p1 - p0) / (x * x - 1.0)
-            dx = p1 / dp
-            x = x - dx
-            if abs(dx) <= 1e-16:
-                break
-        # re-evaluate the derivative at the converged root for the weight
-        p0 = 1.0
-        p1 = x
-        for j in range(2, n + 1):
-            p2 = ((2 * j - 1) * x * p1 - (j - 1) * p0) / j
-            p0 = p1
-            p1 = p2
-        dp = n * (x * p1 - p0) / (x * x - 1.0)
-        nodes.append(-x)
-        weights.append(2.0 / ((1.0 - x * x) * dp * dp))
-    return [nodes, weights]
-
-
-_GL20 = gauss_legendre(20)
-GL_NODES = _GL20[0]
-GL_WEIGHTS = _GL20[1]
 
 
 # --------------------------------------------------------------------------------------

@@ -8,11 +8,11 @@ from conductor_atlas.core.calculators import calculate, CALCULATORS
 from conductor_atlas.core.carriers import relaxation_time
 from conductor_atlas.core.size_effect import film_resistivity_ratio
 from conductor_atlas.core.practice import resistance_method_temperature
-from conductor_atlas.core.calc_common import read_material
+from conductor_atlas.core.numfmt import format_number, format_plain, format_si
 from conductor_atlas.core.outcome import new_outcome
+from conductor_atlas.core.calc_inputs import read_material
 from conductor_atlas.core.lookup import find_material
 from conductor_atlas.core.material_models import resistivity_at
-from conductor_atlas.core.numfmt import format_number, format_plain, format_si
 from conductor_atlas.core.units import parse_quantity
 from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.resistance import resistivity_linear

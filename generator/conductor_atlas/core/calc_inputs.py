@@ -1,0 +1,94 @@
+"""Readers of a calculator's input fields: each turns the text typed in one field into SI floats (or a
+material record) and, when it cannot, records errors[field] and returns None, so a calculator reads all
+its fields and reports every problem at once (see core.outcome for the record they fill).
+"""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.geometry import parse_size
+from conductor_atlas.core.lookup import find_material, trade_word_note
+from conductor_atlas.core.outcome import add_error, add_material_used, add_sources, add_warning
+from conductor_atlas.core.units import parse_quantity, point_reading_note, portable_text
+
+
+def field_text(inputs, field):
+    """The text typed in ``field``, or "" when the field is absent or empty."""
+    if field in inputs:
+        value = inputs[field]
+        if value is None:
+            return ""
+        return portable_text(str(value))
+    return ""
+
+
+def read_quantity(outcome, inputs, field, kind, required, default_text=""):
+    """Parse one field as a quantity of ``kind``; on failure record errors[field], return None.
+
+    An empty optional field gives None with no error; an empty field with ``default_text``
+    is read as that text.
+    """
+    text = field_text(inputs, field)
+    if len(text) == 0:
+        if len(default_text) > 0:
+            text = default_text
+        elif not required:
+            return None
+    try:
+        value = parse_quantity(text, kind, field)
+    except CoreError as problem:
+        add_error(outcome, field, problem.message)
+        return None
+    note_point_reading(outcome, text, field)
+    return value
+
+
+def note_point_reading(outcome, text, field):
+    """Say so when ``text`` was read with a decimal point before three digits ("1.500 m" is 1.5 m,
+    1500 m to a reader of the thousands-point convention): units.point_reading_note."""
+    note = point_reading_note(text, field)
+    if len(note) > 0:
+        add_warning(outcome, note)
+
+
+def require_positive(outcome, field, value, what):
+    """Record an error when a parsed value is not > 0; return True when it is fine."""
+    if value is None:
+        return False
+    if not (value > 0):
+        add_error(outcome, field, what + " must be greater than zero")
+        return False
+    return True
+
+
+def read_temperature(outcome, inputs, field):
+    """Conductor temperature [K]; 20 °C when the field is empty."""
+    t = read_quantity(outcome, inputs, field, "temperature", False, "20 °C")
+    if t is not None and not (t > 0):
+        add_error(outcome, field, "must be above absolute zero (−273.15 °C)")
+        return None
+    return t
+
+
+def read_size(outcome, inputs, field):
+    """A conductor size (geometry.parse_size: area, gauge, diameter or bar) from ``field``, or None
+    with errors[field] set."""
+    text = field_text(inputs, field)
+    try:
+        size = parse_size(text, field)
+    except CoreError as problem:
+        add_error(outcome, field, problem.message)
+        return None
+    note_point_reading(outcome, text, field)
+    return size
+
+
+def read_material(outcome, inputs, catalogue, field):
+    """The material named in ``field`` (or None, with errors[field] set), named in outcome["used"]."""
+    text = field_text(inputs, field)
+    try:
+        m = find_material(catalogue, text, field)
+    except CoreError as problem:
+        add_error(outcome, field, problem.message)
+        return None
+    add_sources(outcome, m["sources"])
+    add_material_used(outcome, m, trade_word_note(catalogue, text))
+    return m
