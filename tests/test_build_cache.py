@@ -9,7 +9,7 @@ from pathlib import Path
 import pytest
 
 from conductor_atlas import cache
-from conductor_atlas.build import assemble, build, data_folders
+from conductor_atlas.build import assemble, build, data_folders, load_with_record
 from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import DATA_DIR
 
@@ -53,7 +53,7 @@ def test_cached_build_equals_uncached_build(tmp_path, own_cache, extra_folder):
     second = build(tmp_path / "b", [extra_folder])
     assert cache.LAST_STATS["made"] == [], "nothing changed, yet the build made parts again"
     assert len(cache.LAST_STATS["reused"]) == first.materials + len(SITE_PARTS) + len(SCRIPT_PARTS)
-    uncached = assemble(load_dataset(data_folders([extra_folder])))  # no cache at all
+    uncached = assemble(load_with_record(data_folders([extra_folder])))  # no cache at all
     on_disk = site_files(second.out)
     assert sorted(on_disk) == sorted(uncached)
     assert [p for p in uncached if uncached[p] != on_disk[p]] == []

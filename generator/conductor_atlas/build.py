@@ -5,6 +5,7 @@ Everything is computed in memory first; only ``publish`` touches the output fold
 
 from __future__ import annotations
 
+import dataclasses
 import hashlib
 import time
 from dataclasses import dataclass
@@ -21,6 +22,7 @@ from conductor_atlas.publish import check_replaceable, output_lock, publish
 from conductor_atlas.render import Renderer
 from conductor_atlas.search_index import search_index_files
 from conductor_atlas.transpile import PendingTranspile
+from conductor_atlas.verification import read_record
 
 
 @dataclass(frozen=True)
@@ -44,8 +46,15 @@ def static_files() -> dict[str, bytes]:
 
 
 def material_key(dataset: DataSet, m: Material) -> bytes:
-    """What one material's view and pages are made from: its record and the sources it cites."""
-    return repr((m, [dataset.sources[k] for k in m.source_keys()])).encode("utf-8")
+    """What one material's view and pages are made from: its record, the sources it cites and
+    what the verification record says about it."""
+    checks = dataset.verification.for_material(m.id) if dataset.verification is not None else ()
+    return repr((m, [dataset.sources[k] for k in m.source_keys()], checks)).encode("utf-8")
+
+
+def load_with_record(folders: list[Path]) -> DataSet:
+    """The data set with the shipped folder's verification record attached."""
+    return dataclasses.replace(load_dataset(folders), verification=read_record(DATA_DIR))
 
 
 def assemble(dataset: DataSet, cache: BuildCache | None = None,
@@ -92,7 +101,7 @@ def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
         with PendingTranspile() as transpile:  # runs beside loading, deriving and rendering
             cache = BuildCache(CACHE_DIR)
             folders = data_folders(extra_data)
-            dataset = cache.get("site:data", folder_key(folders), lambda: load_dataset(folders))
+            dataset = cache.get("site:data", folder_key(folders), lambda: load_with_record(folders))
             files = assemble(dataset, cache, transpile)
         published = publish(files, folder, lock_held=True)
     cache.prune()

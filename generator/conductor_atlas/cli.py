@@ -56,11 +56,14 @@ def cmd_build(args: argparse.Namespace) -> int:
 
 
 def cmd_check(args: argparse.Namespace) -> int:
-    from conductor_atlas.build import data_folders
-    from conductor_atlas.load import load_dataset
-    dataset = load_dataset(data_folders(args.data))
+    from conductor_atlas.build import data_folders, load_with_record
+    from conductor_atlas.verification import summary_text
+    dataset = load_with_record(data_folders(args.data))
     values = sum(len(m.properties) for m in dataset.materials)
     print(f"Data OK: {len(dataset.materials)} materials, {values} values, {len(dataset.sources)} sources")
+    print()
+    print("How far each value is proven (per material; a ρ(T) table counts as one value):")
+    print(summary_text(dataset, dataset.verification))
     return 0
 
 

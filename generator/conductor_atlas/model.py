@@ -114,6 +114,9 @@ class DataSet:
     sources: Mapping[str, Source] = field(default_factory=lambda: MappingProxyType({}))
     # conductor-standard tables (conductor_atlas.standards.LimitTable), from each folder's standards/
     limits: tuple = ()
+    # conductor_atlas.verification.Record of the shipped data folder, attached by the build
+    # (None: none read; every value is then shown unverified)
+    verification: object = None
 
     def by_id(self, material_id: str) -> Material:
         for m in self.materials:

@@ -24,6 +24,8 @@ from conductor_atlas.core.lookup import TRADE_WORDS
 from conductor_atlas.derive import MaterialView, calc_catalogue
 from conductor_atlas.material_charts import material_charts
 from conductor_atlas.core.numfmt import format_number, format_fixed
+from conductor_atlas.verification import EMPTY as EMPTY_RECORD, KIND_LABELS, KINDS as VERIFICATION_KINDS
+from conductor_atlas.verification import statuses, summary as verification_summary
 from conductor_atlas.model import DataSet, Value
 from conductor_atlas.schema import CLASSES, PROPERTIES
 
@@ -117,9 +119,23 @@ class CardRow:
     source: str
     locator: str
     note: str
+    status: str = ""        # how far the value is proven (conductor_atlas.verification)
+    status_kind: str = ""
 
 
-def card_rows(view: MaterialView) -> list[CardRow]:
+MEMORY_PHRASE = "from memory of the cited table"
+
+
+def note_beside(status_kind: str, note: str) -> str:
+    """A verified value's note without "from memory of the cited table" (the status says more)."""
+    if status_kind != "verified" or MEMORY_PHRASE not in note:
+        return note
+    rest = note.replace(MEMORY_PHRASE, "").strip(" ;,")
+    return rest[:1].upper() + rest[1:] if rest else ""
+
+
+def card_rows(view: MaterialView, statuses: dict | None = None) -> list[CardRow]:
+    statuses = statuses or {}
     rows = []
     for name in PROPERTIES:
         value: Value | None = view.material.get(name)
@@ -129,9 +145,12 @@ def card_rows(view: MaterialView) -> list[CardRow]:
         text = format_number(value.si * scale, sig)
         if value.low is not None and value.high is not None:
             text = f"{text} ({format_number(value.low * scale, sig)} – {format_number(value.high * scale, sig)})"
+        status = statuses.get(name)
+        kind = status.kind if status else ""
         rows.append(CardRow(id=f"prop-{name.replace('_', '-')}", label=PROPERTIES[name].label[:1].upper() + PROPERTIES[name].label[1:], value=text,
                             unit=unit, condition=condition_text(value.temperature), source=value.source,
-                            locator=value.locator, note=value.note))
+                            locator=value.locator, note=note_beside(kind, value.note),
+                            status=status.text if status else "", status_kind=kind))
     return rows
 
 
@@ -201,10 +220,12 @@ class Renderer:
         m = view.material
         base = f"materials/{m.id}"
         used = [dataset.sources[k] for k in m.source_keys()]
+        value_statuses = statuses(dataset, m, dataset.verification or EMPTY_RECORD)
         catalogue = calc_catalogue([view.calc], [m])
         charts = [{"id": c.id, "caption": c.caption, "svg": Markup(c.svg)} for c in material_charts(view)]
         out[f"{base}/index.html"] = self.page(
-            "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view),
+            "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view, value_statuses),
+            table_status=value_statuses.get("resistivity_table"),
             notes_html=markdown_safe(m.notes), sources=used, title=m.name,
             calc_json=catalogue, charts=charts, class_title=CLASSES[m.klass], calc=calc_spec("resistance", {"material": m.id}),
             material_key=TRADE_WORDS[m.id][2] if m.id in TRADE_WORDS else m.id)  # "copper" is the grade: link "Cu"
@@ -243,6 +264,15 @@ class Renderer:
             calc=calc_spec("compare", datalist="material-choices") if "compare" in CALCULATORS else None,
             calc_json=full_catalogue, choices=choices)
         out["methods/index.html"] = self.page("methods.html", "methods/index.html", title="Methods")
+        record = dataset.verification or EMPTY_RECORD
+        rows_by_material, totals = verification_summary(dataset, record)
+        names = {m.id: m.name for m in dataset.materials}
+        out["verification/index.html"] = self.page(
+            "verification.html", "verification/index.html", title="How far the values are proven",
+            rows=[{"id": mid, "name": names[mid], "counts": counts, "total": sum(counts.values())}
+                  for mid, counts in rows_by_material],
+            totals=totals, total=sum(totals.values()), kinds=VERIFICATION_KINDS, kind_labels=KIND_LABELS,
+            datasets=sorted(record.datasets.items()))
         out["references/index.html"] = self.page("references.html", "references/index.html",
                                                  sources=list(dataset.sources.values()), title="References")
         out["materials.json"] = (json.dumps(

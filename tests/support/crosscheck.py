@@ -260,6 +260,11 @@ def record_text(outcomes: list[Outcome]) -> str:
              "# Written by `.venv/bin/python -m tests.support.crosscheck --write`; tests/test_crosscheck.py",
              "# requires this file to equal a fresh comparison. The build marks a value \"verified\" only",
              "# while it still equals the value recorded here.", ""]
+    labels = {entry["id"]: entry["label"] for entry in published_tables()}
+
+    def named(label: str) -> str:
+        return labels.get(label, label)
+
     by_key: dict[tuple[str, str], list[Outcome]] = {}
     for o in outcomes:
         if o.passed:
@@ -275,14 +280,14 @@ def record_text(outcomes: list[Outcome]) -> str:
             if not against:
                 against = sorted(group[0].datasets)
             lines.append(f"value = {group[0].value!r}")
-        lines.append("against = [" + ", ".join(f'"{a}"' for a in against) + "]")
+        lines.append("against = [" + ", ".join(f'"{named(a)}"' for a in against) + "]")
         lines.append("")
     lines.append("# what each dataset named above is, and where it was read")
     lines.append("[_datasets]")
     for package in element_datasets.PACKAGES:
         lines.append(f'"{element_datasets.label(package)}" = "{element_datasets.DESCRIPTIONS[package]}"')
     for entry in published_tables():
-        lines.append(f'"{entry["id"]}" = "{entry["copies"]}; read at {entry["address"]}"')
+        lines.append(f'"{entry["label"]}" = "{entry["copies"]}; read at {entry["address"]}"')
     lines.append("")
     return "\n".join(lines)
 
