@@ -23,6 +23,7 @@ from conductor_atlas.render import Renderer
 from conductor_atlas.search_index import search_index_files
 from conductor_atlas.transpile import PendingTranspile
 from conductor_atlas.verification import read_record
+from conductor_atlas.edition import Edition, current_edition, read_previous, stamp
 
 
 @dataclass(frozen=True)
@@ -53,8 +54,10 @@ def material_key(dataset: DataSet, m: Material) -> bytes:
 
 
 def load_with_record(folders: list[Path]) -> DataSet:
-    """The data set with the shipped folder's verification record attached."""
-    return dataclasses.replace(load_dataset(folders), verification=read_record(DATA_DIR))
+    """The data set with the shipped folder's verification record, the data edition and the
+    previous edition's values attached."""
+    return dataclasses.replace(load_dataset(folders), verification=read_record(DATA_DIR),
+                               edition=current_edition(folders), previous=read_previous(DATA_DIR))
 
 
 def assemble(dataset: DataSet, cache: BuildCache | None = None,
@@ -79,7 +82,8 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
         views.append(view)
         files.update(pages)
     site_key = hashlib.sha256(b"\0".join(keys) + repr(list(dataset.sources.values())).encode()
-                              + repr(dataset.limits).encode()).digest()
+                              + repr(dataset.limits).encode()
+                              + repr((dataset.verification, dataset.previous)).encode()).digest()
     files.update(cache.get("site:listings", site_key, lambda: renderer.render_listings(dataset, views)))
     files.update(cache.get("site:search-index", site_key, lambda: search_index_files(dataset, views, files)))
     files.update(static_files())
@@ -90,6 +94,7 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
         files.update(transpile.result())
     scripts = scripts_of(files)
     bundles = cache.get("site:classic-bundles", files_key(scripts), lambda: classic_bundles(scripts))
+    files = stamp(files, dataset.edition or Edition("undated", "unknown"))
     return add_offline_files(files, bundles)  # last: the service worker lists every other file
 
 

@@ -117,6 +117,10 @@ class DataSet:
     # conductor_atlas.verification.Record of the shipped data folder, attached by the build
     # (None: none read; every value is then shown unverified)
     verification: object = None
+    # conductor_atlas.edition.Edition of the data folders and the previous edition's values
+    # (conductor_atlas.edition.Previous), attached by the build; None: not known
+    edition: object = None
+    previous: object = None
 
     def by_id(self, material_id: str) -> Material:
         for m in self.materials:

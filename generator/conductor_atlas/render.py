@@ -26,6 +26,7 @@ from conductor_atlas.material_charts import material_charts
 from conductor_atlas.core.numfmt import format_number, format_fixed
 from conductor_atlas.verification import EMPTY as EMPTY_RECORD, KIND_LABELS, KINDS as VERIFICATION_KINDS
 from conductor_atlas.verification import statuses, summary as verification_summary
+from conductor_atlas.edition import TOKEN as EDITION_TOKEN, changes as edition_changes, value_texts
 from conductor_atlas.model import DataSet, Value
 from conductor_atlas.schema import CLASSES, PROPERTIES
 
@@ -204,7 +205,7 @@ class Renderer:
         root = "../" * depth
         context.setdefault("fmt", format_number)
         html = self.env.get_template(template).render(root=root, site_name=SITE_NAME, page_path=path,
-                                                      version=self.version, **context)
+                                                      version=self.version, edition=EDITION_TOKEN, **context)
         return html.encode("utf-8")
 
     def render_site(self, dataset: DataSet, views: list[MaterialView]) -> dict[str, bytes]:
@@ -273,6 +274,11 @@ class Renderer:
                   for mid, counts in rows_by_material],
             totals=totals, total=sum(totals.values()), kinds=VERIFICATION_KINDS, kind_labels=KIND_LABELS,
             datasets=sorted(record.datasets.items()))
+        previous = dataset.previous
+        changed = edition_changes(previous, value_texts(dataset)) if previous is not None else None
+        out["changes/index.html"] = self.page(
+            "changes.html", "changes/index.html", title="What changed in the data",
+            previous_edition=previous.edition if previous is not None else "", changed=changed)
         out["references/index.html"] = self.page("references.html", "references/index.html",
                                                  sources=list(dataset.sources.values()), title="References")
         out["materials.json"] = (json.dumps(

@@ -15,6 +15,7 @@ import math
 from dataclasses import dataclass
 
 from conductor_atlas.core.numfmt import format_plain
+from conductor_atlas.edition import TOKEN as EDITION_TOKEN
 
 
 @dataclass(frozen=True)
@@ -50,10 +51,10 @@ class Table:
     def to_csv(self) -> str:
         buffer = io.StringIO()
         writer = csv.writer(buffer, lineterminator="\n")
-        writer.writerow(["row_id"] + [c.header for c in self.columns])
+        writer.writerow(["row_id"] + [c.header for c in self.columns] + ["data_edition"])
         for row in self.rows:
             cells = [format_plain(v, 8) if c.numeric else str(v) for c, v in zip(self.columns, row.values)]
-            writer.writerow([row.id] + cells)
+            writer.writerow([row.id] + cells + [EDITION_TOKEN])
         return buffer.getvalue()
 
     def to_json(self) -> str:
@@ -63,6 +64,7 @@ class Table:
             "model": self.model,
             "validity": self.validity,
             "sources": list(self.sources),
+            "data_edition": EDITION_TOKEN,
             "columns": [{"key": c.key, "label": c.label, "unit": c.unit} for c in self.columns],
             "rows": [{"row_id": r.id, **{c.key: json_value(v) for c, v in zip(self.columns, r.values)}}
                      for r in self.rows],
