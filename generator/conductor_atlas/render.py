@@ -155,6 +155,15 @@ def card_rows(view: MaterialView, statuses: dict | None = None) -> list[CardRow]
     return rows
 
 
+def source_with_locators(source, m) -> str:
+    """"[key] citation; locator(s) used for this material" for a table's citation text."""
+    locators = sorted({v.locator for v in m.properties.values() if v.source == source.key and v.locator})
+    if m.table is not None and m.table.source == source.key and m.table.locator:
+        locators = sorted(set(locators) | {m.table.locator})
+    text = f"[{source.key}] {source.citation()}"
+    return text + (" (" + "; ".join(locators) + ")" if locators else "")
+
+
 def calc_spec(name: str, fixed: dict | None = None, datalist: str = "") -> dict:
     """What the calculator form macro needs: fields with label/hint/default, results, caution.
 
@@ -222,11 +231,16 @@ class Renderer:
         base = f"materials/{m.id}"
         used = [dataset.sources[k] for k in m.source_keys()]
         value_statuses = statuses(dataset, m, dataset.verification or EMPTY_RECORD)
+        cite_sources = {}
+        for table in view.tables:
+            for key in table.sources:
+                if key not in cite_sources and key in dataset.sources:
+                    cite_sources[key] = source_with_locators(dataset.sources[key], m)
         catalogue = calc_catalogue([view.calc], [m])
         charts = [{"id": c.id, "caption": c.caption, "svg": Markup(c.svg)} for c in material_charts(view)]
         out[f"{base}/index.html"] = self.page(
             "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view, value_statuses),
-            table_status=value_statuses.get("resistivity_table"),
+            table_status=value_statuses.get("resistivity_table"), cite_sources=cite_sources,
             notes_html=markdown_safe(m.notes), sources=used, title=m.name,
             calc_json=catalogue, charts=charts, class_title=CLASSES[m.klass], calc=calc_spec("resistance", {"material": m.id}),
             material_key=TRADE_WORDS[m.id][2] if m.id in TRADE_WORDS else m.id)  # "copper" is the grade: link "Cu"

@@ -1,0 +1,58 @@
+"""The "cite" buttons: a plain-text citation of a table or a row, over http and from file://."""
+
+from __future__ import annotations
+
+import re
+
+import pytest
+
+from tests.browser.conftest import open_page
+
+pytestmark = pytest.mark.browser
+
+
+def edition_of(built_site) -> str:
+    home = (built_site / "index.html").read_text(encoding="utf-8")
+    return re.search(r'data-edition="([^"]+)"', home).group(1)
+
+
+def check_row_citation(text: str, edition: str, link_start: str) -> None:
+    # IEC 60028: annealed copper is 1.7241 µΩ·cm at 20 °C (the row t-20c of the table)
+    assert text.startswith("Standard annealed copper: Resistivity vs temperature, one row")
+    assert "Temperature = 20 °C; Temperature = 293.15 K" in text
+    assert "1.7241" in text and "µΩ·cm" in text
+    assert "Model: " in text and "Sources: [iec60028]" in text
+    assert f"data edition {edition}" in text
+    link = text.splitlines()[-1]
+    assert link.startswith("Link: " + link_start) and link.endswith("#resistivity-temperature--t-20c")
+
+
+def test_row_and_table_citations_over_http(browser, served_site, built_site):
+    context, page = open_page(browser, 900, 1200)
+    context.grant_permissions(["clipboard-read", "clipboard-write"], origin=served_site)
+    page.goto(f"{served_site}/materials/copper-annealed/index.html", wait_until="load")
+    page.click("#resistivity-temperature--t-20c button.cite")
+    page.wait_for_function("document.getElementById('cite-output') && document.getElementById('cite-output').value")
+    text = page.eval_on_selector("#cite-output", "e => e.value")
+    check_row_citation(text, edition_of(built_site), served_site)
+    assert page.evaluate("navigator.clipboard.readText()") == text
+    page.click("#resistivity-temperature button.cite[data-cite='table']")
+    table_text = page.eval_on_selector("#cite-output", "e => e.value")
+    assert "rows; columns: Temperature [°C]" in table_text and table_text.endswith("#resistivity-temperature")
+    # a 44 px touch target
+    box = page.locator("#resistivity-temperature--t-20c button.cite").bounding_box()
+    assert box["height"] >= 44 and box["width"] >= 44
+    assert page.errors == []
+    context.close()
+
+
+def test_row_citation_from_a_copied_folder(browser, built_site):
+    context, page = open_page(browser, 900, 1200)
+    path = built_site / "materials" / "copper-annealed" / "index.html"
+    page.goto(path.as_uri(), wait_until="load")
+    page.click("#resistivity-temperature--t-20c button.cite")
+    page.wait_for_function("document.getElementById('cite-output') && document.getElementById('cite-output').value")
+    text = page.eval_on_selector("#cite-output", "e => e.value")
+    check_row_citation(text, edition_of(built_site), "file://")
+    assert page.errors == []
+    context.close()
