@@ -97,3 +97,60 @@ def test_terminal_and_json_name_the_material_first():
 def test_compare_names_both_materials(catalogue):
     outcome = calculate("compare", {"material": "copper", "other": "1350"}, catalogue)
     assert [entry[0] for entry in outcome["used"]] == ["copper-annealed", "aluminium-1350"]
+
+
+# --- 6. one bad optional field does not blank unrelated results --------------------------------------
+def test_a_current_without_unit_leaves_the_resistance_shown(catalogue):
+    inputs = {"material": "IACS", "length": "100 m", "size": "2.5 mm2", "current": "60"}
+    outcome = calculate("resistance", inputs, catalogue)
+    assert outcome["errors"]["current"].startswith("needs a unit")
+    # R = ρL/A = 1.7241e-8 · 100 / 2.5e-6 = 0.68964 Ω (IEC 60028 resistivity; exact arithmetic)
+    assert outcome["results"]["resistance"]["value"] == pytest.approx(0.68964, rel=1e-12)
+    assert "voltage_drop" not in outcome["results"] and "power_loss" not in outcome["results"]
+
+
+def test_a_bad_frequency_keeps_the_dc_results(catalogue):
+    outcome = calculate("resistance", {"material": "IACS", "length": "100 m", "size": "2.5 mm2", "current": "10 A",
+                                       "frequency": "-50 Hz"}, catalogue)
+    assert "frequency" in outcome["errors"]
+    assert outcome["results"]["voltage_drop"]["value"] == pytest.approx(6.8964, rel=1e-12)  # U = I R
+    assert "resistance_ac" not in outcome["results"]
+
+
+def test_a_bad_optional_size_keeps_the_skin_depth(catalogue):
+    outcome = calculate("skin-effect", {"material": "IACS", "frequency": "50 Hz", "size": "5 kg"}, catalogue)
+    assert "size" in outcome["errors"]
+    # δ = sqrt(ρ/(π f μ0)) = sqrt(1.7241e-8 / (π · 50 · 4π·1e-7)) = 9.346 mm at 50 Hz (textbook value for
+    # annealed copper, e.g. 9.3 mm in every power-engineering table); 1e-3 covers the printed figures
+    assert outcome["results"]["skin_depth"]["value"] == pytest.approx(9.346e-3, rel=1e-3)
+
+
+# --- 4. every grade at its temperature --------------------------------------------------------------
+@pytest.mark.parametrize("alloy, base", [("6101", "Al"), ("C17200", "Cu"), ("C51000", "Cu")])
+@pytest.mark.parametrize("temperature", ["-40 °C", "75 °C", "90 °C", "200 °C"])
+def test_dilute_alloys_follow_their_base_metal_by_matthiessens_rule(catalogue, alloy, base, temperature):
+    # Matthiessen's rule (Kittel, Introduction to Solid State Physics, ch. 6): ρ_alloy(T) − ρ_alloy(20 °C)
+    # = ρ_base(T) − ρ_base(20 °C); the base's change comes from its sourced table (CRC, as in its file)
+    def rho(material, t):
+        outcome = calculate("resistivity", {"material": material, "temperature": t}, catalogue)
+        assert outcome["errors"] == {}, outcome["errors"]
+        return outcome["results"]["resistivity"]["value"], outcome
+    alloy_hot, outcome = rho(alloy, temperature)
+    alloy_20, _ = rho(alloy, "20 °C")
+    base_hot, _ = rho(base, temperature)
+    base_20, _ = rho(base, "20 °C")
+    # 2e-3: the alloy's increments are interpolated on a 10 K grid of the base's own model, where the
+    # base switches from its linear model to its table (at the span's end) the two differ by that much
+    assert alloy_hot - alloy_20 == pytest.approx(base_hot - base_20, rel=2e-3)
+    assert outcome["model"].startswith("estimated by Matthiessen's rule from ")
+    assert any("is an estimate" in w for w in outcome["warnings"])
+
+
+def test_6101_busbar_at_75_degrees_answers(catalogue):
+    outcome = calculate("resistance", {"material": "6101", "length": "25 m", "size": "16 mm2",
+                                       "temperature": "75 °C", "current": "60 A"}, catalogue)
+    assert outcome["errors"] == {}
+    # α at 20 °C implied by the rule: α_Al ρ_Al / ρ_6101 = 0.0044 · 2.65 / 3.13 ≈ 0.0037 /K; trade figures
+    # for 6101 tempers are 0.0035-0.0038 /K (from memory of aluminium conductor handbooks): ratio over 55 K
+    ratio = outcome["results"]["resistivity"]["value"] / 3.1348e-8
+    assert 1 + 0.0035 * 55 < ratio < 1 + 0.0039 * 55

@@ -7,6 +7,7 @@ and the tables all start from the same numbers.
 
 from __future__ import annotations
 
+import math
 from dataclasses import dataclass
 
 from conductor_atlas.core import resistance as dc
@@ -136,6 +137,27 @@ def own_mean_free_path(m: Material, rho_ref: float, t_ref: float) -> tuple[float
     return 0.0, 0.0, "", ""
 
 
+def base_metal_increments(m: Material, t_ref: float) -> tuple[list[float], list[float], str]:
+    """([T] K, [ρ_base(T) − ρ_base(t_ref)] Ω·m, base name) for an alloy with a temperature base, else
+    ([], [], ""). Matthiessen's rule: the impurity part of ρ does not depend on T, so an alloy's ρ(T)
+    is ρ_alloy(t_ref) + ρ_base(T) − ρ_base(t_ref) (Matthiessen & Vogt 1864; Kittel, Introduction to
+    Solid State Physics, ch. 6; Ashcroft & Mermin ch. 16). The points are the base's sourced table
+    points and a 10 K grid, ρ_base by the model "auto" picks for the base at each (core.material_models)."""
+    base = m.temperature_base
+    if base is None:
+        return [], [], ""
+    record = calc_record(base, linear_model(base), bloch_gruneisen(base))
+    at_ref = resistivity_at(record, t_ref, "auto")["rho"]
+    low, high = base.table.temperatures[0], base.table.temperatures[-1]
+    # the table points and a 10 K grid between them, so that interpolating the increments follows the
+    # base's own model ("auto": linear inside its span, the table outside) to well under 0.1 %
+    grid = {float(t) for t in range(int(math.ceil(low / 10.0)) * 10, int(high) + 1, 10)}
+    edges = {t for t in (record["valid_from"], record["valid_to"]) if low <= t <= high}  # where "auto" switches
+    temperatures = sorted(grid | set(base.table.temperatures) | edges | {t_ref})
+    increments = [resistivity_at(record, t, "auto")["rho"] - at_ref for t in temperatures]
+    return temperatures, increments, base.name
+
+
 def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit | None) -> dict:
     """The flat record the calculators read (see core.material_models for the keys)."""
     rho, t_rho, rho_source = reference_resistivity(m)
@@ -144,6 +166,7 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
     t_ref = model.t_ref if model else t_rho
     mfp_si, mfp_t, mfp_source, mfp_how = own_mean_free_path(m, rho_ref, t_ref)
     low, high = resistivity_range(m)
+    matthiessen = base_metal_increments(m, t_ref)
     return {
         "id": m.id,
         "name": m.name,
@@ -180,6 +203,9 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "cvd_a": si_or(m, "cvd_a", 0.0),
         "cvd_b": si_or(m, "cvd_b", 0.0),
         "cvd_c": si_or(m, "cvd_c", 0.0),
+        "mt_t": matthiessen[0],
+        "mt_drho": matthiessen[1],
+        "mt_base": matthiessen[2],
         "sources": model_sources(m),
         "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
         "mean_free_path_source": mfp_source,

@@ -6,6 +6,7 @@ Reads files only; writes nothing. Every problem found in any file is collected a
 
 from __future__ import annotations
 
+import dataclasses
 import errno
 import functools
 import math
@@ -391,11 +392,32 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
     if "resistivity_table" in data:
         strict = klass == "pure-metal" and not (MAGNETIC & set(raw_props))
         table = read_table(data["resistivity_table"], f"{where}: resistivity_table", sources, strict, problems)
+    base_id = data.get("temperature_base", "")
+    if not isinstance(base_id, str) or (base_id and not ID_PATTERN.match(base_id)):
+        problems.add(f"{where}: temperature_base", f"expected the id of the base metal, found {base_id!r}")
     if len(problems.lines) > before:
         return None
     return Material(id=material_id, name=data["name"].strip(), klass=klass, aliases=tuple(a.strip() for a in aliases),
                     summary=data["summary"].strip(), notes=notes, properties=MappingProxyType(properties),
-                    table=table, path=path)
+                    table=table, path=path, temperature_base_id=base_id)
+
+
+def attach_temperature_bases(materials: list[Material], problems: Problems) -> list[Material]:
+    """Each material with a ``temperature_base`` gets that material attached (Matthiessen's rule):
+    it must exist, have a ρ(T) table of its own and no base itself."""
+    by_id = {m.id: m for m in materials}
+    out = []
+    for m in materials:
+        if m.temperature_base_id:
+            base = by_id.get(m.temperature_base_id)
+            if base is None or base.table is None or base.temperature_base_id:
+                problems.add(f"{display_path(m.path)}: temperature_base",
+                             f"expected the id of a material with a sourced ρ(T) table and no base of its own, "
+                             f"found \"{m.temperature_base_id}\"")
+            else:
+                m = dataclasses.replace(m, temperature_base=base)
+        out.append(m)
+    return out
 
 
 def read_sources(path: Path, problems: Problems) -> dict[str, Source]:
@@ -507,6 +529,7 @@ def load_dataset(folders: list[Path]) -> DataSet:
                 names[key] = (kind, m.path)
     if not materials and not problems.lines:
         problems.add(display_path(folders[0]), "holds no material files")
+    materials = attach_temperature_bases(materials, problems)
     # what passes here builds: run what the build derives from each material (derived_checks)
     from conductor_atlas.derived_checks import material_problems  # imports derive, which imports numpy
     for m in materials:

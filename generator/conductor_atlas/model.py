@@ -95,6 +95,10 @@ class Material:
     properties: Mapping[str, Value]
     table: ResistivityTable | None
     path: Path
+    # a dilute alloy with no temperature model of its own takes ρ(T) − ρ(20 °C) from its base metal
+    # (Matthiessen's rule): the base's id as written, and the base itself once every file is loaded
+    temperature_base_id: str = ""
+    temperature_base: "Material | None" = None
 
     def get(self, name: str) -> Value | None:
         return self.properties.get(name)
@@ -103,6 +107,8 @@ class Material:
         keys = {v.source for v in self.properties.values()}
         if self.table is not None:
             keys.add(self.table.source)
+        if self.temperature_base is not None:
+            keys.update(self.temperature_base.source_keys())
         return sorted(keys)
 
 

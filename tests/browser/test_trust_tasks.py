@@ -65,3 +65,18 @@ def test_c_copper_names_standard_annealed_copper(tablet_page, served_site, catal
     pg.wait_for_load_state()
     assert pg.url.endswith("/materials/copper-annealed/index.html")
     assert pg.errors == []
+
+
+def test_a_6101_busbar_at_75_degrees(tablet_page, served_site, catalogue):
+    pg = tablet_page
+    open_resistance(pg, served_site)
+    inputs = {"material": "6101", "length": "25 m", "size": "16 mm2", "temperature": "75 °C", "current": "60 A"}
+    type_inputs(pg, inputs)
+    expected = assert_page_matches_core(pg, catalogue, inputs)
+    # R = ρ L / A with ρ(75 °C) by Matthiessen's rule: between 1 + 0.0035·55 and 1 + 0.0039·55 times
+    # 3.1348 µΩ·cm (trade coefficients of 6101, from memory): 58.6 to 60.0 mΩ for 25 m of 16 mm²
+    r = expected["results"]["resistance"]["value"]
+    assert 3.1348e-8 * 25 / 16e-6 * (1 + 0.0035 * 55) < r < 3.1348e-8 * 25 / 16e-6 * (1 + 0.0039 * 55)
+    assert "Matthiessen" in pg.text_content("[data-model]")
+    assert pg.text_content("[data-material]").startswith("Material: Aluminium alloy 6101")
+    assert pg.errors == []

@@ -132,13 +132,13 @@ def calculator_cases():
     ]
     cases = []
     names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", "", "copper",
-             "Aluminum"]
+             "Aluminum", "6101", "C17200"]
     for name in names:
         for inp in inputs:
             cases.append(("conductor_atlas.core.calculators", "calculate",
                           ["resistance", {**inp, "material": name}, catalogue]))
         for t in ("20 °C", "77 K", "4.2 K", "500 °C", "1200 K", "-300 °C", "abc"):
-            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen"):
+            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen"):
                 cases.append(("conductor_atlas.core.calculators", "calculate",
                               ["resistivity", {"material": name, "temperature": t, "model": model}, catalogue]))
     cases.append(("conductor_atlas.core.calculators", "calculate", ["nonsense", {}, catalogue]))
@@ -411,6 +411,6 @@ def physics_cases():
     for material_id in ("copper", "copper-annealed", "platinum-pt385", "iron", "stainless-304"):
         record = catalogue["materials"][material_id]
         for t in (4.2, 77.0, 293.15, 600.0, 1500.0):
-            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen"):
+            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen"):
                 cases.append(("conductor_atlas.core.material_models", "resistivity_at", [record, t, model]))
     return cases

@@ -72,14 +72,18 @@ def calculate(inputs, catalogue):
     outcome = new_outcome(NAME, inputs)
     length_m = read_quantity(outcome, inputs, "length", "length", True)
     size = read_size(outcome, inputs, "size")
+    require_positive(outcome, "length", length_m, "length")
+    opening = material_at_temperature(outcome, inputs, catalogue)
+    # the optional fields are read after the opening: a problem in one is shown under it and drops
+    # only the results that need it (voltage drop, loss, AC), not the resistance
     current = read_quantity(outcome, inputs, "current", "current", False)
     f = read_quantity(outcome, inputs, "frequency", "frequency", False)
-    require_positive(outcome, "length", length_m, "length")
     if current is not None and current < 0:
         add_error(outcome, "current", "must not be negative (enter the magnitude)")
+        current = None
     if f is not None and f < 0:
         add_error(outcome, "frequency", "must not be negative")
-    opening = material_at_temperature(outcome, inputs, catalogue)
+        f = None
     if opening is None:
         return outcome
     m = opening[0]
@@ -112,8 +116,7 @@ def calculate(inputs, catalogue):
             delta = skin.skin_depth(rho, f, m["mu_r"])
             ratio = ac_ratio(outcome, size, rho, f, m["mu_r"])
         except CoreError as problem:
-            add_error(outcome, "frequency", problem.message)
-            outcome["results"] = {}
+            add_error(outcome, "frequency", problem.message)  # the DC results stand
             return outcome
         add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
         warn_if_anomalous(outcome, recorded_mean_free_path(m, rho, t)[0], delta)

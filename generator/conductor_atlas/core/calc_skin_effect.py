@@ -54,12 +54,13 @@ def calculate(inputs, catalogue):
     """
     outcome = new_outcome(NAME, inputs)
     f = read_quantity(outcome, inputs, "frequency", "frequency", True)
-    size = None
-    if len(field_text(inputs, "size")) > 0:
-        size = read_size(outcome, inputs, "size")
     if f is not None and not (f > 0):
         add_error(outcome, "frequency", "must be greater than zero (at DC there is no skin effect)")
     opening = material_at_temperature(outcome, inputs, catalogue)
+    size = None
+    if len(field_text(inputs, "size")) > 0:
+        # read after the opening: a bad size is shown under its field and drops only the AC/DC results
+        size = read_size(outcome, inputs, "size")
     if opening is None:
         return outcome
     m = opening[0]

@@ -23,9 +23,10 @@ MODEL_LABELS = {
     "bloch-gruneisen": "Bloch–Grüneisen fit to the sourced ρ(T) table",
     "callendar-van-dusen": "Callendar–Van Dusen equation (IEC 60751)",
     "reference": "the reference value only (no temperature model on record)",
+    "matthiessen": "estimated by Matthiessen's rule",
 }
 
-MODEL_CHOICES = ["auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen"]
+MODEL_CHOICES = ["auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen"]
 
 # The "model" field of every calculator form: [label, hint]
 MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"]
@@ -45,6 +46,20 @@ def has_bg(m):
 
 def has_cvd(m):
     return m["cvd_a"] > 0
+
+
+def has_matthiessen(m):
+    return len(m["mt_t"]) >= 2
+
+
+def in_matthiessen_span(m, t):
+    return has_matthiessen(m) and t >= m["mt_t"][0] and t <= m["mt_t"][len(m["mt_t"]) - 1]
+
+
+def matthiessen_label(m):
+    """"estimated by Matthiessen's rule from <base> (<span>)"."""
+    return (MODEL_LABELS["matthiessen"] + " from " + m["mt_base"] + ", valid " + kelvin_text(m["mt_t"][0]) + " to "
+            + kelvin_text(m["mt_t"][len(m["mt_t"]) - 1]))
 
 
 def in_linear_span(m, t):
@@ -74,6 +89,8 @@ def available_models(m):
         out.append("table")
     if has_bg(m):
         out.append("bloch-gruneisen")
+    if has_matthiessen(m):
+        out.append("matthiessen")
     return out
 
 
@@ -100,6 +117,8 @@ def choose_model(m, t):
         return "table"
     if has_linear(m):
         return "linear"
+    if has_matthiessen(m):
+        return "matthiessen"
     return "reference"
 
 
@@ -155,6 +174,20 @@ def resistivity_at(m, t, model):
         for w in tm.cvd_warnings(t):
             warnings.append(w)
         rho = m["rho_ref"] * cvd_ratio(m, t)
+    elif key == "matthiessen":
+        if not has_matthiessen(m):
+            raise CoreError("no base metal is on record for " + m["name"] + ", so Matthiessen's rule cannot be applied",
+                            "model")
+        if not in_matthiessen_span(m, t):
+            raise CoreError("the estimate for " + m["name"] + " by Matthiessen's rule spans only "
+                            + kelvin_text(m["mt_t"][0]) + " to " + kelvin_text(m["mt_t"][len(m["mt_t"]) - 1])
+                            + " (the base metal's sourced table)", "temperature")
+        rho = m["rho_ref"] + tm.interpolate_table(t, m["mt_t"], m["mt_drho"])
+        warnings.append("ρ of " + m["name"] + " at " + kelvin_text(t) + " is an estimate: its value at "
+                        + kelvin_text(m["t_ref"]) + " plus the change of " + m["mt_base"]
+                        + " (Matthiessen's rule; alloying adds a nearly constant part to ρ). Check against the "
+                        "supplier's data where it matters")
+        return {"rho": rho, "model": key, "label": matthiessen_label(m), "warnings": warnings}
     elif key == "reference":
         if abs(t - m["t_ref"]) > 0.5:
             raise CoreError("no temperature model is on record for " + m["name"] + "; only "
