@@ -14,7 +14,7 @@ from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.carriers import electron_density
 from conductor_atlas.core.lookup import fold
 from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
-from conductor_atlas.core.material_models import resistivity_or_none
+from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
 from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
 from conductor_atlas.model import DataSet, Material
 from conductor_atlas.standards import limits_record

@@ -58,8 +58,8 @@ def in_matthiessen_span(m, t):
 
 def matthiessen_label(m):
     """"estimated by Matthiessen's rule from <base> (<span>)"."""
-    return (MODEL_LABELS["matthiessen"] + " from " + m["mt_base"] + ", valid " + kelvin_text(m["mt_t"][0]) + " to "
-            + kelvin_text(m["mt_t"][len(m["mt_t"]) - 1]))
+    return (MODEL_LABELS["matthiessen"] + " from " + m["mt_base"] + ", valid " + temperature_text(m["mt_t"][0]) + " to "
+            + temperature_text(m["mt_t"][len(m["mt_t"]) - 1]))
 
 
 def in_linear_span(m, t):
@@ -180,11 +180,11 @@ def resistivity_at(m, t, model):
                             "model")
         if not in_matthiessen_span(m, t):
             raise CoreError("the estimate for " + m["name"] + " by Matthiessen's rule spans only "
-                            + kelvin_text(m["mt_t"][0]) + " to " + kelvin_text(m["mt_t"][len(m["mt_t"]) - 1])
+                            + temperature_text(m["mt_t"][0]) + " to " + temperature_text(m["mt_t"][len(m["mt_t"]) - 1])
                             + " (the base metal's sourced table)", "temperature")
         rho = m["rho_ref"] + tm.interpolate_table(t, m["mt_t"], m["mt_drho"])
-        warnings.append("ρ of " + m["name"] + " at " + kelvin_text(t) + " is an estimate: its value at "
-                        + kelvin_text(m["t_ref"]) + " plus the change of " + m["mt_base"]
+        warnings.append("ρ of " + m["name"] + " at " + temperature_text(t) + " is an estimate: its value at "
+                        + temperature_text(m["t_ref"]) + " plus the change of " + m["mt_base"]
                         + " (Matthiessen's rule; alloying adds a nearly constant part to ρ). Check against the "
                         "supplier's data where it matters")
         return {"rho": rho, "model": key, "label": matthiessen_label(m), "warnings": warnings}
