@@ -55,7 +55,14 @@ class Problems:
         self.lines: list[str] = []
 
     def add(self, where: str, message: str) -> None:
-        self.lines.append(f"{where}: {message}")
+        self.lines.append(one_line(f"{where}: {message}"))
+
+
+def one_line(text: str) -> str:
+    """``text`` with every control, format or separator character (a newline in a property name, a
+    right-to-left override) written as an escape, so a problem is one line that reads as printed."""
+    return "".join(f"\\u{ord(ch):04x}" if unicodedata.category(ch) in ("Cc", "Cf", "Zl", "Zp") else ch
+                   for ch in text)
 
 
 def display_path(path: Path) -> str:
