@@ -8,6 +8,7 @@ import functools
 
 from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import resistance as dc
+from conductor_atlas.core.ranges import has_range, scaled_record
 from conductor_atlas.core import size_effect as film
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
@@ -63,6 +64,9 @@ def size_row_id(mm2: float) -> str:
 def resistivity_temperature(m: Material, record: dict) -> Table | None:
     temps = sorted({round(t, 6) for t in CRYO_K + [ZERO_CELSIUS + c for c in TABLE_C]})
     rho20 = quiet_rho(record, TWENTY_CELSIUS)
+    # a recorded ρ range: the same models run on the record moved to each end (core.ranges)
+    ranged = ([scaled_record(record, record["rho_low_ratio"]), scaled_record(record, record["rho_high_ratio"])]
+              if has_range(record) else [])
     rows, models = [], set()
     for t in temps:
         found = quiet_rho(record, t)
@@ -76,6 +80,10 @@ def resistivity_temperature(m: Material, record: dict) -> Table | None:
                  format_fixed(t, 2), format_number(rho * 1e8, 5, True), format_number(1e-6 / rho, 4, True),
                  format_number(dc.iacs_percent(rho), 4, True), format_number(ratio, 4, True) if rho20 else "—",
                  model)
+        if ranged:
+            ends = [quiet_rho(end, t)[0] * 1e8 for end in ranged]
+            values = values[:3] + tuple(ends) + values[3:]
+            texts = texts[:3] + tuple(format_number(e, 5, True) for e in ends) + texts[3:]
         rows.append(Row(temperature_row_id(t - ZERO_CELSIUS), values, texts))
     if not rows:
         return None
@@ -95,9 +103,14 @@ def resistivity_temperature(m: Material, record: dict) -> Table | None:
         validity="Rows appear only where a model holds without a warning; the model column names the one used",
         sources=tuple(record["sources"]),
         columns=(Column("temperature_c", "Temperature", "°C"), Column("temperature_k", "Temperature", "K"),
-                 Column("resistivity", "Resistivity", "µΩ·cm"), Column("conductivity", "Conductivity", "MS/m"),
-                 Column("iacs", "Conductivity", "%IACS"), Column("ratio_20", "ρ / ρ(20 °C)", ""),
-                 Column("model", "Model", "", numeric=False)),
+                 Column("resistivity", "Resistivity", "µΩ·cm"))
+        + ((Column("resistivity_low", "Resistivity, low end of the recorded range", "µΩ·cm"),
+            Column("resistivity_high", "Resistivity, high end of the recorded range", "µΩ·cm")) if ranged else ())
+        + (Column("conductivity", "Conductivity", "MS/m"),
+           Column("iacs", "Conductivity", "%IACS"), Column("ratio_20", "ρ / ρ(20 °C)", ""),
+           Column("model", "Model", "", numeric=False)),
+        note=("The recorded range of ρ at its reference temperature is carried to every row with its relative "
+              "width kept." if ranged else ""),
         rows=tuple(rows))
 
 

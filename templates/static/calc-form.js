@@ -121,6 +121,11 @@ function show(view, outcome) {
       if (value === null) delete entry.cell.dataset.value; else entry.cell.dataset.value = value;
       entry.value = value;
     }
+    // a result computed over the material's recorded range (core.ranges) carries its ends
+    const low = shown && Number.isFinite(result.low) ? String(result.low) : null;
+    const high = shown && Number.isFinite(result.high) ? String(result.high) : null;
+    if (low === null) delete entry.cell.dataset.low; else entry.cell.dataset.low = low;
+    if (high === null) delete entry.cell.dataset.high; else entry.cell.dataset.high = high;
   }
   const problems = general.join(' · ');
   if (view.problemsNode && problems !== view.general) view.problemsNode.textContent = problems;

@@ -67,3 +67,19 @@ def test_bad_input_is_refused_under_its_field(page, served_site, name, field, te
     body = page.text_content("body")
     assert "NaN" not in body and "undefined" not in body
     assert page.errors == []
+
+
+def test_a_ranged_material_shows_its_ends(page, served_site, catalogue):
+    inputs = {"material": "copper-hard-drawn", "length": "100 m", "size": "2.5 mm2", "temperature": "20 °C"}
+    page.goto(f"{served_site}/calculators/resistance/index.html")
+    page.wait_for_selector("html.calc-ready")
+    for field, text in inputs.items():
+        page.fill(f"#in-resistance-{field}", text)
+    page.locator("#in-resistance-material").blur()
+    page.wait_for_timeout(300)
+    expected = calculate("resistance", inputs, catalogue)["results"]["resistance"]
+    cell = page.locator("[data-result=resistance]")
+    assert float(cell.get_attribute("data-low")) == pytest.approx(expected["low"], rel=1e-12, abs=0)
+    assert float(cell.get_attribute("data-high")) == pytest.approx(expected["high"], rel=1e-12, abs=0)
+    assert cell.text_content() == expected["text"] and "(range " in expected["text"]
+    assert page.errors == []

@@ -225,6 +225,20 @@ def new_calculator_cases(catalogue):
                       {"duration": "200 ms", "size": "4/0 AWG", "final": ""}, {"size": "", "final": ""},
                       {"size": "60 x 10 mm", "current": "40 kA"}, {"model": "table", "initial": "20 °C"}):
             add("short_circuit", "", {**fault, "material": material, **extra})
+    # answers with ranges (core.ranges): every ranged material through several calculators
+    for material in ("copper-hard-drawn", "copper-tinned", "aluminium-6101", "fe-cr-al"):
+        for name, extra in (("resistance", {"length": "100 m", "size": "2.5 mm2", "current": "10 A",
+                                            "frequency": "50 Hz"}),
+                            ("skin-effect", {"frequency": "1 MHz", "size": "d 1 mm"}),
+                            ("short-circuit", {"current": "8 kA", "duration": "0.3 s", "size": "95 mm2",
+                                               "initial": "70 °C", "final": ""}),
+                            ("sizing", {"length": "30 m", "current": "16 A", "max_drop": "3 %", "supply": "230 V",
+                                        "conductors": "2", "temperature": "20 °C"}),
+                            ("compare", {"other": "IACS", "size": "35 mm2"})):
+            cases.append(("conductor_atlas.core.calculators", "calculate", [name, {"material": material, **extra},
+                                                                            catalogue]))
+    rg = "conductor_atlas.core.ranges"
+    cases.append((rg, "scaled_record", [catalogue["materials"]["copper-hard-drawn"], 1.01]))
     cf = "conductor_atlas.core.conformance"
     for t in (278.15, 293.15, 296.65, 308.15):
         for beta in (234.5, 228.0):

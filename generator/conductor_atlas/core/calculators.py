@@ -11,6 +11,7 @@ outcome["errors"][field].
 """
 
 from conductor_atlas.core.outcome import add_error, new_outcome
+from conductor_atlas.core.ranges import add_material_range
 from conductor_atlas.core import calc_resistance
 from conductor_atlas.core import calc_resistivity
 from conductor_atlas.core import calc_skin_effect
@@ -26,6 +27,9 @@ from conductor_atlas.core import calc_short_circuit
 CALCULATOR_MODULES = [calc_resistance, calc_sizing, calc_temperature_rise, calc_measured_check,
                       calc_short_circuit, calc_resistivity, calc_compare,
                       calc_skin_effect, calc_carriers, calc_thin_film]
+
+# calculators that carry the material's ρ range themselves (core.ranges does it for the others)
+OWN_RANGES = ["measured-check"]
 
 # name -> module
 CALCULATORS = {}
@@ -49,4 +53,8 @@ def calculate(name, inputs, catalogue):
         add_error(outcome, "calculator", "unknown calculator “" + name + "”; choose one of: "
                   + ", ".join(calculator_names()))
         return outcome
-    return CALCULATORS[name].calculate(inputs, catalogue)
+    module = CALCULATORS[name]
+    outcome = module.calculate(inputs, catalogue)
+    if not (name in OWN_RANGES):
+        add_material_range(outcome, module.calculate, inputs, catalogue)
+    return outcome

@@ -1,0 +1,103 @@
+"""Answers with ranges: a calculator run again at the ends of the material's recorded ρ range.
+
+A material record whose resistivity (or %IACS) has a min/max in the data carries rho_low_ratio and
+rho_high_ratio (conductor_atlas.derive.calc_record: the ends as fractions of the recorded value).
+``add_material_range`` runs the same calculator on a copy of the record with its whole ρ(T) scaled
+to each end (the reference value, the sourced table, the Bloch–Grüneisen fit; a mean free path
+taken from ρ·ℓ scales inversely) and gives each result that moves a "low" and a "high" beside its
+"value", and its text the range. The range is taken to keep its relative width at every
+temperature (the data give it at one temperature only); the outcome says so.
+"""
+
+from conductor_atlas.core.numfmt import format_number
+from conductor_atlas.core.outcome import add_warning, has_errors
+
+RELATIVE_EPSILON = 1e-12  # a result that moves less than this between the runs has no range
+
+
+def has_range(m):
+    """True when the material record carries a recorded ρ range."""
+    return m["rho_low_ratio"] > 0 and m["rho_high_ratio"] > 0
+
+
+def scaled_record(m, ratio):
+    """A copy of material record m with ρ(T) multiplied by ``ratio`` everywhere, and no range of its own."""
+    out = {}
+    for key in m.keys():
+        out[key] = m[key]
+    out["rho_ref"] = m["rho_ref"] * ratio
+    table = []
+    for rho in m["table_rho"]:
+        table.append(rho * ratio)
+    out["table_rho"] = table
+    out["bg_rho0"] = m["bg_rho0"] * ratio
+    out["bg_a"] = m["bg_a"] * ratio
+    if m["mean_free_path_how"] == "rho-lambda":
+        out["mean_free_path"] = m["mean_free_path"] / ratio
+    out["rho_low_ratio"] = 0.0
+    out["rho_high_ratio"] = 0.0
+    return out
+
+
+def catalogue_with(catalogue, record):
+    """A shallow copy of the catalogue whose record of record["id"] is ``record``."""
+    materials = {}
+    for key in catalogue["materials"].keys():
+        materials[key] = catalogue["materials"][key]
+    materials[record["id"]] = record
+    out = {}
+    for key in catalogue.keys():
+        out[key] = catalogue[key]
+    out["materials"] = materials
+    return out
+
+
+def differs(a, b):
+    scale = abs(a)
+    if abs(b) > scale:
+        scale = abs(b)
+    return abs(a - b) > RELATIVE_EPSILON * scale
+
+
+def add_material_range(outcome, calculate, inputs, catalogue):
+    """Give the outcome's results the low and high of the material's ρ range (see the module docstring).
+
+    ``calculate(inputs, catalogue)`` is the calculator that made ``outcome``.
+    """
+    if has_errors(outcome) or len(outcome["material"]) == 0:
+        return
+    if not (outcome["material"] in catalogue["materials"]):
+        return
+    m = catalogue["materials"][outcome["material"]]
+    if not has_range(m):
+        return
+    low = calculate(inputs, catalogue_with(catalogue, scaled_record(m, m["rho_low_ratio"])))
+    high = calculate(inputs, catalogue_with(catalogue, scaled_record(m, m["rho_high_ratio"])))
+    if has_errors(low) or has_errors(high):
+        add_warning(outcome, "the recorded range of ρ for " + m["name"] + " could not be carried through: at one "
+                             "of its ends the calculation has no answer")
+        return
+    moved = False
+    for key in outcome["results"].keys():
+        if not (key in low["results"] and key in high["results"]):
+            continue
+        entry = outcome["results"][key]
+        ends = [entry, low["results"][key], high["results"][key]]
+        lo = ends[0]
+        hi = ends[0]
+        for end in ends:
+            if end["value"] < lo["value"]:
+                lo = end
+            if end["value"] > hi["value"]:
+                hi = end
+        if not (differs(lo["value"], entry["value"]) or differs(hi["value"], entry["value"])):
+            continue
+        moved = True
+        entry["low"] = lo["value"]
+        entry["high"] = hi["value"]
+        entry["text"] = entry["text"] + " (range " + lo["text"] + " – " + hi["text"] + ")"
+    if moved:
+        add_warning(outcome, "ρ of " + m["name"] + " has a recorded range (" + format_number(m["rho_low_ratio"], 4)
+                    + " to " + format_number(m["rho_high_ratio"], 4) + " × the nominal value): each result that "
+                    "depends on it shows low – high, computed at the range's ends, which are taken to keep their "
+                    "relative width at every temperature")

@@ -1,0 +1,118 @@
+"""Answers with ranges: a material's recorded ρ min/max carried through the calculators.
+
+The ranges on record (data/materials): copper-hard-drawn 96.16-97.16 %IACS (ASTM B1),
+copper-tinned 97.1-98.2 %IACS (from IEC 60228's tables), aluminium-6101 55.0-59.5 %IACS (ASTM B317),
+fe-cr-al 1.37-1.44 µΩ·m (DIN 17470). Checks: each end against the physics (R ∝ ρ, δ ∝ √ρ) with
+the ends read from the data file, and against the same calculator run on a record moved to the end.
+"""
+
+import math
+
+import pytest
+
+from conductor_atlas.build import data_folders
+from conductor_atlas.core import resistance as dc
+from conductor_atlas.core.calculators import calculate
+from conductor_atlas.load import load_dataset
+from tests.support.differential_cases import shipped_catalogue
+
+RANGED = ["copper-hard-drawn", "copper-tinned", "aluminium-6101", "fe-cr-al"]
+
+
+@pytest.fixture(scope="module")
+def data_ends():
+    """(ρ_min/ρ, ρ_max/ρ) of each ranged material, straight from its file's min and max."""
+    dataset = load_dataset(data_folders())
+    out = {}
+    for mid in RANGED:
+        m = dataset.by_id(mid)
+        v = m.get("resistivity")
+        if v is not None:
+            out[mid] = (v.low / v.si, v.high / v.si)
+        else:
+            iacs = m.get("conductivity_iacs")  # %IACS turns over: its max is the lowest ρ
+            out[mid] = (iacs.si / iacs.high, iacs.si / iacs.low)
+    return out
+
+
+@pytest.mark.parametrize("mid", RANGED)
+def test_resistance_scales_with_the_ends(mid, data_ends):
+    # R = ρ(T) L / A with ρ(T) scaled as a whole: R_end = R · ρ_end/ρ exactly (1e-12: rounding).
+    # At 20 °C: aluminium-6101 has no temperature model on record.
+    out = calculate("resistance", {"material": mid, "length": "100 m", "size": "2.5 mm2", "temperature": "20 °C"},
+                    shipped_catalogue())
+    r = out["results"]["resistance"]
+    lo, hi = data_ends[mid]
+    assert r["low"] == pytest.approx(r["value"] * lo, rel=1e-12)
+    assert r["high"] == pytest.approx(r["value"] * hi, rel=1e-12)
+    assert "(range " in r["text"]
+    g = out["results"]["conductivity"]  # σ = 1/ρ: the low end comes from the high ρ
+    assert g["low"] == pytest.approx(g["value"] / hi, rel=1e-12)
+    assert "area" not in out["results"] or "low" not in out["results"]["area"]
+    assert any("recorded range" in w for w in out["warnings"])
+
+
+@pytest.mark.parametrize("mid", ["copper-hard-drawn", "aluminium-6101"])
+def test_skin_depth_scales_with_root_rho(mid, data_ends):
+    # δ = √(ρ / (π f μ0 μr)) ∝ √ρ (any textbook; e.g. Ramo, Whinnery & Van Duzer eq. 4.5-8)
+    out = calculate("skin-effect", {"material": mid, "frequency": "50 Hz"}, shipped_catalogue())
+    d = out["results"]["skin_depth"]
+    lo, hi = data_ends[mid]
+    assert d["low"] == pytest.approx(d["value"] * math.sqrt(lo), rel=1e-12)
+    assert d["high"] == pytest.approx(d["value"] * math.sqrt(hi), rel=1e-12)
+
+
+@pytest.mark.parametrize("name, inputs", [
+    ("resistance", {"length": "30 m", "size": "4/0 AWG", "temperature": "90 °C", "current": "200 A"}),
+    ("short-circuit", {"current": "8 kA", "duration": "0.3 s", "size": "95 mm2", "initial": "70 °C", "final": ""}),
+    ("sizing", {"length": "30 m", "current": "16 A", "max_drop": "3 %", "supply": "230 V", "conductors": "2"}),
+])
+def test_ends_equal_the_calculator_on_a_record_moved_to_each_end(name, inputs, data_ends):
+    cat = shipped_catalogue()
+    mid = "copper-hard-drawn"
+    out = calculate(name, {**inputs, "material": mid}, cat)
+    assert out["errors"] == {}
+    rec = cat["materials"][mid]
+    for end, ratio in zip(("low", "high"), data_ends[mid]):
+        moved = dict(rec, rho_ref=rec["rho_ref"] * ratio, rho_low_ratio=0.0, rho_high_ratio=0.0)
+        plain = calculate(name, {**inputs, "material": mid}, dict(cat, materials={**cat["materials"], mid: moved}))
+        assert "low" not in str(plain["results"].get("resistance", {}))  # no range without a recorded one
+        ranged = [k for k, v in out["results"].items() if "low" in v]
+        assert ranged, "some result must carry the range"
+        for key in ranged:
+            ends = sorted([out["results"][key]["low"], out["results"][key]["high"]])
+            assert any(e == pytest.approx(plain["results"][key]["value"], rel=1e-12) for e in ends), key
+            print(name, key, out["results"][key]["text"])
+
+
+def test_materials_without_a_range_have_no_ends():
+    out = calculate("resistance", {"material": "IACS", "length": "100 m", "size": "2.5 mm2"}, shipped_catalogue())
+    assert all("low" not in v and "high" not in v for v in out["results"].values())
+    assert not any("recorded range" in w for w in out["warnings"])
+
+
+def test_short_circuit_final_temperature_range_brackets_nominal():
+    # more ρ, more heat: the high end of ρ gives the higher final temperature
+    out = calculate("short-circuit", {"material": "copper-hard-drawn", "current": "12 kA", "duration": "0.5 s",
+                                      "size": "95 mm2", "initial": "90 °C", "final": ""}, shipped_catalogue())
+    t = out["results"]["final_temperature"]
+    assert t["low"] < t["value"] < t["high"]
+    iacs_high = dc.resistivity_from_iacs(96.16) / dc.resistivity_from_iacs(97.0)
+    assert iacs_high == pytest.approx(97.0 / 96.16, rel=1e-12)
+
+
+def test_resistivity_table_carries_the_range_like_the_calculator():
+    """The material page's ρ(T) table: its low/high columns equal the resistivity calculator's ends."""
+    from conductor_atlas.derive import derive_material
+    dataset = load_dataset(data_folders())
+    view = derive_material(dataset.by_id("copper-hard-drawn"))
+    table = next(t for t in view.tables if t.id == "resistivity-temperature")
+    keys = [c.key for c in table.columns]
+    assert keys[2:5] == ["resistivity", "resistivity_low", "resistivity_high"]
+    row = next(r for r in table.rows if abs(r.values[0] - 90.0) < 1e-9)
+    out = calculate("resistivity", {"material": "copper-hard-drawn", "temperature": "90 °C"}, shipped_catalogue())
+    rho = out["results"]["resistivity"]
+    assert row.values[3] == pytest.approx(rho["low"] * 1e8, rel=1e-12)
+    assert row.values[4] == pytest.approx(rho["high"] * 1e8, rel=1e-12)
+    plain = derive_material(dataset.by_id("copper-annealed"))
+    assert "resistivity_low" not in [c.key for c in next(t for t in plain.tables if t.id == "resistivity-temperature").columns]
