@@ -61,7 +61,7 @@ def test_every_listed_outlier_is_still_seen(outcomes):
 
 
 def test_every_element_property_that_a_dataset_has_is_compared(outcomes):
-    """Each pure metal's density, melting point, thermal conductivity, molar mass and resistivity is
+    """Each pure metal's density, melting point, thermal conductivity, molar mass, resistivity and specific heat is
     compared with at least one dataset, and with two or more except where only one ships it."""
     compared = {(o.material, o.name): o for o in outcomes}
     from conductor_atlas.build import data_folders
@@ -72,7 +72,7 @@ def test_every_element_property_that_a_dataset_has_is_compared(outcomes):
     for m in dataset.materials:
         if crosscheck.element_symbol(m, symbols) is None:
             continue
-        for name in ("density", "melting_point", "thermal_conductivity", "molar_mass", "resistivity"):
+        for name in ("density", "melting_point", "thermal_conductivity", "molar_mass", "resistivity", "specific_heat"):
             if m.get(name) is not None and (m.id, name) not in compared:
                 missing.append(f"{m.id} {name}")
     assert missing == []

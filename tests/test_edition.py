@@ -44,6 +44,8 @@ def test_every_page_csv_and_table_json_names_the_edition(built_site):
     rows = list(csv.DictReader(io.StringIO(table.with_suffix(".csv").read_text(encoding="utf-8"))))
     assert {r["data_edition"] for r in rows} == {edition}
     assert json.loads(table.with_suffix(".json").read_text(encoding="utf-8"))["data_edition"] == edition
+    listing = json.loads((built_site / "materials.json").read_text(encoding="utf-8"))
+    assert listing["data_edition"] == edition and len(listing["materials"]) >= 54
 
 
 def test_changes_are_added_changed_and_removed():

@@ -296,7 +296,8 @@ class Renderer:
         out["references/index.html"] = self.page("references.html", "references/index.html",
                                                  sources=list(dataset.sources.values()), title="References")
         out["materials.json"] = (json.dumps(
-            [{"id": v.material.id, "name": v.material.name, "class": v.material.klass,
-              "aliases": list(v.material.aliases), "rho_20": v.rho_20, "iacs_20": v.iacs_20}
-             for v in views], ensure_ascii=False, indent=1) + "\n").encode("utf-8")
+            {"data_edition": EDITION_TOKEN,
+             "materials": [{"id": v.material.id, "name": v.material.name, "class": v.material.klass,
+                            "aliases": list(v.material.aliases), "rho_20": v.rho_20, "iacs_20": v.iacs_20}
+                           for v in views]}, ensure_ascii=False, indent=1) + "\n").encode("utf-8")
         return out

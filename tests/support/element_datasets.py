@@ -14,13 +14,15 @@ Every reader returns ``{symbol: {property: SI float}}`` with the property names 
   [W/(m·K)], ``elements.atomic_weight`` [Da, CIAAW/IUPAC], ``phasetransitions.melting_point`` [K].
 - pymatgen-core 2026.10.16, ``pymatgen/core/periodic_table.json.gz``: "Electrical resistivity"
   [Ω·m, room temperature: mixes 0 °C and 20 °C values], "Density of solid" [kg/m³],
-  "Melting point" [K], "Thermal conductivity" [W/(m·K)], "Atomic mass" [Da].
+  "Melting point" [K], "Thermal conductivity" [W/(m·K)], "Atomic mass" [Da]; mendeleev's
+  ``elements.specific_heat_capacity`` [J/(g·K)] too.
 - periodictable 2.1.0: ``periodictable/density.py`` (``element_densities``, g/cm³, CRC-based,
   room temperature unless a caveat says otherwise) and ``periodictable/mass.py`` (the IUPAC
   standard atomic weights table, text), both read as text.
 - chemicals 1.5.2: ``chemicals/Density/CRC Solid Inorganic Constant Densities.tsv`` (molar volume
   Vm [m³/mol] of solids by CAS number; density = M / Vm) and ``chemicals/Misc/Element data.csv``
-  (atomic mass, an older IUPAC edition).
+  (atomic mass, an older IUPAC edition), and ``chemicals/Heat Capacity/CRC Standard Thermodynamic
+  Properties of Chemical Substances.tsv`` (Cp of the solid at 298.15 K, J/(mol·K); c = Cp / M).
 """
 
 from __future__ import annotations
@@ -51,7 +53,7 @@ DESCRIPTIONS = {
     "mendeleev": "the SQLite element database the mendeleev package ships (mendeleev/elements.db; values after the CRC Handbook, 95th ed.)",
     "pymatgen-core": "the element data file pymatgen ships (pymatgen/core/periodic_table.json.gz)",
     "periodictable": "the density and atomic-weight tables the periodictable package ships (periodictable/density.py, mass.py)",
-    "chemicals": "the CRC solid molar volumes and element table the chemicals package ships (chemicals/Density, chemicals/Misc)",
+    "chemicals": "the CRC solid molar volumes, heat capacities and element table the chemicals package ships (chemicals/Density, chemicals/Heat Capacity, chemicals/Misc)",
 }
 
 DA = 1e-3  # g/mol -> kg/mol
@@ -100,9 +102,9 @@ def mendeleev() -> dict[str, dict[str, float]]:
     out: dict[str, dict[str, float]] = {}
     with sqlite3.connect(f"file:{db}?mode=ro", uri=True) as conn:
         rows = conn.execute("select atomic_number, symbol, density, thermal_conductivity, "
-                            "atomic_weight from elements").fetchall()
+                            "atomic_weight, specific_heat_capacity from elements").fetchall()
         number_to_symbol = {}
-        for number, symbol, density, conductivity, weight in rows:
+        for number, symbol, density, conductivity, weight, heat in rows:
             number_to_symbol[number] = symbol
             record = out.setdefault(symbol, {})
             if density is not None:
@@ -111,6 +113,8 @@ def mendeleev() -> dict[str, dict[str, float]]:
                 record["thermal_conductivity"] = conductivity
             if weight is not None:
                 record["molar_mass"] = weight * DA
+            if heat is not None:  # J/(g·K) at 20 °C
+                record["specific_heat"] = heat * 1e3
         # one row per allotrope or transition; the element's melting point is the row with
         # neither flag set (a sublimation point or a solid-solid transition is not a melting point)
         for number, melting in conn.execute(
@@ -191,6 +195,16 @@ def chemicals() -> dict[str, dict[str, float]]:
             # the table's molar volumes were made with its own atomic masses: M / Vm gives
             # back the CRC density
             out[symbol]["density"] = out[symbol]["molar_mass"] / float(row["Vm"])
+    # CRC "standard thermodynamic properties": Cp of the solid at 298.15 K [J/(mol·K)]
+    with open(folder / "Heat Capacity" / "CRC Standard Thermodynamic Properties of Chemical Substances.tsv",
+              encoding="utf-8") as handle:
+        for row in csv.DictReader(handle, delimiter="\t"):
+            symbol = cas_to_symbol.get(row["CAS"])
+            if "(" in row["Chemical"]:  # "Tin (gray)": another allotrope than the metal as used
+                continue
+            if symbol is None or not row["Cps"] or "molar_mass" not in out.get(symbol, {}):
+                continue
+            out[symbol]["specific_heat"] = float(row["Cps"]) / out[symbol]["molar_mass"]
     return out
 
 
