@@ -25,7 +25,8 @@ from pathlib import Path
 
 from conductor_atlas import __version__
 from conductor_atlas.build import data_folders
-from conductor_atlas.core.search import prepare_index, search
+from conductor_atlas.core.search import search
+from conductor_atlas.core.search_prepare import prepare_index
 from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import TEMPLATES_DIR

@@ -1,6 +1,6 @@
 """search-index.json: one entry per material, table and page; every link resolves in the built site.
 
-The file holds the index already prepared for search (core.search.prepare_index), read back here
+The file holds the index already prepared for search (core.search_prepare.prepare_index), read back here
 with ``shipped_entries``; searching the parsed file must give what searching the entries gives.
 """
 
@@ -17,7 +17,8 @@ from conductor_atlas.build import data_folders
 from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import DATA_DIR
-from conductor_atlas.core.search import INDEX_FORMAT, search, search_entries
+from conductor_atlas.core.search import search, search_entries
+from conductor_atlas.core.search_format import INDEX_FORMAT
 from conductor_atlas.search_index import build_index, index_json, page_title, shipped_entries, shipped_index
 
 UREG = pint.UnitRegistry()

@@ -5,7 +5,7 @@ as the property card shows it), one per derived table, and one per other page of
 (calculators, compare, references ...), read from the rendered pages' <title>. When the site has
 no calculator pages, the calculator embedded in each material page gets an entry instead.
 
-search-index.json holds these entries already prepared by ``core.search.prepare_index`` (lists of
+search-index.json holds these entries already prepared by ``core.search_prepare.prepare_index`` (lists of
 words, postings and records, no per-entry objects), so the browser searches the parsed file as it is.
 search-index.js is the same JSON as a classic script that hands it to the page
 (``self.conductorAtlasSearchIndex = …``): a page opened from a file cannot fetch, but it can load a
@@ -22,7 +22,8 @@ import re
 from typing import Mapping, Sequence
 
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.search import E_ALIASES, E_ID, E_KIND, E_MATERIAL, E_TITLE, E_URL, prepare_index
+from conductor_atlas.core.search_format import E_ALIASES, E_ID, E_KIND, E_MATERIAL, E_TITLE, E_URL
+from conductor_atlas.core.search_prepare import prepare_index
 from conductor_atlas.derive import MaterialView
 from conductor_atlas.model import DataSet
 from conductor_atlas.render import CARD_UNITS, SITE_NAME

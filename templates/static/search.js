@@ -2,10 +2,11 @@
 // The matching, the filters and their unit parsing live in the core (conductor_atlas.core.search);
 // this file only loads the index (search-index.json, or search-index.js from a file), passes typed
 // text to the core and builds the list.
-// The build writes the index already prepared (core.search.prepare_index: lists only below the top
+// The build writes the index already prepared (core.search_prepare.prepare_index: lists only below the top
 // level), so the parsed file is searched as it is and each keystroke is searched synchronously.
 // Typed text and index text reach the page through textContent only, never as markup.
-import {INDEX_FORMAT, search} from '../js/conductor_atlas.core.search.js';
+import {search} from '../js/conductor_atlas.core.search.js';
+import {INDEX_FORMAT} from '../js/conductor_atlas.core.search_format.js';
 import {dict} from '../js/org.transcrypt.__runtime__.js';
 
 // The site root: every search form carries it (data-root, relative to the page) from the build.

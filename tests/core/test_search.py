@@ -11,8 +11,10 @@ import pytest
 
 from conductor_atlas.build import data_folders
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.search import (compact, fold_text, osa_distance, parse_filter, prepare_index, search,
-                                         split_clauses, token_match, tokens, typo_budget)
+from conductor_atlas.core.search import search
+from conductor_atlas.core.search_filters import parse_filter, split_clauses
+from conductor_atlas.core.search_prepare import prepare_index
+from conductor_atlas.core.search_text import compact, fold_text, osa_distance, token_match, tokens, typo_budget
 from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
 from conductor_atlas.search_index import build_index

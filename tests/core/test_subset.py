@@ -4,7 +4,7 @@ from pathlib import Path
 
 import pytest
 
-from tests.support.subset import violations
+from tests.support.subset import imported_keyword_calls, violations
 
 CORE = Path(__file__).resolve().parents[2] / "generator" / "conductor_atlas" / "core"
 
@@ -14,6 +14,20 @@ def test_core_uses_only_the_transcrypt_subset():
     for path in sorted(CORE.glob("*.py")):
         found.extend(violations(path.read_text(encoding="utf-8"), f"{path.parent.name}/{path.name}"))
     assert found == [], "constructs Transcrypt cannot carry:\n" + "\n".join(found)
+
+
+def test_no_keyword_call_into_another_modules_nokwargs_region():
+    sources = {path.name: path.read_text(encoding="utf-8") for path in sorted(CORE.glob("*.py"))}
+    found = imported_keyword_calls(sources)
+    assert found == [], "\n".join(found)
+
+
+def test_checker_flags_keywords_across_modules():
+    fast = "# __pragma__ ('nokwargs')\ndef fast(a, b):\n    return a + b\n# __pragma__ ('kwargs')\n"
+    caller = "from conductor_atlas.core.fast_words import fast\n\nx = fast(1, b=2)\n"
+    found = imported_keyword_calls({"fast_words.py": fast, "caller.py": caller})
+    assert found == ["caller.py:3: keyword argument to fast, defined in a nokwargs region of another module: "
+                     "Transcrypt ignores it there"]
 
 
 @pytest.mark.parametrize("snippet, words", [

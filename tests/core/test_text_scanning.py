@@ -14,7 +14,7 @@ import re
 import pytest
 from hypothesis import given, settings, strategies as st
 
-from conductor_atlas.core import geometry, lookup, search, units
+from conductor_atlas.core import geometry, lookup, search_text, units
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
 
@@ -286,8 +286,8 @@ def test_sizes_read_as_with_the_patterns():
 # --- search ------------------------------------------------------------------------------------------
 
 def test_is_ascii_is_the_non_ascii_pattern_finding_nothing():
-    assert mismatches(search.is_ascii, lambda t: NON_ASCII.search(t) is None, SIZE_TEXTS) == []
-    assert [c for c in range(0x10000) if search.is_ascii(chr(c)) != (c < 128)] == []
+    assert mismatches(search_text.is_ascii, lambda t: NON_ASCII.search(t) is None, SIZE_TEXTS) == []
+    assert [c for c in range(0x10000) if search_text.is_ascii(chr(c)) != (c < 128)] == []
 
 
 # --- both runtimes -----------------------------------------------------------------------------------
@@ -295,7 +295,7 @@ def test_is_ascii_is_the_non_ascii_pattern_finding_nothing():
 def scan_calls():
     """[module, function, args] for each scan on the edge cases and 1,500 generated texts (raw:
     line breaks and controls included, except for the one-line geometry scans)."""
-    u, g, s = "conductor_atlas.core.units", "conductor_atlas.core.geometry", "conductor_atlas.core.search"
+    u, g, s = "conductor_atlas.core.units", "conductor_atlas.core.geometry", "conductor_atlas.core.search_text"
     calls = []
     for text in EDGE_TEXTS + generated(SIZE_PIECES, 1500, 3):
         for function in ("split_number", "without_controls", "portable_text", "joined_spaces"):

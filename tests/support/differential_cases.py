@@ -342,20 +342,28 @@ def search_cases():
     keep = ("copper/", "aluminium/", "nickel/", "tungsten/", "aluminium-1350/")
     entries = [e for e in everything if e["kind"] != "table" or e["id"].startswith(keep)]
     module = "conductor_atlas.core.search"
-    cases = [(module, "prepare_index", [entries])]
+    matching = "conductor_atlas.core.search_text"
+    cases = [("conductor_atlas.core.search_prepare", "prepare_index", [entries])]
     for query in SEARCH_QUERIES:
         cases.append((module, "search_entries", [entries, query, 12]))
     for text in ["Crème Brûlée", "ÆØÅ ß", "µΩ·cm²", "Ωhm", "ρ(T) α", "Cu-Ni 55/45", "e\u0301te\u0301", "CCA 10%", ""]:
-        cases.append((module, "fold_text", [text]))
-        cases.append((module, "tokens", [text]))
-        cases.append((module, "compact", [text]))
+        cases.append((matching, "fold_text", [text]))
+        cases.append((matching, "tokens", [text]))
+        cases.append((matching, "compact", [text]))
     for a, b in [("cooper", "copper"), ("nickle", "nickel"), ("aluminum", "aluminium"), ("ab", "ba"), ("", "abc"),
                  ("kitten", "sitting"), ("tungsten", "tunsgten"), ("abc", "abc")]:
         for limit in (0, 1, 2, 3):
-            cases.append((module, "osa_distance", [a, b, limit]))
-        cases.append((module, "token_match", [a, b]))
+            cases.append((matching, "osa_distance", [a, b, limit]))
+        cases.append((matching, "token_match", [a, b]))
     for query in ["iacs > 90; density < 3, copper", "rho < 2,5 uohm*cm and iacs > 1", "a and b", ",;,"]:
-        cases.append((module, "split_clauses", [query]))
+        cases.append(("conductor_atlas.core.search_filters", "split_clauses", [query]))
+    for word in ["copper", "c17200", "", "zz9"]:
+        cases.append(("conductor_atlas.core.search_format", "letter_mask", [word]))
+    hits = [[2, 1.5, 0, "Copper", "copper", 0, -1], [2, 1.5, 1, "Copper", "copper-table", 3, -1],
+            [1, 9.0, 0, "Cobalt", "cobalt", 1, -1], [2, 1.5, 0, "Copper", "copper", 2, 4]]
+    cases.append(("conductor_atlas.core.search_rank", "merge_sort", [hits]))
+    for a, b in [(hits[0], hits[1]), (hits[1], hits[0]), (hits[0], hits[3]), (hits[2], hits[0])]:
+        cases.append(("conductor_atlas.core.search_rank", "comes_before", [a, b]))
     return cases
 
 

@@ -230,6 +230,34 @@ def nokwargs_violations(tree: ast.AST, source: str, filename: str) -> list[str]:
     return found
 
 
+def nokwargs_names(source: str) -> set[str]:
+    """The functions a module defines in its nokwargs regions."""
+    region = nokwargs_lines(source)
+    return {node.name for node in ast.walk(ast.parse(source))
+            if isinstance(node, ast.FunctionDef) and node.lineno in region}
+
+
+def imported_keyword_calls(sources: dict[str, str]) -> list[str]:
+    """A function defined in one module's nokwargs region and called with a keyword from another
+    module (``sources``: file name -> text of the flat core). Each module's own calls are checked by
+    nokwargs_violations; this catches the calls across modules, which a split module has."""
+    by_module = {name[:-3]: nokwargs_names(text) for name, text in sources.items()}
+    found = []
+    for filename, text in sources.items():
+        tree = ast.parse(text)
+        imported = set()
+        for node in tree.body:
+            if isinstance(node, ast.ImportFrom) and (node.module or "").startswith(CORE_PREFIX):
+                fast = by_module.get(node.module.rsplit(".", 1)[1], set())
+                imported |= {alias.asname or alias.name for alias in node.names if alias.name in fast}
+        for node in ast.walk(tree):
+            if (isinstance(node, ast.Call) and isinstance(node.func, ast.Name) and node.func.id in imported
+                    and node.keywords):
+                found.append(f"{filename}:{node.lineno}: keyword argument to {node.func.id}, defined in a nokwargs "
+                             "region of another module: Transcrypt ignores it there")
+    return found
+
+
 def violations(source: str, filename: str) -> list[str]:
     checker = SubsetChecker(filename)
     tree = ast.parse(source, filename=filename)
