@@ -12,6 +12,9 @@ regex ``\\s``, ``.`` and ``strip`` sets differ).
 tests/core/test_text_scanning.py checks each scan against the pattern it replaced.
 """
 
+import math
+
+from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 
 # kind -> SI unit symbol shown in messages and results
@@ -34,6 +37,9 @@ SI_UNIT = {
     "time": "s",
 }
 
+MIL = 2.54e-5  # [m] 0.001 in; the inch is 0.0254 m exactly (international yard and pound, 1959)
+CIRCULAR_MIL = math.pi / 4.0 * MIL * MIL  # [m²] the area of a circle one mil across
+
 # normalised spelling -> [kind, factor, offset]; offset only for temperatures
 UNITS = {
     # length
@@ -45,7 +51,7 @@ UNITS = {
     "nm": ["length", 1e-9, 0.0],
     "ft": ["length", 0.3048, 0.0],
     "in": ["length", 0.0254, 0.0],
-    "mil": ["length", 2.54e-5, 0.0],
+    "mil": ["length", MIL, 0.0],
     # area
     "m2": ["area", 1.0, 0.0],
     "cm2": ["area", 1e-4, 0.0],
@@ -53,16 +59,15 @@ UNITS = {
     "um2": ["area", 1e-12, 0.0],
     "in2": ["area", 0.00064516, 0.0],
     "ft2": ["area", 0.09290304, 0.0],
-    # 1 circular mil = (pi/4) * (1 mil)^2 = (pi/4) * 6.4516e-10 m^2
-    "cmil": ["area", 5.067074790974977e-10, 0.0],
-    "kcmil": ["area", 5.067074790974977e-07, 0.0],
-    "mcm": ["area", 5.067074790974977e-07, 0.0],
+    "cmil": ["area", CIRCULAR_MIL, 0.0],
+    "kcmil": ["area", 1000.0 * CIRCULAR_MIL, 0.0],
+    "mcm": ["area", 1000.0 * CIRCULAR_MIL, 0.0],
     # temperature
     "k": ["temperature", 1.0, 0.0],
-    "degc": ["temperature", 1.0, 273.15],
-    "c": ["temperature", 1.0, 273.15],
-    "degf": ["temperature", 5.0 / 9.0, 273.15 - 32.0 * 5.0 / 9.0],
-    "f": ["temperature", 5.0 / 9.0, 273.15 - 32.0 * 5.0 / 9.0],
+    "degc": ["temperature", 1.0, ZERO_CELSIUS],
+    "c": ["temperature", 1.0, ZERO_CELSIUS],
+    "degf": ["temperature", 5.0 / 9.0, ZERO_CELSIUS - 32.0 * 5.0 / 9.0],  # 32 °F is 0 °C; a °F step is 5/9 K
+    "f": ["temperature", 5.0 / 9.0, ZERO_CELSIUS - 32.0 * 5.0 / 9.0],
     # current
     "a": ["current", 1.0, 0.0],
     "ma": ["current", 0.001, 0.0],
