@@ -10,6 +10,8 @@ import sys
 import pytest
 
 from conductor_atlas.core.calculators import calculate
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.lookup import find_material
 
 
 def run_cli(*args):
@@ -154,3 +156,61 @@ def test_6101_busbar_at_75_degrees_answers(catalogue):
     # for 6101 tempers are 0.0035-0.0038 /K (from memory of aluminium conductor handbooks): ratio over 55 K
     ratio = outcome["results"]["resistivity"]["value"] / 3.1348e-8
     assert 1 + 0.0035 * 55 < ratio < 1 + 0.0039 * 55
+
+
+# --- 3. designations of open standards; word order and class words -------------------------------------
+@pytest.mark.parametrize("typed, material_id", [
+    ("C11000", "copper-annealed"), ("ETP", "copper-annealed"), ("Cu-ETP", "copper-annealed"),
+    ("CW004A", "copper-annealed"), ("OF", "copper-oxygen-free"), ("Cu-OF", "copper-oxygen-free"),
+    ("C10100", "copper-oxygen-free"), ("C10200", "copper-oxygen-free"), ("A91350", "aluminium-1350"),
+    ("EC", "aluminium-1350"), ("aluminium 1350", "aluminium-1350"), ("1350 aluminium", "aluminium-1350"),
+    ("AL 1350", "aluminium-1350"), ("6101-T6", "aluminium-6101"), ("copper annealed", "copper-annealed"),
+])
+def test_designations_and_word_order_resolve(catalogue, typed, material_id):
+    assert find_material(catalogue, typed)["id"] == material_id
+
+
+def test_designations_carry_their_source():
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.load import load_dataset
+    dataset = load_dataset(data_folders())
+    annealed = next(m for m in dataset.materials if m.id == "copper-annealed")
+    assert ("C11000", "astm-b224") in [(a, s) for a, s, _ in annealed.alias_sources]
+    assert "astm-b224" in annealed.source_keys() and "astm-b224" in dataset.sources
+
+
+def test_suggestions_carry_a_description(catalogue):
+    with pytest.raises(CoreError) as caught:
+        find_material(catalogue, "coper")
+    assert "nearest: copper (Standard annealed copper), Co (Cobalt (high purity))" in caught.value.message
+
+
+# --- issue 18 item 1: an added folder can never take over a shipped id, alias or name -----------------
+OVERLAY = '''schema = 1
+id = "aaa-overlay"
+name = "{name}"
+class = "copper-alloy"
+aliases = [{alias}]
+summary = "Overlay test material (invented, for the clash check only)."
+[properties.resistivity]
+value = "2.0e-7 ohm*m"
+temperature = "20 degC"
+source = "demo-invented"
+locator = "test"
+'''
+
+
+@pytest.mark.parametrize("name, alias", [
+    ("Overlay alloy", '"IACS\\U0001F600"'),                 # an astral character the look-up drops
+    ("Overlay alloy", '"annealed  EC aluminium"'),          # two spaces
+    ("Overlay alloy", '"Standard annealed copper"'),        # a shipped material's name
+    ("Overlay alloy", '"ＩＡＣＳ"'),                           # full-width letters
+    ("Overlay alloy", '"I\\u200bACS"'),                      # a zero-width space
+    ("Standard annealed copper", '"something else"'),       # the name itself
+])
+def test_an_overlay_cannot_take_over_a_shipped_name(tmp_path, name, alias):
+    (tmp_path / "aaa.toml").write_text(OVERLAY.format(name=name, alias=alias), encoding="utf-8")
+    result = run_cli("check", "--data", str(tmp_path))
+    assert result.returncode == 1, result.stdout
+    assert "aaa.toml: " in result.stderr and "clashes with the" in result.stderr
+    assert "Traceback" not in result.stderr

@@ -12,7 +12,8 @@ from dataclasses import dataclass
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.carriers import electron_density
-from conductor_atlas.core.lookup import fold
+from conductor_atlas.core.lookup import word_order_key
+from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
 from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
@@ -225,7 +226,8 @@ def model_sources(m: Material) -> list[str]:
 def calc_catalogue(records: list[dict], materials: list[Material], limits: tuple = ()) -> dict:
     """{"materials": {id: record}, "aliases": {folded alias or name: id}, "display_aliases": {...},
     "limits": [conductor-standard tables, standards.limits_record]}."""
-    catalogue = {"materials": {}, "aliases": {}, "display_aliases": {}, "limits": limits_record(limits)}
+    catalogue = {"materials": {}, "aliases": {}, "display_aliases": {}, "word_keys": {},
+                 "limits": limits_record(limits)}
     taken = {r["id"] for r in records}
     by_id = {m.id: m for m in materials}
     for record in records:
@@ -233,11 +235,16 @@ def calc_catalogue(records: list[dict], materials: list[Material], limits: tuple
     for record in records:
         m = by_id[record["id"]]
         for label in list(m.aliases) + [m.name]:
-            key = fold(label)
+            key = name_key(label)
             if key in taken or key in catalogue["aliases"]:
                 continue
             catalogue["aliases"][key] = m.id
             catalogue["display_aliases"][key] = label
+    # every id, alias and name by its words in sorted order (lookup.loose_match): the first one wins
+    for record in records:
+        m = by_id[record["id"]]
+        for label in [m.id] + list(m.aliases) + [m.name]:
+            catalogue["word_keys"].setdefault(word_order_key(name_key(label)), m.id)
     return catalogue
 
 

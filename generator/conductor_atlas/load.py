@@ -19,6 +19,7 @@ from types import MappingProxyType
 
 import pint
 
+from conductor_atlas.core.text_match import name_key
 from conductor_atlas.errors import DataError
 from conductor_atlas.model import DataSet, Material, ResistivityTable, Source, Value
 from conductor_atlas.standards import read_standard, standard_files
@@ -371,8 +372,23 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
     if isinstance(klass, str) and klass not in CLASSES:
         problems.add(f"{where}: class", f"expected one of {', '.join(sorted(CLASSES))}, found \"{klass}\"")
     aliases = data.get("aliases", [])
+    alias_sources: list[tuple[str, str, str]] = []
+    if isinstance(aliases, list):
+        plain = []
+        for a in aliases:
+            # a designation of an open standard carries its source: {name = "C11000", source = "...", locator = "..."}
+            if isinstance(a, dict) and set(a) <= {"name", "source", "locator", "note"} and isinstance(a.get("name"), str):
+                key = a.get("source")
+                if key not in sources:
+                    problems.add(f"{where}: aliases", f"\"{a['name']}\": source key {key!r} is not in sources.toml")
+                alias_sources.append((a["name"].strip(), str(key), str(a.get("locator", ""))))
+                plain.append(a["name"])
+            else:
+                plain.append(a)
+        aliases = plain
     if not isinstance(aliases, list) or not all(isinstance(a, str) and a.strip() for a in aliases):
-        problems.add(f"{where}: aliases", f"expected a list of non-empty strings, found {aliases!r}")
+        problems.add(f"{where}: aliases", "expected a list of non-empty strings or {name, source, locator} tables, "
+                     f"found {aliases!r}")
         aliases = []
     notes = data.get("notes", "")
     if not isinstance(notes, str):
@@ -406,7 +422,7 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
         return None
     return Material(id=material_id, name=data["name"].strip(), klass=klass, aliases=tuple(a.strip() for a in aliases),
                     summary=data["summary"].strip(), notes=notes, properties=MappingProxyType(properties),
-                    table=table, path=path, temperature_base_id=base_id)
+                    table=table, path=path, temperature_base_id=base_id, alias_sources=tuple(alias_sources))
 
 
 def attach_temperature_bases(materials: list[Material], problems: Problems) -> list[Material]:
@@ -520,20 +536,35 @@ def load_dataset(folders: list[Path]) -> DataSet:
             m = read_material(path, set(sources), problems)
             if m is not None:
                 materials.append(m)
+    # ids, aliases and names share one key space, compared by the key the look-up uses (name_key:
+    # case, space runs, invisible and full-width look-alikes folded), shipped files first: an
+    # added folder can never take over what a shipped id, alias or name means
     names: dict[str, tuple[str, Path]] = {}
+    names_label: dict[str, str] = {}
+    field_of = {"id": "id", "alias": "aliases", "name": "name"}
     for m in materials:
-        for label, kind in [(m.id, "id")] + [(a, "alias") for a in m.aliases]:
-            key = label.casefold()
+        for label, kind in [(m.id, "id")] + [(a, "alias") for a in m.aliases] + [(m.name, "name")]:
+            key = name_key(label)
+            if not key:
+                problems.add(f"{display_path(m.path)}: {field_of[kind]}",
+                             f"\"{label}\" has no visible characters")
+                continue
             if key in names:
                 other_kind, other = names[key]
                 where = display_path(m.path)
                 if other == m.path:
-                    problems.add(f"{where}: aliases", f"\"{label}\" is listed twice")
-                else:
-                    problems.add(f"{where}: {'id' if kind == 'id' else 'aliases'}",
-                                 f"\"{label}\" clashes with the {other_kind} of {display_path(other)}")
+                    if kind == "alias" and other_kind == "alias":
+                        problems.add(f"{where}: aliases", f"\"{label}\" is listed twice")
+                    continue  # a material's own name may repeat its alias
+                problems.add(f"{where}: {field_of[kind]}",
+                             f"\"{label}\" clashes with the {other_kind} of {display_path(other)}"
+                             + (" (they differ only in case, spacing or invisible characters)"
+                                if label.strip() != names_label[key].strip() else ""))
+                if kind == "id":
+                    break  # the same material twice: its id says it all
             else:
                 names[key] = (kind, m.path)
+                names_label[key] = label
     if not materials and not problems.lines:
         problems.add(display_path(folders[0]), "holds no material files")
     materials = attach_temperature_bases(materials, problems)

@@ -99,6 +99,8 @@ class Material:
     # (Matthiessen's rule): the base's id as written, and the base itself once every file is loaded
     temperature_base_id: str = ""
     temperature_base: "Material | None" = None
+    # (alias, source key, locator) for the aliases that are designations of a standard
+    alias_sources: tuple[tuple[str, str, str], ...] = ()
 
     def get(self, name: str) -> Value | None:
         return self.properties.get(name)
@@ -109,6 +111,7 @@ class Material:
             keys.add(self.table.source)
         if self.temperature_base is not None:
             keys.update(self.temperature_base.source_keys())
+        keys.update(source for _, source, _ in self.alias_sources)
         return sorted(keys)
 
 

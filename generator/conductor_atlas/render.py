@@ -21,6 +21,7 @@ from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows, co
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
 from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.lookup import TRADE_WORDS
+from conductor_atlas.core.text_match import name_key
 from conductor_atlas.derive import MaterialView, calc_catalogue
 from conductor_atlas.material_charts import material_charts
 from conductor_atlas.core.numfmt import format_number, format_fixed
@@ -188,10 +189,14 @@ def ordered_calculators() -> list[str]:
 
 
 def material_choices(views: list[MaterialView]) -> list[tuple[str, str]]:
-    """(value, label) for the material datalist: every id, then every alias."""
-    out = [(v.material.id, v.material.name) for v in views]
+    """(value, label) for the material datalist: every id, then every alias, each with the name of the
+    material it gives; a trade word ("copper") with the grade it gives (lookup.TRADE_WORDS)."""
+    names = {v.material.id: v.material.name for v in views}
+    out = []
     for v in views:
-        out.extend((a, v.material.name) for a in v.material.aliases)
+        out.extend((label, names[v.material.id]) for label in [v.material.id, *v.material.aliases]
+                   if name_key(label) not in TRADE_WORDS)
+    out.extend((word, names[TRADE_WORDS[word][0]]) for word in TRADE_WORDS if TRADE_WORDS[word][0] in names)
     return out
 
 

@@ -14,7 +14,7 @@ import re
 import pytest
 from hypothesis import given, settings, strategies as st
 
-from conductor_atlas.core import geometry, lookup, search_text, units
+from conductor_atlas.core import geometry, lookup, search_text, text_match, units
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
 
@@ -350,27 +350,32 @@ def test_a_size_read_again_gives_the_same_record_or_message():
     assert bad[2] == outcome_of(parse_size, "99 AWG", "s2")[2] == "size"
 
 
+def edit_distance(a, b):
+    return search_text.osa_distance(a, b, 1000000)
+
+
 def test_edit_distance_classic_examples():
-    # Levenshtein (1966) distance; the textbook pairs
-    assert lookup.edit_distance("kitten", "sitting") == 3
-    assert lookup.edit_distance("flaw", "lawn") == 2
-    assert lookup.edit_distance("", "abc") == 3
-    assert lookup.edit_distance("abc", "abc") == 0
+    # Levenshtein (1966) distance; the textbook pairs (no adjacent swaps in them, so OSA agrees)
+    assert edit_distance("kitten", "sitting") == 3
+    assert edit_distance("flaw", "lawn") == 2
+    assert edit_distance("", "abc") == 3
+    assert edit_distance("abc", "abc") == 0
+    assert edit_distance("ab", "ba") == 1  # OSA: one swap of adjacent letters
 
 
 @settings(max_examples=500, deadline=None)
 @given(st.text("abc01", max_size=7), st.text("abc01", max_size=7), st.integers(0, 8))
 def test_edit_distance_within_is_exact_up_to_its_limit(a, b, limit):
-    exact = lookup.edit_distance(a, b)
-    cut = lookup.edit_distance_within(a, b, limit)
+    exact = edit_distance(a, b)
+    cut = search_text.osa_distance(a, b, limit)
     assert cut == exact if exact <= limit else cut > limit
 
 
 def full_sort_nearest(catalogue, text, count):
     """nearest_names by sorting every id and alias by (distance, name), then dropping repeats."""
-    wanted = lookup.fold(text)
-    scored = [(lookup.edit_distance(wanted, i), i) for i in catalogue["materials"]]
-    scored += [(lookup.edit_distance(wanted, a), catalogue["display_aliases"][a]) for a in catalogue["aliases"]]
+    wanted = text_match.name_key(text)
+    scored = [(edit_distance(wanted, i), i) for i in catalogue["materials"]]
+    scored += [(edit_distance(wanted, a), catalogue["display_aliases"][a]) for a in catalogue["aliases"]]
     names = []
     for _, name in sorted(scored):
         if name not in names:

@@ -346,8 +346,10 @@ def search_cases():
     cases = [("conductor_atlas.core.search_prepare", "prepare_index", [entries])]
     for query in SEARCH_QUERIES:
         cases.append((module, "search_entries", [entries, query, 12]))
-    for text in ["Crème Brûlée", "ÆØÅ ß", "µΩ·cm²", "Ωhm", "ρ(T) α", "Cu-Ni 55/45", "e\u0301te\u0301", "CCA 10%", ""]:
+    for text in ["Crème Brûlée", "ÆØÅ ß", "µΩ·cm²", "Ωhm", "ρ(T) α", "Cu-Ni 55/45", "e\u0301te\u0301", "CCA 10%", "",
+                 "IACS\U0001F600", "ＩＡＣＳ", "I\u200bACS", " annealed \u3000 EC\taluminium "]:
         cases.append((matching, "fold_text", [text]))
+        cases.append(("conductor_atlas.core.text_match", "name_key", [text]))
         cases.append((matching, "tokens", [text]))
         cases.append((matching, "compact", [text]))
     for a, b in [("cooper", "copper"), ("nickle", "nickel"), ("aluminum", "aluminium"), ("ab", "ba"), ("", "abc"),

@@ -5,7 +5,7 @@ import math
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
 from conductor_atlas.core.geometry import awg_area, awg_name, next_awg, next_metric_size
-from conductor_atlas.core.lookup import fold
+from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, has_errors,
                                           new_outcome)
@@ -57,7 +57,7 @@ def read_conductors(outcome, inputs):
     two-wire [2, .., 2, 2]; whole length [1, .., 1, 1]; balanced three-phase [√3, .., 1, 3]
     (line-to-line drop √3 I R of one phase conductor; three conductors dissipate).
     """
-    text = fold(field_text(inputs, "conductors"))
+    text = name_key(field_text(inputs, "conductors"))
     if len(text) == 0:
         text = "2"
     for name in THREE_PHASE:

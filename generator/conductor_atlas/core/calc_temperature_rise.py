@@ -3,7 +3,7 @@
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
 from conductor_atlas.core.constants import ZERO_CELSIUS
-from conductor_atlas.core.lookup import fold
+from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.numfmt import format_fixed, format_number, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, has_errors,
                                           new_outcome)
@@ -88,7 +88,7 @@ def is_ec_aluminium(m, catalogue):
         return False
     if m["id"].find("aluminium-1350") == 0:
         return True
-    key = fold("EC aluminium")
+    key = name_key("EC aluminium")
     return key in catalogue["aliases"] and catalogue["aliases"][key] == m["id"]
 
 

@@ -1,74 +1,18 @@
 """Find a material in the calculators' catalogue by id, alias or chemical symbol.
 
 The catalogue is {"materials": {id: record}, "aliases": {folded alias: id}}, built by
-conductor_atlas.derive.calc_catalogue. Matching ignores case and surrounding spaces; an unknown
-name gives a CoreError that lists the nearest valid choices.
+conductor_atlas.derive.calc_catalogue. Texts are compared by text_match.name_key (the loader's
+clash check uses the same key); an unknown name gives a CoreError that lists the nearest choices
+by search_text.osa_distance.
 """
 
 from conductor_atlas.core.errors import CoreError
-
-
-def fold(text):
-    """Lower case, trimmed, inner runs of spaces collapsed; characters beyond U+FFFF dropped.
-
-    (No id or alias has one; JS counts them as two units, so edit distances would differ.)
-    """
-    out = ""
-    space = False
-    for ch in str(text).strip().lower():
-        code = ord(ch)
-        if code >= 0xD800 and (code <= 0xDFFF or code > 0xFFFF):
-            continue
-        if ch == " " or ch == "\t":
-            space = True
-        else:
-            if space and len(out) > 0:
-                out = out + " "
-            space = False
-            out = out + ch
-    return out
-
-
-def edit_distance_within(a, b, limit):
-    """edit_distance(a, b) when that is at most ``limit``, else any number above ``limit``.
-
-    Stops as soon as a whole row of the table exceeds ``limit`` (the distance only grows from a
-    row's smallest entry) or when the lengths alone differ by more.
-    """
-    na = len(a)
-    nb = len(b)
-    if na - nb > limit or nb - na > limit:
-        return limit + 1
-    previous = []
-    for j in range(nb + 1):
-        previous.append(j)
-    for i in range(1, na + 1):
-        current = [i]
-        smallest = i
-        ca = a[i - 1]
-        for j in range(1, nb + 1):
-            cost = 0 if ca == b[j - 1] else 1
-            best = previous[j] + 1
-            if current[j - 1] + 1 < best:
-                best = current[j - 1] + 1
-            if previous[j - 1] + cost < best:
-                best = previous[j - 1] + cost
-            current.append(best)
-            if best < smallest:
-                smallest = best
-        if smallest > limit:
-            return limit + 1
-        previous = current
-    return previous[nb]
+from conductor_atlas.core.search_text import osa_distance
+from conductor_atlas.core.text_match import name_key
 
 
 # A limit above any distance between an id or alias and typed text (no pruning yet)
 NO_LIMIT = 1000000
-
-
-def edit_distance(a, b):
-    """Levenshtein distance between two short strings (insert, delete, substitute cost 1)."""
-    return edit_distance_within(a, b, NO_LIMIT)
 
 
 def add_at_distance(found, distance, name, needed):
@@ -106,20 +50,20 @@ def nearest_names(catalogue, text, count):
 
     The same order as sorting every id and alias by (distance, name), but names are grouped by
     distance, only the groups needed are sorted, and candidates too far to matter are cut short
-    (edit_distance_within): an unknown name is typed on every keystroke of a material field.
+    (osa_distance with a limit): an unknown name is typed on every keystroke of a material field.
     """
-    wanted = fold(text)
+    wanted = name_key(text)
     needed = count
     if needed < 1:
         needed = 1  # the answer holds at least one name
     found = {"buckets": [], "best": {}, "counts": [], "limit": NO_LIMIT}
     for material_id in catalogue["materials"].keys():
-        d = edit_distance_within(wanted, material_id, found["limit"])
+        d = osa_distance(wanted, material_id, found["limit"])
         if d <= found["limit"]:
             add_at_distance(found, d, material_id, needed)
     display = catalogue["display_aliases"]
     for alias in catalogue["aliases"].keys():
-        d = edit_distance_within(wanted, alias, found["limit"])
+        d = osa_distance(wanted, alias, found["limit"])
         if d <= found["limit"]:
             add_at_distance(found, d, display[alias], needed)
     names = []
@@ -160,7 +104,7 @@ def trade_word_grade(catalogue, wanted):
 def trade_word_note(catalogue, text):
     """What a result says when ``text`` is a trade word: which grade it was read as and how to ask for
     the high-purity metal; "" otherwise."""
-    wanted = fold(text)
+    wanted = name_key(text)
     grade = trade_word_grade(catalogue, wanted)
     if len(grade) == 0:
         return ""
@@ -179,10 +123,54 @@ def lookup_text(catalogue, material_id):
     return TRADE_WORDS[material_id][2]
 
 
+# Words that name the class of metal around a designation ("aluminium 1350", "1350 aluminium",
+# "AL 1350", "Cu ETP"): dropped at either end when the rest names a material.
+CLASS_WORDS = ["copper", "aluminium", "aluminum", "alloy", "cu", "al"]
+
+
+def word_order_key(key):
+    """The words of a name key sorted: "copper annealed" and "annealed copper" give one key."""
+    words = key.split(" ")
+    words.sort()
+    return " ".join(words)
+
+
+def exact_match(catalogue, key):
+    """The id whose id, alias or name has ``key``, "" for none."""
+    if key in catalogue["materials"]:
+        return key
+    if key in catalogue["aliases"]:
+        return catalogue["aliases"][key]
+    return ""
+
+
+def loose_match(catalogue, wanted):
+    """The id named by ``wanted`` (a name key) once a class word at either end is dropped or the words
+    are taken in any order ("aluminium 1350", "AL 1350", "copper annealed"); "" for none."""
+    words = wanted.split(" ")
+    if len(words) < 2:
+        return ""
+    first = words[0]
+    last = words[len(words) - 1]
+    for word in CLASS_WORDS:
+        if first == word:
+            found = exact_match(catalogue, " ".join(words[1:len(words)]))
+            if len(found) > 0:
+                return found
+        if last == word:
+            found = exact_match(catalogue, " ".join(words[0:len(words) - 1]))
+            if len(found) > 0:
+                return found
+    ordered = word_order_key(wanted)
+    if ordered in catalogue["word_keys"]:
+        return catalogue["word_keys"][ordered]
+    return ""
+
+
 def find_material(catalogue, text, field="material"):
     """The catalogue record named by ``text`` (id, alias, name or symbol; any case). A trade word
     (TRADE_WORDS) gives its conductor grade."""
-    wanted = fold(text)
+    wanted = name_key(text)
     if len(wanted) == 0:
         raise CoreError("is empty: name a material by id, alias or symbol (e.g. Cu, IACS, 1350)", field)
     materials = catalogue["materials"]
@@ -194,5 +182,14 @@ def find_material(catalogue, text, field="material"):
     aliases = catalogue["aliases"]
     if wanted in aliases:
         return materials[aliases[wanted]]
-    raise CoreError("unknown material “" + str(text).strip() + "”; nearest: "
-                    + ", ".join(nearest_names(catalogue, text, 5)), field)
+    loose = loose_match(catalogue, wanted)
+    if len(loose) > 0:
+        return materials[loose]
+    described = []
+    for name in nearest_names(catalogue, text, 5):
+        key = name_key(name)
+        found = trade_word_grade(catalogue, key)
+        if len(found) == 0:
+            found = exact_match(catalogue, key)
+        described.append(name + " (" + materials[found]["name"] + ")")
+    raise CoreError("unknown material “" + str(text).strip() + "”; nearest: " + ", ".join(described), field)
