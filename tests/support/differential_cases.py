@@ -307,6 +307,9 @@ def filament_cases():
     cases.append((fs, "bar_pair_solution", [0.02, 0.003, 0.01, rho, 60.0]))
     cases.append((fs, "round_layers_solution", [[[9.49e-4, 2.8264e-8], [1e-3, rho]], 1e6]))
     cases.append((fs, "round_layers_solution", [[[5e-3, rho]], 50.0]))
+    for text in ("", "single", "3 bars, gap 10 mm", "2 bars gap 5 mm", "pair, 30 mm", "go-and-return 4 cm", "pair at 25 mm",
+                 "bars 3", "12 bars, gap 1 mm", "3 bars", "pair", "1 bar", "zig"):
+        cases.append(("conductor_atlas.core.ac_layout", "parse_arrangement", [text, "arrangement"]))
     return cases
 
 

@@ -8,6 +8,7 @@ from conductor_atlas.core.outcome import add_error, add_result, add_warning, che
 from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
+from conductor_atlas.core.ac_layout import ac_ratio_for
 
 NAME = "resistance"
 TITLE = "Resistance of a conductor run"
@@ -43,15 +44,8 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
 
 
 def ac_ratio(outcome, size, rho, f, mu_r):
-    """R_ac/R_dc for the size's shape: exact Kelvin solution for round, bar approximation for bars."""
-    if size["shape"] == "bar":
-        add_warning(outcome, "AC resistance of a bar uses an approximation (see the method notes); "
-                             "proximity to other conductors is not included")
-        return skin.rectangular_bar_resistance_ratio(size["width"], size["thickness"], rho, f, mu_r)
-    if size["shape"] == "area":
-        add_warning(outcome, "a cross-section given as an area is treated as one solid round wire of that area; "
-                             "stranded and compacted conductors differ (IEC 60287-1-1 k_s)")
-    return skin.round_wire_resistance_ratio(size["diameter"] / 2.0, rho, f, mu_r)
+    """R_ac/R_dc of one isolated conductor of the size's shape, with its method (core.ac_layout)."""
+    return ac_ratio_for(outcome, size, ["single"], rho, f, mu_r)
 
 
 def mass_text(mass):

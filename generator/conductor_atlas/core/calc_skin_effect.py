@@ -9,24 +9,27 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_sources, ad
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
 from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
-from conductor_atlas.core.calc_resistance import ac_ratio
+from conductor_atlas.core.ac_layout import ARRANGEMENT_HINT, ac_ratio_for, parse_arrangement
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "skin-effect"
 TITLE = "Skin effect"
 SUMMARY = "Skin depth, surface resistance and the AC/DC resistance ratio of a conductor at a frequency."
-FIELDS = ["material", "frequency", "size", "temperature", "model"]
-DEFAULTS = {"material": "IACS", "frequency": "50 Hz", "size": "240 mm2", "temperature": "20 °C", "model": "auto"}
+FIELDS = ["material", "frequency", "size", "arrangement", "temperature", "model"]
+DEFAULTS = {"material": "IACS", "frequency": "50 Hz", "size": "240 mm2", "arrangement": "single",
+            "temperature": "20 °C", "model": "auto"}
 FIELD_INFO = {
     "material": ["Material", "id, alias or symbol, e.g. IACS, 1350, Cu, Fe"],
     "frequency": ["Frequency", "e.g. 50 Hz, 400 Hz, 100 kHz, 1 MHz"],
     "size": ["Cross-section (optional)", "e.g. 240 mm², 4/0 AWG, d 8 mm, 100 x 10 mm: adds the AC/DC ratio"],
+    "arrangement": ["Arrangement", ARRANGEMENT_HINT],
     "temperature": ["Conductor temperature", "e.g. 20 °C, 90 degC, 363 K"],
     "model": MODEL_FIELD_INFO,
 }
 RESULT_LABELS = [
     ["skin_depth", "Skin depth δ"], ["surface_resistance", "Surface resistance (per square)"],
-    ["ac_dc_ratio", "AC/DC resistance ratio"], ["resistance", "DC resistance per metre (Ω/m)"],
+    ["ac_dc_ratio", "AC/DC resistance ratio"], ["ac_method", "AC method"], ["bar_share", "Current share per bar"],
+    ["resistance", "DC resistance per metre (Ω/m)"],
     ["resistance_ac", "AC resistance per metre (Ω/m)"], ["depth_ratio", "Radius or half-thickness over δ"],
     ["area", "Cross-section"], ["resistivity", "Resistivity at temperature"], ["temperature", "Temperature"],
     ["mean_free_path", "Electron mean free path ℓ (estimate)"],
@@ -46,11 +49,12 @@ def half_thickness(size):
 def calculate(inputs, catalogue):
     """Skin depth and AC resistance of a conductor at a frequency.
 
-    Fields: material; frequency (> 0); size (optional, geometry.parse_size); temperature
-    (default 20 °C); model. δ = sqrt(ρ / (π f μ0 μr)); R_s = ρ / δ (per square, for a
-    conductor much thicker than δ); with a size: R_dc per metre = ρ / A, R_ac/R_dc by the exact
-    Kelvin solution for round wire (or an area taken as round) and the bar approximation for
-    "w x t" bars (core.skin_effect), R_ac per metre = R_dc · ratio.
+    Fields: material; frequency (> 0); size (optional, geometry.parse_size); arrangement
+    (core.ac_layout: single, "3 bars, gap 10 mm", "pair, 30 mm"); temperature (default 20 °C);
+    model. δ = sqrt(ρ / (π f μ0 μr)); R_s = ρ / δ (per square, for a conductor much thicker than
+    δ); with a size: R_dc per metre = ρ / A (ρ / (n A) for n bars per phase), R_ac/R_dc by the exact
+    Kelvin solution for round wire (or an area taken as round) and the filament solver for bars,
+    bar groups and go-and-return pairs (core.ac_layout), R_ac per metre = R_dc · ratio.
     """
     outcome = new_outcome(NAME, inputs)
     f = read_quantity(outcome, inputs, "frequency", "frequency", True)
@@ -61,6 +65,14 @@ def calculate(inputs, catalogue):
     if len(field_text(inputs, "size")) > 0:
         # read after the opening: a bad size is shown under its field and drops only the AC/DC results
         size = read_size(outcome, inputs, "size")
+    arrangement = ["single"]
+    try:
+        arrangement = parse_arrangement(field_text(inputs, "arrangement"), "arrangement")
+    except CoreError as problem:
+        add_error(outcome, "arrangement", problem.message)
+        size = None  # no AC/DC ratio for an arrangement that was not understood
+    if arrangement[0] != "single" and len(field_text(inputs, "size")) == 0:
+        add_error(outcome, "size", "give the bar size (w x t) for this arrangement, e.g. 100 x 10 mm")
     if opening is None:
         return outcome
     m = opening[0]
@@ -78,9 +90,13 @@ def calculate(inputs, catalogue):
         rs = skin.surface_resistance(rho, f, mu_r)
         ratio = 0.0
         if size is not None:
-            ratio = ac_ratio(outcome, size, rho, f, mu_r)
+            ratio = ac_ratio_for(outcome, size, arrangement, rho, f, mu_r)
     except CoreError as problem:
-        add_error(outcome, "frequency", problem.message)
+        field = problem.field
+        if field != "arrangement":
+            field = "frequency"
+        add_error(outcome, field, problem.message)
+        outcome["results"] = {}
         return outcome
     add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
@@ -88,6 +104,8 @@ def calculate(inputs, catalogue):
     add_result(outcome, "surface_resistance", rs, "Ω", format_si(rs, "Ω", 4) + " per square")
     if size is not None:
         area = size["area"]
+        if arrangement[0] == "bars":
+            area = area * arrangement[1]  # the group: n bars in parallel
         r = dc.resistance(rho, 1.0, area)
         add_result(outcome, "area", area, "m²", format_number(area * 1e6, 4) + " mm²")
         add_result(outcome, "resistance", r, "Ω/m", format_si(r, "Ω", 4) + " per metre")

@@ -1,0 +1,132 @@
+"""The AC/DC ratio a calculator shows for a size and an arrangement, with the method that gave it.
+
+Round wire (or an area taken as round): the exact Kelvin-function solution (core.skin_effect).
+Non-magnetic bars, bar groups and go-and-return bar pairs: the filament solver
+(core.filament_solver). Magnetic bars: the shell approximation, flagged as a lower estimate (the
+filament method takes the field as in free space). Each answer adds the result "ac_method"
+(value: the filament count, 0 for a closed form; text: the method in words).
+
+Arrangement text (field "arrangement"): "" or "single"; "N bars, gap G" (N = 2..8 bars per
+phase side by side, wide faces facing, G the clear gap); "pair, S" or "go-and-return S" (a
+go-and-return pair of bars, wide faces facing at centre distance S).
+"""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core import filament_solver as filaments
+from conductor_atlas.core import skin_effect as skin
+from conductor_atlas.core.numfmt import format_number
+from conductor_atlas.core.outcome import add_result, add_warning
+from conductor_atlas.core.units import parse_quantity
+
+ARRANGEMENT_HINT = ("single; 3 bars, gap 10 mm (bars per phase, wide faces facing); "
+                    "pair, 30 mm (go-and-return bars at a centre distance)")
+_DIGITS = "0123456789"
+
+
+def _after(text, word):
+    # the text after the first occurrence of word, without separators
+    at = text.find(word)
+    rest = text[at + len(word):]
+    while len(rest) > 0 and (rest[0] == "," or rest[0] == " " or rest[0] == ":" or rest[0] == "="):
+        rest = rest[1:]
+    return rest
+
+
+def parse_arrangement(text, field):
+    """["single"], ["bars", n, gap [m]] or ["pair", centre distance [m]] from the field's text.
+
+    Raises CoreError naming ``field`` with what to type.
+    """
+    words = text.strip().lower()
+    if len(words) == 0 or words == "single" or words == "1 bar" or words == "one bar":
+        return ["single"]
+    if words.find("pair") >= 0 or words.find("return") >= 0:
+        rest = _after(words, "pair") if words.find("pair") >= 0 else _after(words, "return")
+        if rest.find("at ") == 0:
+            rest = rest[3:]
+        if len(rest) == 0:
+            raise CoreError("give the centre distance of the pair, e.g. pair, 30 mm", field)
+        return ["pair", parse_quantity(rest, "length", field)]
+    if words.find("bar") > 0:
+        count_text = words[:words.find("bar")].strip()
+        ok = len(count_text) > 0
+        for c in count_text:
+            if _DIGITS.find(c) < 0:
+                ok = False
+        if not ok:
+            raise CoreError("start with the number of bars per phase, e.g. 3 bars, gap 10 mm", field)
+        count = 0
+        for c in count_text:
+            count = count * 10 + _DIGITS.find(c)
+        if count == 1:
+            return ["single"]
+        if count < 2 or count > 8:
+            raise CoreError("from 2 to 8 bars per phase, e.g. 3 bars, gap 10 mm", field)
+        if words.find("gap") < 0:
+            raise CoreError("give the gap between the bars, e.g. " + str(count) + " bars, gap 10 mm", field)
+        return ["bars", count, parse_quantity(_after(words, "gap"), "length", field)]
+    raise CoreError("type single, '3 bars, gap 10 mm' or 'pair, 30 mm'", field)
+
+
+def _note_solution(outcome, solution, what):
+    n = solution["filaments"]
+    add_result(outcome, "ac_method", n, "", "filament solver, " + str(n) + " filaments (" + what + ")")
+    if solution["change"] >= 1.0:
+        add_warning(outcome, "the filament solution could not be refined within the page's budget (" + str(n)
+                    + " filaments, the conductor is many skin depths across): its accuracy is not established")
+    elif not solution["converged"]:
+        add_warning(outcome, "the filament solution did not settle to 0.1 % within " + str(n)
+                    + " filaments (estimated change " + format_number(100.0 * solution["change"], 2)
+                    + " %): the conductor is many skin depths across; read the AC/DC ratio to about that")
+
+
+def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r):
+    """R_ac / R_dc of one conductor (single, pair) or of the group (bars per phase), with its method.
+
+    size: core.geometry.parse_size's record; arrangement: parse_arrangement's list; rho [ohm m];
+    f [Hz]; mu_r [-]. Raises CoreError (field "arrangement") for a layout it cannot compute.
+    """
+    kind = arrangement[0]
+    if size["shape"] != "bar":
+        if kind != "single":
+            raise CoreError("bars per phase and go-and-return pairs are computed for bars (w x t); "
+                            "for round wire only a single conductor", "arrangement")
+        if size["shape"] == "area":
+            add_warning(outcome, "a cross-section given as an area is treated as one solid round wire of that area; "
+                                 "stranded and compacted conductors differ (IEC 60287-1-1 k_s)")
+        add_result(outcome, "ac_method", 0.0, "", "exact Kelvin-function solution (isolated round wire)")
+        return skin.round_wire_resistance_ratio(size["diameter"] / 2.0, rho, f, mu_r)
+    width = size["width"]
+    thickness = size["thickness"]
+    if mu_r > 1.5:
+        if kind != "single":
+            raise CoreError("groups and pairs of magnetic bars are not computed (the filament method needs μr = 1)",
+                            "arrangement")
+        add_result(outcome, "ac_method", 0.0, "", "shell approximation (magnetic bar; a lower estimate)")
+        add_warning(outcome, "a magnetic bar's AC/DC ratio comes from the shell approximation, which ignores the "
+                             "current crowding at edges and corners: read it as a lower estimate")
+        return skin.rectangular_bar_resistance_ratio(width, thickness, rho, f, mu_r)
+    if kind == "single":
+        solution = filaments.bar_group_solution(width, thickness, 1, 0.0, rho, f)
+        _note_solution(outcome, solution, "isolated bar")
+        return solution["ratio"]
+    if kind == "bars":
+        try:
+            solution = filaments.bar_group_solution(width, thickness, arrangement[1], arrangement[2], rho, f)
+        except CoreError as problem:
+            raise CoreError(problem.message, "arrangement")
+        _note_solution(outcome, solution, str(arrangement[1]) + " bars per phase")
+        shares = []
+        for s in solution["shares"]:
+            shares.append(format_number(100.0 * s, 3) + " %")
+        text = "each outer bar " + shares[0]
+        if len(shares) > 1:
+            text = text + ", innermost " + shares[len(shares) - 1]
+        add_result(outcome, "bar_share", solution["shares"][0], "", text + " of the phase current (magnitudes)")
+        return solution["ratio"]
+    try:
+        solution = filaments.bar_pair_solution(width, thickness, arrangement[1], rho, f)
+    except CoreError as problem:
+        raise CoreError(problem.message, "arrangement")
+    _note_solution(outcome, solution, "go-and-return pair, per conductor")
+    return solution["ratio"]
