@@ -120,7 +120,7 @@ def test_arrangement_errors_name_the_field(catalogue, arrangement, size, words):
     out = calculate_skin_effect({"material": "IACS", "frequency": "50 Hz", "size": size,
                                  "arrangement": arrangement}, catalogue)
     assert words in out["errors"]["arrangement"]
-    assert out["results"] == {}
+    assert "ac_dc_ratio" not in out["results"]
 
 
 def test_magnetic_bar_is_a_flagged_lower_estimate(catalogue):
