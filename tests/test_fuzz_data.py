@@ -354,7 +354,7 @@ REQUEST_LINE = st.one_of(
 def test_serve_answers_any_request_line(tiny_site_server, line):
     port, errors = tiny_site_server
     errors.clear()
-    line = line[:2000]
+    line = line.replace(b"\r", b"").replace(b"\n", b"")[:2000]  # one line: the server reads up to a line break
     with socket.create_connection(("127.0.0.1", port), timeout=10) as conn:
         conn.sendall(line + b"\r\nHost: 127.0.0.1\r\nConnection: close\r\n\r\n")
         chunks = []
@@ -365,9 +365,9 @@ def test_serve_answers_any_request_line(tiny_site_server, line):
             pass
     answer = b"".join(chunks)
     assert errors == [], errors[-1]
-    if line.strip():
-        # a status line, or for a one-word line (HTTP/0.9, RFC 1945 §4.1: a simple request gets a body
-        # only) the error page with its code
+    words = line.decode("iso-8859-1").split()  # the server's own reading (str.split: \x1c-\x1f are blanks too)
+    if len(words) >= 3 and words[2] != "HTTP/0.9":
+        # an HTTP/1.x answer; an HTTP/0.9 request ("GET /path", no version) gets a body only (RFC 1945 §4.1)
         status = re.match(rb"HTTP/1\.[01] (\d{3}) ", answer) or re.search(rb"<p>Error code: (\d{3})</p>", answer)
         assert status, (line, answer[:200])
         assert status.group(1) in {b"200", b"301", b"400", b"404", b"405", b"414", b"501", b"505"}, (line, answer[:200])
