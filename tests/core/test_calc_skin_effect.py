@@ -222,3 +222,15 @@ def test_a_conductor_grade_takes_its_mean_free_path_from_the_recorded_rho_lambda
     hot = calculate_skin_effect({"material": "IACS", "frequency": "10 GHz", "temperature": "90 °C"}, catalogue)
     rho90 = IACS_RHO * (1 + 0.00393 * 70.0)  # IEC 60028 α20
     assert value(hot, "mean_free_path") == pytest.approx(CU_RHO_LAMBDA / rho90, rel=1e-12)
+
+
+def test_steel_skin_depth_uses_its_recorded_permeability(catalogue):
+    # issue 14: low-carbon steel was computed with mu_r = 1 (26.8 mm at 50 Hz). Its record now carries
+    # mu_r = 200 (range 100-2000; ASM Handbook vol. 1, from memory, data/materials/steel-low-carbon.toml);
+    # delta = sqrt(rho / (pi f mu_0 mu_r)) with scipy's mu_0 (CODATA 2018, as the core's: MU0_REL)
+    out = calculate_skin_effect({"material": "steel-low-carbon", "frequency": "50 Hz", "size": "d 10 mm"}, catalogue)
+    rho = value(out, "resistivity")
+    assert value(out, "skin_depth") == pytest.approx(delta_ref(rho, 50.0, 200.0), rel=MU0_REL, abs=0)
+    assert value(out, "skin_depth") == pytest.approx(1.897e-3, rel=1e-3)  # printed by the calculator
+    assert any("depends strongly on field strength" in w for w in out["warnings"])
+    assert out["results"]["ac_method"]["text"].startswith("exact Kelvin-function solution")
