@@ -65,7 +65,7 @@ def test_missing_file_is_404(http_site):
     assert info.value.code == 404
 
 
-def test_listens_on_loopback_only(built_site):
+def test_listens_on_loopback_only_by_default(built_site):
     server = make_server(built_site, port=0, quiet=True)
     try:
         assert server.server_address[0] == "127.0.0.1"
@@ -110,3 +110,85 @@ def test_security_policy_is_sent_as_headers(http_site, built_site):
         assert [d.strip() for d in meta_policy.split(";")] == [d.strip() for d in policy.split(";")][:-1]
         assert policy.endswith("; frame-ancestors 'none'")
         assert response.headers["X-Content-Type-Options"] == "nosniff"
+
+
+# ------------------------------------------------------------------ serving tablets on a workshop network
+
+def non_loopback_address() -> str | None:
+    """This machine's address on its default route (a UDP connect sends nothing), or None."""
+    try:
+        with socket.socket(socket.AF_INET, socket.SOCK_DGRAM) as probe:
+            probe.connect(("192.0.2.1", 9))  # TEST-NET-1 (RFC 5737): only picks the outgoing interface
+            address = probe.getsockname()[0]
+    except OSError:
+        return None
+    return None if address.startswith("127.") else address
+
+
+def test_host_option_serves_other_addresses(built_site):
+    server = make_server(built_site, port=0, host="0.0.0.0", quiet=True)
+    threading.Thread(target=server.serve_forever, daemon=True).start()
+    try:
+        port = server.server_address[1]
+        hosts = ["127.0.0.1"] + ([non_loopback_address()] if non_loopback_address() else [])
+        for host in hosts:
+            with urllib.request.urlopen(f"http://{host}:{port}/index.html", timeout=10) as answer:
+                assert answer.status == 200 and b"Conductor Atlas" in answer.read()
+    finally:
+        server.shutdown()
+        server.server_close()
+
+
+def self_signed(folder, name: str = "workshop.test"):
+    """A throw-away certificate and key made with openssl, as the README tells a user to make one."""
+    import shutil
+    import subprocess
+    if shutil.which("openssl") is None:
+        pytest.skip("openssl is not installed")
+    cert, key = folder / "atlas-cert.pem", folder / "atlas-key.pem"
+    subprocess.run(["openssl", "req", "-x509", "-newkey", "rsa:2048", "-nodes", "-days", "2",
+                    "-subj", f"/CN={name}", "-addext", f"subjectAltName=DNS:{name},IP:127.0.0.1",
+                    "-keyout", str(key), "-out", str(cert)], check=True, capture_output=True)
+    return cert, key
+
+
+def test_https_with_a_supplied_certificate(built_site, tmp_path):
+    import ssl
+    cert, key = self_signed(tmp_path)
+    server = make_server(built_site, port=0, host="127.0.0.1", quiet=True, cert=cert, key=key)
+    threading.Thread(target=server.serve_forever, daemon=True).start()
+    try:
+        trust = ssl.create_default_context(cafile=str(cert))   # the one certificate, trusted by hand
+        with urllib.request.urlopen(f"https://127.0.0.1:{server.server_address[1]}/sw.js", context=trust,
+                                    timeout=10) as answer:
+            assert answer.status == 200 and answer.headers["Content-Type"].startswith("text/javascript")
+    finally:
+        server.shutdown()
+        server.server_close()
+
+
+def test_certificate_mistakes_are_one_line_messages(built_site, tmp_path):
+    with pytest.raises(AtlasError, match=r"--cert .*no-such\.pem: no such file"):
+        make_server(built_site, port=0, cert=tmp_path / "no-such.pem")
+    with pytest.raises(AtlasError, match="--key needs --cert"):
+        make_server(built_site, port=0, key=tmp_path / "key.pem")
+    junk = tmp_path / "junk.pem"
+    junk.write_text("not a certificate\n")
+    with pytest.raises(AtlasError, match="not a PEM certificate and its private key"):
+        make_server(built_site, port=0, cert=junk)
+
+
+def test_every_folder_has_an_index_page(http_site, built_site):
+    folders = [p for p in built_site.rglob("*") if p.is_dir()]
+    assert len(folders) > 50
+    assert [p for p in folders if not (p / "index.html").is_file()] == []
+    with urllib.request.urlopen(f"{http_site}/materials/", timeout=10) as answer:
+        page = answer.read().decode("utf-8")
+    assert "<h1>Materials</h1>" in page
+    for material in (built_site / "materials").iterdir():
+        if material.is_dir():
+            assert f'materials/{material.name}/index.html"' in page, f"materials/ does not list {material.name}"
+    for folder in ("static/", "static/icons/", "js/"):
+        with urllib.request.urlopen(f"{http_site}/{folder}", timeout=10) as answer:
+            text = answer.read().decode("utf-8")
+        assert "Directory listing" not in text and "nothing in it to read" in text, folder

@@ -92,6 +92,7 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
             files.update(pending.result())
     else:
         files.update(transpile.result())
+    files.update(renderer.folder_pages(files))  # after every other file: a page for each bare folder
     scripts = scripts_of(files)
     bundles = cache.get("site:classic-bundles", files_key(scripts), lambda: classic_bundles(scripts))
     files = stamp(files, dataset.edition or Edition("undated", "unknown"))

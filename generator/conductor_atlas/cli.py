@@ -33,9 +33,16 @@ def build_parser() -> argparse.ArgumentParser:
     p_check.add_argument("--data", action="append", type=Path, default=[], metavar="DIR",
                          help="an extra folder of material files (repeatable)")
 
-    p_serve = sub.add_parser("serve", help="serve the built site on http://127.0.0.1")
+    p_serve = sub.add_parser("serve", help="serve the built site (http://127.0.0.1:8000 unless told otherwise)")
     p_serve.add_argument("--dir", type=Path, default=Path("site"), metavar="DIR", help="site folder (default: site)")
     p_serve.add_argument("--port", type=int, default=8000, help="port (default: 8000)")
+    p_serve.add_argument("--host", default="127.0.0.1", metavar="ADDRESS",
+                         help="address to listen on (default: 127.0.0.1, this machine only; "
+                              "0.0.0.0: every network this machine is on)")
+    p_serve.add_argument("--cert", type=Path, metavar="FILE",
+                         help="serve https with this PEM certificate (offline use on other devices needs https)")
+    p_serve.add_argument("--key", type=Path, metavar="FILE",
+                         help="the certificate's PEM private key (unless the --cert file holds it)")
     p_new = sub.add_parser("new-material", help="write a commented template for a new material file")
     p_new.add_argument("id", help="the new material's id, e.g. shop-bronze-7")
     p_new.add_argument("--dir", type=Path, default=Path("my-materials"), metavar="DIR",
@@ -69,7 +76,7 @@ def cmd_check(args: argparse.Namespace) -> int:
 
 def cmd_serve(args: argparse.Namespace) -> int:
     from conductor_atlas.serve import serve
-    serve(args.dir, args.port)
+    serve(args.dir, args.port, args.host, args.cert, args.key)
     return 0
 
 

@@ -22,6 +22,7 @@ import struct
 
 import jinja2
 
+from conductor_atlas import __version__
 from conductor_atlas.bundle import bundle
 from conductor_atlas.cache import files_key
 from conductor_atlas.errors import BuildError
@@ -92,6 +93,12 @@ def cache_version(files: dict[str, bytes]) -> str:
     return files_key(files).hex()[:16]
 
 
+def edition(version: str) -> str:
+    """What the pages call this build once it is stored: the generator's version and the first eight
+    characters of the cache version (equal sites, equal edition; any change, a new one)."""
+    return f"{__version__}-{version[:8]}"
+
+
 def precache_list(files: dict[str, bytes]) -> list[str]:
     """Every file of the site, as URLs relative to sw.js (the site root), but the worker itself and
     search-index.js (served pages fetch search-index.json; the script is for pages opened from files)."""
@@ -101,7 +108,8 @@ def precache_list(files: dict[str, bytes]) -> list[str]:
 def service_worker(files: dict[str, bytes]) -> bytes:
     env = jinja2.Environment(loader=jinja2.FileSystemLoader(str(TEMPLATES_DIR)), autoescape=False,
                              undefined=jinja2.StrictUndefined, keep_trailing_newline=True)
-    text = env.get_template("sw.js.j2").render(version=cache_version(files),
+    version = cache_version(files)
+    text = env.get_template("sw.js.j2").render(version=version, edition=edition(version),
                                                files_json=json.dumps(precache_list(files), indent=0))
     return text.encode("utf-8")
 

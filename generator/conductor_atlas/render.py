@@ -61,6 +61,10 @@ CARD_UNITS = {
 SAFE_URL_SCHEMES = ("http", "https", "mailto")
 
 
+# What a folder without pages of its own holds (folder_pages), by its top-level name
+FOLDER_CONTENTS = {"static": "styles, scripts and icons", "js": "the calculators' scripts"}
+
+
 def url_is_safe(url: str) -> bool:
     """True for a relative URL or an http(s)/mailto one; javascript:, data: and the like are not."""
     compact = "".join(ch for ch in url if ch > " ").lower()
@@ -254,6 +258,22 @@ class Renderer:
             out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")
         return out
 
+    def folder_pages(self, paths) -> dict[str, bytes]:
+        """An index.html for every folder of the site that has none (static/, js/ ...): a URL trimmed
+        to a folder shows a page that says what the folder holds, never a server's file listing."""
+        folders = {path.rsplit("/", 1)[0] for path in paths if "/" in path}
+        for folder in list(folders):
+            while "/" in folder:
+                folder = folder.rsplit("/", 1)[0]
+                folders.add(folder)
+        out: dict[str, bytes] = {}
+        for folder in sorted(folders):
+            path = f"{folder}/index.html"
+            if path not in paths:
+                what = FOLDER_CONTENTS.get(folder.split("/", 1)[0], "files the pages load")
+                out[path] = self.page("folder.html", path, title=f"Folder {folder}/", what=what)
+        return out
+
     def render_listings(self, dataset: DataSet, views: list[MaterialView]) -> dict[str, bytes]:
         """The pages that list or look up every material, and the pages with no material on them."""
         out: dict[str, bytes] = {}
@@ -264,6 +284,8 @@ class Renderer:
                 groups.append({"id": klass, "title": title, "views": members})
         out["index.html"] = self.page("index.html", "index.html", groups=groups, views=views,
                                       calcs=[calc_spec(name) for name in ordered_calculators()], title=SITE_NAME)
+        out["materials/index.html"] = self.page("materials.html", "materials/index.html", groups=groups,
+                                                title="Materials")
         out["search/index.html"] = self.page("search.html", "search/index.html", title="Search")
         full_catalogue = calc_catalogue([v.calc for v in views], [v.material for v in views], dataset.limits)
         choices = material_choices(views)

@@ -1,9 +1,15 @@
-"""Serve a built site on 127.0.0.1 with the content types that module scripts and manifests need."""
+"""Serve a built site with the content types that module scripts and manifests need.
+
+On 127.0.0.1 by default; ``host`` "0.0.0.0" serves every address of the machine (tablets on a
+workshop network). Browsers keep a site for offline use only from a secure origin: localhost, or
+https, which the standard library's ssl serves from a certificate and key the user supplies.
+"""
 
 from __future__ import annotations
 
 import functools
 import http.server
+import ssl
 import urllib.parse
 from pathlib import Path
 
@@ -50,7 +56,25 @@ class SiteHandler(http.server.SimpleHTTPRequestHandler):
         super().log_message(format, *args)
 
 
-def make_server(folder: Path, port: int = 8000, host: str = "127.0.0.1", quiet: bool = False):
+def tls_context(cert: Path, key: Path | None) -> ssl.SSLContext:
+    """A server TLS context from a PEM certificate and its private key (or one file holding both)."""
+    for name, path in (("--cert", cert), ("--key", key)):
+        if path is not None and not path.is_file():
+            raise AtlasError(f"{name} {path}: no such file")
+    context = ssl.SSLContext(ssl.PROTOCOL_TLS_SERVER)
+    try:
+        context.load_cert_chain(str(cert), str(key) if key is not None else None)
+    except (ssl.SSLError, OSError) as exc:
+        raise AtlasError(f"--cert {cert}{f' --key {key}' if key else ''}: not a PEM certificate and its "
+                         f"private key ({exc.__class__.__name__}: {exc})") from exc
+    return context
+
+
+def make_server(folder: Path, port: int = 8000, host: str = "127.0.0.1", quiet: bool = False,
+                cert: Path | None = None, key: Path | None = None):
+    """A threading HTTP server for ``folder``; with ``cert`` it speaks https only."""
+    if key is not None and cert is None:
+        raise AtlasError("--key needs --cert (the certificate that goes with it)")
     if not 0 <= port <= 65535:
         raise AtlasError(f"--port must be a port number from 0 to 65535 (0: any free port), found {port}")
     try:
@@ -59,18 +83,28 @@ def make_server(folder: Path, port: int = 8000, host: str = "127.0.0.1", quiet: 
         raise AtlasError(f"cannot read {folder} ({exc.strerror}); choose another --dir") from exc
     if not has_site:
         raise AtlasError(f"{folder} holds no built site (no index.html); run `conductor-atlas build` first")
+    context = tls_context(cert, key) if cert is not None else None
     handler = functools.partial(SiteHandler, directory=str(folder))
     try:
         server = http.server.ThreadingHTTPServer((host, port), handler)
     except OSError as exc:
         raise AtlasError(f"cannot listen on {host}:{port} ({exc.strerror}); try --port") from exc
     server.quiet = quiet  # type: ignore[attr-defined]
+    if context is not None:
+        # the handshake happens in the request's thread, so a slow or plain-http client holds up no other
+        server.socket = context.wrap_socket(server.socket, server_side=True, do_handshake_on_connect=False)
     return server
 
 
-def serve(folder: Path, port: int = 8000) -> None:
-    server = make_server(folder, port)
-    print(f"Serving {folder} on http://127.0.0.1:{server.server_address[1]}/ (Ctrl-C stops)")
+def serve(folder: Path, port: int = 8000, host: str = "127.0.0.1", cert: Path | None = None,
+          key: Path | None = None) -> None:
+    server = make_server(folder, port, host, cert=cert, key=key)
+    scheme = "https" if cert is not None else "http"
+    shown = "this machine's address" if host in ("0.0.0.0", "::", "") else host
+    print(f"Serving {folder} on {scheme}://{shown}:{server.server_address[1]}/ (Ctrl-C stops)")
+    if cert is None and host not in ("127.0.0.1", "localhost", "::1"):
+        print("Over plain http, other devices read the site but do not keep it for offline use; "
+              "serve it with --cert and --key (https) for that.")
     try:
         server.serve_forever()
     except KeyboardInterrupt:
