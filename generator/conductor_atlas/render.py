@@ -7,6 +7,7 @@ Templates run under StrictUndefined with autoescaping; Markdown notes have raw H
 from __future__ import annotations
 
 import json
+import re
 from dataclasses import dataclass
 from pathlib import Path
 
@@ -63,6 +64,12 @@ SAFE_URL_SCHEMES = ("http", "https", "mailto")
 
 # What a folder without pages of its own holds (folder_pages), by its top-level name
 FOLDER_CONTENTS = {"static": "styles, scripts and icons", "js": "the calculators' scripts"}
+
+
+def keep_units(text: str) -> str:
+    """A no-break space after a digit ("1.5 mm²", "at 20 °C", "4/0 AWG"): a narrow or printed table
+    never parts a number from its unit. For the pages only; CSV and JSON keep plain spaces."""
+    return re.sub(r"(?<=\d) (?=\S)", "\u00a0", text)
 
 
 def url_is_safe(url: str) -> bool:
@@ -216,6 +223,7 @@ class Renderer:
             lstrip_blocks=True,
             keep_trailing_newline=True,
         )
+        self.env.filters["keep_units"] = keep_units
         self.version = version
 
     def page(self, template: str, path: str, **context) -> bytes:
