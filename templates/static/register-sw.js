@@ -18,6 +18,7 @@
     return;
   }
   if (!document.currentScript) return;
+  root.classList.add('can-keep');   // the status line's room is kept from the first paint: no jump later
   var worker = new URL('../sw.js', document.currentScript.src).href;
 
   var latest = '';
@@ -33,9 +34,9 @@
   navigator.serviceWorker.addEventListener('message', function (event) {
     var data = event.data || {};
     if (data.type === 'offline-progress') {
-      say('Saving for offline use: ' + data.stored + ' of ' + data.total + ' files stored. Stay on the network until it says saved.', 'saving');
+      say('Saving for offline use: ' + data.stored + ' of ' + data.total + ' files stored; stay on the network.', 'saving');
     } else if (data.type === 'offline-saved') {
-      say('Saved for offline use, edition ' + data.edition + ' (' + data.total + ' files): this device reads the whole site without a network.', 'saved');
+      say('Saved for offline use, edition ' + data.edition + ': works without a network.', 'saved');
     } else if (data.type === 'offline-failed') {
       say('Not saved for offline use: ' + data.reason + '. Reload the page to try again.', 'failed');
     }
