@@ -214,3 +214,39 @@ def test_an_overlay_cannot_take_over_a_shipped_name(tmp_path, name, alias):
     assert result.returncode == 1, result.stdout
     assert "aaa.toml: " in result.stderr and "clashes with the" in result.stderr
     assert "Traceback" not in result.stderr
+
+
+# --- 5. the model field: any case, and the material's models named ------------------------------------
+@pytest.mark.parametrize("typed", ["Linear", "LINEAR", "Auto"])
+def test_the_model_field_ignores_case(catalogue, typed):
+    outcome = calculate("resistivity", {"material": "IACS", "temperature": "75 °C", "model": typed}, catalogue)
+    assert outcome["errors"] == {}
+
+
+def test_an_unknown_model_lists_the_materials_models(catalogue):
+    outcome = calculate("resistivity", {"material": "IACS", "model": "cubic"}, catalogue)
+    message = outcome["errors"]["model"]
+    assert message.startswith("unknown model “cubic”; for Standard annealed copper choose auto, linear")
+    assert "not available: " in message and "table (no sourced ρ(T) table on record)" in message
+
+
+# --- 7. sanity warnings on absurd but parseable inputs --------------------------------------------------
+def test_above_the_melting_point_is_said(catalogue):
+    outcome = calculate("resistivity", {"material": "Cu", "temperature": "5000 °C"}, catalogue)
+    # copper melts at 1084.62 °C (ITS-90 fixed point; the data file's melting point)
+    assert any("is above the melting point of Copper (high purity) (1084." in w for w in outcome["warnings"])
+
+
+def test_a_film_below_one_atomic_layer_is_warned(catalogue):
+    outcome = calculate("thin-film", {"material": "film-copper", "thickness": "0.1 nm"}, catalogue)
+    assert any("thinner than one atomic layer" in w for w in outcome["warnings"])
+
+
+def test_a_current_past_fusing_is_warned(catalogue):
+    outcome = calculate("resistance", {"material": "IACS", "length": "1 m", "size": "2.5 mm2", "current": "60 kA"},
+                        catalogue)
+    # Preece: 80.0 A/mm^1.5 · (1.784 mm)^1.5 = 191 A for 2.5 mm² (d = sqrt(4 · 2.5 / π) mm)
+    assert any("above the fusing current" in w and "191 A" in w for w in outcome["warnings"])
+    quiet = calculate("resistance", {"material": "IACS", "length": "1 m", "size": "2.5 mm2", "current": "16 A"},
+                      catalogue)
+    assert not any("fusing" in w for w in quiet["warnings"])

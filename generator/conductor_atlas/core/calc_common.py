@@ -3,14 +3,14 @@ the mean free path on record."""
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
-from conductor_atlas.core.numfmt import format_number, format_si
+from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import add_error, add_warning, has_errors
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_temperature
 
 
 def material_resistivity(outcome, m, t, inputs):
     """ρ of m at t [K] by the model asked in inputs["model"] ("auto" by default), or None."""
-    model = field_text(inputs, "model")
+    model = field_text(inputs, "model").lower()  # a tablet capitalises the first letter: "Linear"
     if len(model) == 0:
         model = "auto"
     try:
@@ -23,8 +23,17 @@ def material_resistivity(outcome, m, t, inputs):
         return None
     for w in found["warnings"]:
         add_warning(outcome, w)
+    warn_if_molten(outcome, m, t)
     outcome["model"] = found["label"]
     return found["rho"]
+
+
+def warn_if_molten(outcome, m, t):
+    """Warn when t [K] is above the melting point on record for m: no solid conductor exists there."""
+    if m["melting_point"] > 0 and t > m["melting_point"]:
+        add_warning(outcome, temperature_text(t) + " is above the melting point of " + m["name"] + " ("
+                    + temperature_text(m["melting_point"]) + "): there is no solid conductor at this temperature, "
+                    "and the number shown is only the model carried past its end")
 
 
 def material_at_temperature(outcome, inputs, catalogue, check=None):

@@ -1,5 +1,7 @@
 """Calculator "resistance": a conductor run's resistance, voltage drop, I²R loss and AC resistance."""
 
+import math
+
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
@@ -46,6 +48,25 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
 def ac_ratio(outcome, size, rho, f, mu_r):
     """R_ac/R_dc of one isolated conductor of the size's shape, with its method (core.ac_layout)."""
     return ac_ratio_for(outcome, size, ["single"], rho, f, mu_r)
+
+
+# Preece (1884): a bare wire in still air fuses at I = a · d^1.5; for copper a = 10244 A/in^1.5, i.e.
+# 80.0 A/mm^1.5 (W. H. Preece, Proc. R. Soc. London 36, 464, 1884; constant from memory of the paper's
+# table). Used for every material as a marker of "far past fusing": copper has the highest constant of
+# the common conductor metals, so for others the warning comes late, never early.
+PREECE_COPPER = 10244.0 / math.pow(0.0254, 1.5)  # [A/m^1.5]
+
+
+def warn_if_fusing(outcome, current, area):
+    """Warn when ``current`` [A] exceeds Preece's fusing current of a bare copper wire of the same
+    cross-section ``area`` [m²] (round: d = sqrt(4A/π))."""
+    d = math.sqrt(4.0 * area / math.pi)
+    fusing = PREECE_COPPER * math.pow(d, 1.5)
+    if current > fusing:
+        add_warning(outcome, "a current of " + format_si(current, "A", 3) + " is above the fusing current of a bare "
+                    "copper wire of this cross-section in air (" + format_si(fusing, "A", 3) + " by Preece's rule, "
+                    "I = 80.0 A/mm^1.5 · d^1.5, Preece 1884, constant from memory): the conductor would melt, so the "
+                    "loss and voltage drop shown cannot be reached in steady state")
 
 
 def mass_text(mass):
@@ -102,6 +123,7 @@ def calculate(inputs, catalogue):
         add_result(outcome, "power_loss", p, "W", format_si(p, "W", 4))
         j = dc.current_density(current, area)
         add_result(outcome, "current_density", j, "A/m²", format_number(j / 1e6, 4) + " A/mm²")
+        warn_if_fusing(outcome, current, area)
     if f is not None and f > 0:
         if m["mu_r"] > 1.5:
             add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(m["mu_r"], 3)

@@ -46,7 +46,8 @@ KAPPA_CHECKED = [1e-3, 1e3]
 KAPPA_CHECKED_GRAINS = [1e-2, 1e2]
 ALPHA_CHECKED = [1e-2, 10.0]
 KAPPA_MIN = 1e-6  # below this d/l the graded panels no longer resolve the boundary layer
-THICKNESS_MIN = 1e-10  # [m] about one atomic layer
+THICKNESS_MIN = 1e-10  # [m] below this the thickness is refused
+ONE_LAYER = 2.0e-10  # [m] about one atomic layer: copper's (111) spacing a/√3 = 0.209 nm (a = 0.3615 nm, Kittel ch. 1)
 
 
 def read_fraction(outcome, inputs, field, what, default_text):
@@ -116,6 +117,10 @@ def calculate(inputs, catalogue):
     if require_positive(outcome, "thickness", d, "thickness") and d < THICKNESS_MIN:
         add_error(outcome, "thickness", "is thinner than one atomic layer (0.1 nm); the film models need a "
                                         "continuous film")
+    if d is not None and d >= THICKNESS_MIN and d < ONE_LAYER:
+        add_warning(outcome, "a film of " + format_si(d, "m", 3) + " is thinner than one atomic layer (about 0.2 nm: "
+                    "the (111) layer spacing of copper is a/√3 = 0.209 nm with a = 0.3615 nm, Kittel, Introduction "
+                    "to Solid State Physics, ch. 1): no continuous film and no film model holds")
     p = read_fraction(outcome, inputs, "specularity", "specularity", "0")
     reflection = read_fraction(outcome, inputs, "reflection", "the reflection coefficient", "")
     grain = None

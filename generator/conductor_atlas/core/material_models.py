@@ -29,7 +29,8 @@ MODEL_LABELS = {
 MODEL_CHOICES = ["auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen"]
 
 # The "model" field of every calculator form: [label, hint]
-MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen or callendar-van-dusen"]
+MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen, callendar-van-dusen or matthiessen "
+                    "(any case; the models of the chosen material are listed when another is typed)"]
 
 
 def has_linear(m):
@@ -92,6 +93,31 @@ def available_models(m):
     if has_matthiessen(m):
         out.append("matthiessen")
     return out
+
+
+# what each model needs, for the message that explains why it is not offered for a material
+MODEL_NEEDS = {
+    "linear": "no temperature coefficient on record",
+    "table": "no sourced ρ(T) table on record",
+    "bloch-gruneisen": "no ρ(T) table to fit",
+    "callendar-van-dusen": "not a platinum sensor metal",
+    "matthiessen": "no base metal on record",
+}
+
+
+def model_choice_message(m, model):
+    """The models there are for m, and why the others are not: for an unknown model name."""
+    have = available_models(m)
+    text = "unknown model “" + model + "”; for " + m["name"] + " choose auto"
+    for key in have:
+        text = text + ", " + key
+    missing = []
+    for key in MODEL_CHOICES:
+        if key != "auto" and not (key in have):
+            missing.append(key + " (" + MODEL_NEEDS[key] + ")")
+    if len(missing) > 0:
+        text = text + "; not available: " + ", ".join(missing)
+    return text
 
 
 def cvd_ratio(m, t):
@@ -194,7 +220,7 @@ def resistivity_at(m, t, model):
                             + temperature_text(m["t_ref"]) + " can be computed", "temperature")
         rho = m["rho_ref"]
     else:
-        raise CoreError("unknown model “" + model + "”; choose one of: " + ", ".join(MODEL_CHOICES), "model")
+        raise CoreError(model_choice_message(m, model), "model")
     return {"rho": rho, "model": key, "label": MODEL_LABELS[key], "warnings": warnings}
 
 
