@@ -80,3 +80,15 @@ def test_a_6101_busbar_at_75_degrees(tablet_page, served_site, catalogue):
     assert "Matthiessen" in pg.text_content("[data-model]")
     assert pg.text_content("[data-material]").startswith("Material: Aluminium alloy 6101")
     assert pg.errors == []
+
+
+@pytest.mark.parametrize("typed, material_id", [("C11000", "copper-annealed"), ("A91350", "aluminium-1350")])
+def test_d_designations_resolve(tablet_page, served_site, catalogue, typed, material_id):
+    pg = tablet_page
+    open_resistance(pg, served_site)
+    inputs = {"material": typed, "length": "10 m", "size": "2.5 mm2"}
+    type_inputs(pg, inputs)
+    assert_page_matches_core(pg, catalogue, inputs)
+    assert f"id {material_id})" in pg.text_content("[data-material]")
+    assert pg.text_content("#in-resistance-material-error") == ""
+    assert pg.errors == []
