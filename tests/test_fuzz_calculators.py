@@ -3,7 +3,10 @@
 Property (for every registered calculator, so new ones are covered without editing this file):
 an outcome either has results, each a finite number whose text shows no "NaN", "Infinity",
 "undefined", "nan" or "inf", or it has no results and a non-empty message under
-``errors[field]`` for an input field of that calculator. Nothing raises, and the transpiled core
+``errors[field]`` for an input field of that calculator. The one exception: an optional field
+that the calculator lists in ``SIDE_FIELDS`` may carry an error beside results, provided none of
+the results that field feeds is shown (a current without unit leaves the resistance standing but
+drops the voltage drop). Nothing raises, and the transpiled core
 in node gives the same outcome as CPython (numbers to 1e-12 relative, text exact; the same
 tolerance and reason as tests/test_differential.py).
 
@@ -143,8 +146,15 @@ def problems_with(name, outcome):
             found.append(f"errors[{key!r}] is not a message: {message!r}")
         elif leaked(message, typed):
             found.append(f"errors[{key!r}] shows a non-number: {message!r}")
+    side_fields = getattr(CALCULATORS[name], "SIDE_FIELDS", {})
     if errors and outcome["results"]:
-        found.append(f"both errors {sorted(errors)} and results {sorted(outcome['results'])}")
+        # allowed only for optional fields declared in SIDE_FIELDS, and without the results they feed
+        if any(key not in side_fields for key in errors):
+            found.append(f"both errors {sorted(errors)} and results {sorted(outcome['results'])}")
+        for key in errors:
+            fed = [r for r in side_fields.get(key, []) if r in outcome["results"]]
+            if fed:
+                found.append(f"error under {key!r} but results that need it are shown: {fed}")
     if not errors and not outcome["results"]:
         found.append("neither results nor an error")
     for key, result in outcome["results"].items():
@@ -185,6 +195,10 @@ def test_every_registered_module_keeps_the_calculator_contract():
         assert callable(module.calculate), module.__name__
         assert set(module.FIELDS) == set(module.FIELD_INFO), module.__name__
         assert set(module.DEFAULTS) <= set(module.FIELDS), module.__name__
+        labels = {key for key, _ in module.RESULT_LABELS}
+        for field, fed in getattr(module, "SIDE_FIELDS", {}).items():
+            assert field in module.FIELDS, (module.__name__, field)
+            assert set(fed) <= labels, (module.__name__, field, set(fed) - labels)
 
 
 def hand_picked_cases(catalogues):

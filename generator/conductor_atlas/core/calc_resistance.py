@@ -36,6 +36,10 @@ RESULT_LABELS = [
     ["power_loss", "I²R loss"], ["current_density", "Current density"], ["skin_depth", "Skin depth"],
     ["ac_dc_ratio", "AC/DC ratio"], ["resistance_ac", "AC resistance"], ["power_loss_ac", "I²R loss at AC"],
 ]
+# optional input -> the results that need it: a problem in that field is shown under it and drops only
+# these results (the resistance does not depend on the current or the frequency)
+SIDE_FIELDS = {"current": ["voltage_drop", "power_loss", "current_density", "power_loss_ac"],
+               "frequency": ["skin_depth", "ac_dc_ratio", "resistance_ac", "power_loss_ac"]}
 # result -> the input a non-finite value of it comes from, when the results before it are finite
 # (outcome.check_finite_results); any other result: "length"
 CAUSES = {"area": "size", "voltage_drop": "current", "power_loss": "current", "current_density": "current",

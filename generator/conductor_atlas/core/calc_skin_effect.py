@@ -35,6 +35,10 @@ RESULT_LABELS = [
     ["mean_free_path", "Electron mean free path ℓ (estimate)"],
     ["path_ratio", "Mean free path over skin depth ℓ/δ"],
 ]
+# optional input -> the results that need it: a problem in that field is shown under it and drops only
+# these results (skin depth and surface resistance do not depend on the size)
+AC_RESULTS = ["area", "resistance", "ac_dc_ratio", "ac_method", "bar_share", "resistance_ac", "depth_ratio"]
+SIDE_FIELDS = {"size": AC_RESULTS, "arrangement": AC_RESULTS}
 CAUTION = ("An isolated straight conductor: proximity to other conductors, stranding and magnetic armour raise the "
            "AC resistance further. A physics estimate, not a cable rating.")
 
