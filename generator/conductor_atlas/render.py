@@ -20,6 +20,7 @@ from markupsafe import Markup
 
 from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows, compare_table
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
+from conductor_atlas.material_calculators import fitting_calculators, link_key
 from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.lookup import TRADE_WORDS
 from conductor_atlas.core.text_match import name_key
@@ -259,8 +260,8 @@ class Renderer:
             "material.html", f"{base}/index.html", view=view, m=m, card=card_rows(view, value_statuses),
             table_status=value_statuses.get("resistivity_table"), cite_sources=cite_sources,
             notes_html=markdown_safe(m.notes), sources=used, title=m.name,
-            calc_json=catalogue, charts=charts, class_title=CLASSES[m.klass], calc=calc_spec("resistance", {"material": m.id}),
-            material_key=TRADE_WORDS[m.id][2] if m.id in TRADE_WORDS else m.id)  # "copper" is the grade: link "Cu"
+            calc_json=catalogue, charts=charts, more_calcs=fitting_calculators(m.id, catalogue), class_title=CLASSES[m.klass], calc=calc_spec("resistance", {"material": m.id}),
+            material_key=link_key(m.id))
         for table in view.tables:
             out[f"{base}/{table.id}.csv"] = table.to_csv().encode("utf-8")
             out[f"{base}/{table.id}.json"] = table.to_json().encode("utf-8")

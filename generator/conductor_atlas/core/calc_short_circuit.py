@@ -75,20 +75,32 @@ def heat_integral_of(m, model, lo, hi, cv):
 
 
 def final_temperature(m, model, t_i, target, cv, cap):
-    """θf [K] where the heat integral from t_i reaches ``target`` = J² t, by bisection; -1.0 beyond ``cap``."""
+    """θf [K] where the heat integral from t_i reaches ``target`` = J² t; -1.0 beyond ``cap``.
+
+    Newton's method on F(θ) = ∫ c_v/ρ dθ − target, whose slope is c_v/ρ(θ), kept inside a
+    bisection bracket [lo, hi] (a step that leaves it bisects instead); stops when a step is below
+    1e-10 of θ. About five integrals instead of the 35 of bisection alone.
+    """
     if heat_integral_of(m, model, t_i, cap, cv) < target:
         return -1.0
     lo = t_i
     hi = cap
+    theta = 0.5 * (lo + hi)
     for i in range(200):
-        mid = 0.5 * (lo + hi)
-        if heat_integral_of(m, model, t_i, mid, cv) < target:
-            lo = mid
+        gap = heat_integral_of(m, model, t_i, theta, cv) - target
+        if gap < 0:
+            lo = theta
         else:
-            hi = mid
-        if hi - lo <= 1e-10 * hi:
-            break
-    return 0.5 * (lo + hi)
+            hi = theta
+        slope = cv / resistivity_at(m, theta, model)["rho"]
+        step = gap / slope
+        guess = theta - step
+        if not (guess > lo and guess < hi):
+            guess = 0.5 * (lo + hi)
+        if abs(guess - theta) <= 1e-10 * theta or hi - lo <= 1e-10 * hi:
+            return guess
+        theta = guess
+    return theta
 
 
 def guard_squares(outcome, current, size):
