@@ -12,6 +12,7 @@ from dataclasses import dataclass
 from pathlib import Path
 
 from conductor_atlas import __version__
+from conductor_atlas.build_stamp import BuildInputs
 from conductor_atlas.cache import BuildCache, files_key, folder_key
 from conductor_atlas.derive import derive_material
 from conductor_atlas.load import load_dataset
@@ -99,7 +100,10 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
     return add_offline_files(files, bundles)  # last: the service worker lists every other file
 
 
-def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
+def build(out: Path, extra_data: list[Path] | None = None, inputs: BuildInputs | None = None) -> BuildReport:
+    """Build the site into ``out``. ``inputs``: the stats of the build's inputs taken before it
+    started (the command line's up-to-date check); recorded beside the folder once it is published,
+    inside the output lock, so the next ``conductor-atlas build`` can tell that nothing changed."""
     start = time.perf_counter()
     # The output lock is taken first: a second build into the same folder is refused at once.
     with output_lock(out) as folder:
@@ -110,7 +114,10 @@ def build(out: Path, extra_data: list[Path] | None = None) -> BuildReport:
             dataset = cache.get("site:data", folder_key(folders), lambda: load_with_record(folders))
             files = assemble(dataset, cache, transpile)
         published = publish(files, folder, lock_held=True)
+        report = BuildReport(out=published.folder, materials=len(dataset.materials), files=len(files),
+                             bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start,
+                             written=published.written)
+        if inputs is not None:
+            inputs.remember({"materials": report.materials, "files": report.files, "bytes": report.bytes})
     cache.prune()
-    return BuildReport(out=published.folder, materials=len(dataset.materials), files=len(files),
-                       bytes=sum(len(b) for b in files.values()), seconds=time.perf_counter() - start,
-                       written=published.written)
+    return report

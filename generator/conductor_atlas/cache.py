@@ -31,11 +31,11 @@ from pathlib import Path
 from types import MappingProxyType
 from typing import Callable, TypeVar
 
+from conductor_atlas.build_stamp import LIBRARIES
 from conductor_atlas.paths import CACHE_DIR, PACKAGE_DIR, TEMPLATES_DIR
 
 T = TypeVar("T")
 FORMAT = b"conductor-atlas build cache 1"
-LIBRARIES = ("jinja2", "markdown", "markupsafe", "pint", "numpy", "transcrypt")
 # Size the entry folder may reach before the oldest entries go: about 40 builds of the shipped data
 # (6 MB each). Common practice (no source): a cache bounded by size, least recently used out first.
 LIMIT_BYTES = 250 * 1000 * 1000

@@ -11,15 +11,19 @@ import json
 import sys
 from pathlib import Path
 
-from conductor_atlas.core.calculators import CALCULATORS, calculate
 
 
 def option_name(field: str) -> str:
     return "--" + field.replace("_", "-")
 
 
-def add_calc_parser(sub) -> None:
+def add_calc_parser(sub, with_calculators: bool = True) -> None:
+    """The ``calc`` command; its per-calculator options only ``with_calculators`` (they import the
+    core, which other commands, ``build`` above all, do not need)."""
     p_calc = sub.add_parser("calc", help="run a calculator in the terminal (same core as the web pages)")
+    if not with_calculators:
+        return
+    from conductor_atlas.core.calculators import CALCULATORS
     calcs = p_calc.add_subparsers(dest="calculator", metavar="NAME")
     calcs.required = True
     for name in sorted(CALCULATORS):
@@ -38,6 +42,7 @@ def add_calc_parser(sub) -> None:
 
 
 def inputs_from(args: argparse.Namespace) -> dict[str, str]:
+    from conductor_atlas.core.calculators import CALCULATORS
     module = CALCULATORS[args.calculator]
     inputs = {}
     for field in module.FIELDS:
@@ -59,6 +64,7 @@ def run_calc(args: argparse.Namespace) -> int:
     from conductor_atlas.build import data_folders
     from conductor_atlas.derive import catalogue_of
     from conductor_atlas.load import load_dataset
+    from conductor_atlas.core.calculators import CALCULATORS, calculate
     catalogue = catalogue_of(load_dataset(data_folders(args.data)))
     module = CALCULATORS[args.calculator]
     outcome = calculate(args.calculator, inputs_from(args), catalogue)

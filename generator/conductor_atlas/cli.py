@@ -9,14 +9,18 @@ from __future__ import annotations
 import argparse
 import os
 import sys
+import time
 from pathlib import Path
 
 from conductor_atlas import __version__
+from conductor_atlas.build_stamp import BuildInputs
 from conductor_atlas.calc_cli import add_calc_parser, run_calc
 from conductor_atlas.errors import AtlasError, DataError
 
 
-def build_parser() -> argparse.ArgumentParser:
+def build_parser(command: str | None = None) -> argparse.ArgumentParser:
+    """The parser; for a ``command`` other than calc, without the calculators' options (which import
+    the core)."""
     parser = argparse.ArgumentParser(prog="conductor-atlas",
                                      description="Build the Conductor Atlas reference site from sourced data.")
     parser.add_argument("--version", action="version", version=f"conductor-atlas {__version__}")
@@ -49,13 +53,23 @@ def build_parser() -> argparse.ArgumentParser:
                        help="folder to write it in (default: my-materials); build with --data DIR")
     p_new.add_argument("--class", dest="klass", default="copper-alloy", help="material class (default: copper-alloy)")
 
-    add_calc_parser(sub)
+    add_calc_parser(sub, with_calculators=command in (None, "calc"))
     return parser
 
 
 def cmd_build(args: argparse.Namespace) -> int:
+    # Decide "nothing changed" from file stats before importing what a build needs (numpy, pint,
+    # jinja2, markdown: most of a no-change build's time); see build_stamp.py.
+    started = time.perf_counter()
+    inputs = BuildInputs(args.out, args.data)
+    previous = inputs.previous_build()
+    if previous is not None:
+        print(f"Up to date: {previous['materials']} materials in {inputs.out} ({previous['files']} files, "
+              f"{previous['bytes'] / 1024:.0f} KiB); no data, template, code or option changed since the last "
+              f"build (checked in {time.perf_counter() - started:.2f} s)")
+        return 0
     from conductor_atlas.build import build
-    report = build(args.out, args.data)
+    report = build(args.out, args.data, inputs)
     same = "" if report.written else "; the folder already held this site, nothing was rewritten"
     print(f"Built {report.materials} materials into {report.out} "
           f"({report.files} files, {report.bytes / 1024:.0f} KiB) in {report.seconds:.2f} s{same}")
@@ -91,7 +105,9 @@ COMMANDS = {"new-material": cmd_new_material, "build": cmd_build, "check": cmd_c
 
 
 def main(argv: list[str] | None = None) -> int:
-    args = build_parser().parse_args(argv)
+    given = sys.argv[1:] if argv is None else argv
+    command = next((a for a in given if not a.startswith("-")), None)
+    args = build_parser(command).parse_args(argv)
     try:
         code = COMMANDS[args.command](args)
         sys.stdout.flush()  # a closed pipe shows here, inside the try, not at interpreter exit

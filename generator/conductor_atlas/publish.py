@@ -26,10 +26,10 @@ from contextlib import contextmanager
 from pathlib import Path
 from typing import Iterator, NamedTuple
 
+from conductor_atlas.build_stamp import MARKER, file_stamps, record_path  # noqa: F401  (MARKER: used by tests)
 from conductor_atlas.cache import files_key
 from conductor_atlas.errors import BuildError
 
-MARKER = ".conductor-atlas-site"
 MARKER_TEXT = "Built by conductor-atlas; this folder is replaced on each build.\n"
 
 
@@ -69,31 +69,6 @@ def output_lock(out: Path) -> Iterator[Path]:
         except BlockingIOError as exc:
             raise BuildError(f"another build is writing {out} right now; wait for it to finish") from exc
         yield out
-
-
-def record_path(out: Path) -> Path:
-    return out.parent / f".{out.name}.published.json"
-
-
-def file_stamps(folder: Path) -> dict[str, list[int]] | None:
-    """relative path -> [size, mtime_ns] of every file under ``folder`` but the marker; None if
-    something there is not a plain file or folder (a link, a socket …)."""
-    stamps: dict[str, list[int]] = {}
-    pending = [(str(folder), "")]
-    while pending:
-        path, prefix = pending.pop()
-        with os.scandir(path) as entries:
-            for entry in entries:
-                rel = prefix + entry.name
-                if entry.is_dir(follow_symlinks=False):
-                    pending.append((entry.path, rel + "/"))
-                elif entry.is_file(follow_symlinks=False):
-                    if rel != MARKER:
-                        info = entry.stat(follow_symlinks=False)
-                        stamps[rel] = [info.st_size, info.st_mtime_ns]
-                else:
-                    return None
-    return stamps
 
 
 def site_unchanged(files: dict[str, bytes], out: Path, digest: str) -> bool:
