@@ -11,7 +11,7 @@ from dataclasses import dataclass
 from conductor_atlas.charts import Series, line_chart
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.constants import TWENTY_CELSIUS
-from conductor_atlas.core.material_models import resistivity_or_none
+from conductor_atlas.core.material_models import resistivity_or_none, within_model
 from conductor_atlas.derive import MaterialView
 
 
@@ -24,14 +24,14 @@ class Chart:
 
 
 def model_curve(record: dict, t_lo: float, t_hi: float, samples: int = 60) -> tuple[list[float], list[float]]:
-    """(T [K], ρ [µΩ·cm]) along the auto model, only where it holds without warnings."""
+    """(T [K], ρ [µΩ·cm]) along the auto model, only where it holds (material_models.within_model)."""
     xs, ys = [], []
     for i in range(samples + 1):
         t = t_lo + (t_hi - t_lo) * i / samples
         found = resistivity_or_none(record, t)
         if found is None:
             continue
-        if found["warnings"]:
+        if not within_model(found):
             xs.append(t)
             ys.append(float("nan"))  # a gap in the line where no model holds
             continue

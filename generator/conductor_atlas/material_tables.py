@@ -13,7 +13,7 @@ from conductor_atlas.core import size_effect as film
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.core.geometry import IEC60228_SIZES_MM2, awg_area, awg_name, diameter_from_area
-from conductor_atlas.core.material_models import MODEL_LABELS, resistivity_or_none
+from conductor_atlas.core.material_models import MODEL_LABELS, matthiessen_label, resistivity_or_none, within_model
 from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_plain
 from conductor_atlas.model import Material
@@ -36,9 +36,9 @@ MS_REFLECTION = 0.3
 
 
 def quiet_rho(record: dict, t: float) -> tuple[float, str] | None:
-    """ρ by the auto model when that model covers t without any warning; else None."""
+    """ρ by the auto model when that model covers t (material_models.within_model); else None."""
     found = resistivity_or_none(record, t)
-    if found is None or found["warnings"]:
+    if not within_model(found):
         return None
     return found["rho"], found["model"]
 
@@ -61,12 +61,23 @@ def size_row_id(mm2: float) -> str:
     return "s-" + format_plain(mm2, 6).replace(".", "p") + "mm2"
 
 
+def range_ends(record: dict) -> list[dict]:
+    """[record at the low end, record at the high end] of a recorded ρ range (core.ranges: the whole
+    ρ(T) scaled, so the range keeps its relative width at every temperature); [] without a range."""
+    if not has_range(record):
+        return []
+    return [scaled_record(record, record["rho_low_ratio"]), scaled_record(record, record["rho_high_ratio"])]
+
+
+RANGE_NOTE = ("The low and high columns run the same model on the resistivity moved to each end of the recorded "
+              "range; the range keeps its relative width at every temperature")
+
+
 def resistivity_temperature(m: Material, record: dict) -> Table | None:
     temps = sorted({round(t, 6) for t in CRYO_K + [ZERO_CELSIUS + c for c in TABLE_C]})
     rho20 = quiet_rho(record, TWENTY_CELSIUS)
     # a recorded ρ range: the same models run on the record moved to each end (core.ranges)
-    ranged = ([scaled_record(record, record["rho_low_ratio"]), scaled_record(record, record["rho_high_ratio"])]
-              if has_range(record) else [])
+    ranged = range_ends(record)
     rows, models = [], set()
     for t in temps:
         found = quiet_rho(record, t)
@@ -96,6 +107,9 @@ def resistivity_temperature(m: Material, record: dict) -> Table | None:
         pieces.append("table: linear interpolation between the sourced points")
     if "bloch-gruneisen" in models:
         pieces.append(f"Bloch–Grüneisen fit (Θ = {format_number(record['bg_theta'], 4)} K)")
+    if "matthiessen" in models:
+        pieces.append(matthiessen_label(record) + ": ρ(T) = ρ(20 °C) + ρ_base(T) − ρ_base(20 °C), an estimate; "
+                      "check against the supplier's data where it matters")
     if "callendar-van-dusen" in models:
         pieces.append("Callendar–Van Dusen (IEC 60751) ratio applied to the reference resistivity")
     return Table(
@@ -152,25 +166,32 @@ def skin_depth_table(m: Material, record: dict) -> Table | None:
         return None
     rho = found[0]
     mu_r = record["mu_r"]
+    end_rhos = [quiet_rho(end, TWENTY_CELSIUS)[0] for end in range_ends(record)]
     rows = []
     for f in FREQUENCIES:
         delta = skin.skin_depth(rho, f, mu_r)
         rs = skin.surface_resistance(rho, f, mu_r)
-        rows.append(Row(frequency_row_id(f), (f, delta * 1e6, rs * 1e3),
-                        (frequency_text(f), format_number(delta * 1e6, 4, True), format_number(rs * 1e3, 4, True))))
-    note = ""
+        ends = [skin.skin_depth(r, f, mu_r) * 1e6 for r in end_rhos]
+        rows.append(Row(frequency_row_id(f), (f, delta * 1e6, *ends, rs * 1e3),
+                        (frequency_text(f), format_number(delta * 1e6, 4, True),
+                         *[format_number(e, 4, True) for e in ends], format_number(rs * 1e3, 4, True))))
+    notes = []
     if mu_r > 1.5:
-        note = (f"μr = {format_number(mu_r, 3)} is a single small-signal figure; in iron, steel and nickel μr depends "
-                "strongly on field strength and frequency and falls towards 1 above the Curie point and at microwave "
-                "frequencies, so treat these depths as an order of magnitude")
+        notes.append(f"μr = {format_number(mu_r, 3)} is a single small-signal figure; in iron, steel and nickel μr depends "
+                     "strongly on field strength and frequency and falls towards 1 above the Curie point and at microwave "
+                     "frequencies, so treat these depths as an order of magnitude")
+    if end_rhos:
+        notes.append(RANGE_NOTE + " (δ ∝ √ρ)")
+    range_columns = ((Column("skin_depth_low", "Skin depth, low end of the recorded range", "µm"),
+                      Column("skin_depth_high", "Skin depth, high end of the recorded range", "µm")) if end_rhos else ())
     return Table(id="skin-depth", title="Skin depth and surface resistance vs frequency (20 °C)",
                  model=f"δ = √(ρ/(π·f·μ0·μr)), Rs = ρ/δ with ρ(20 °C) = {format_number(rho * 1e8, 5)} µΩ·cm, μr = {format_number(mu_r, 3)}",
                  validity="Good conductor (σ ≫ ωε), local response; at the highest frequencies surface roughness and the "
                           "anomalous skin effect (mean free path ≳ δ, at cryogenic temperatures) raise Rs",
                  sources=tuple(record["sources"]),
-                 columns=(Column("frequency", "Frequency", "Hz"), Column("skin_depth", "Skin depth", "µm"),
-                          Column("surface_resistance", "Surface resistance", "mΩ/□")),
-                 rows=tuple(rows), note=note)
+                 columns=(Column("frequency", "Frequency", "Hz"), Column("skin_depth", "Skin depth", "µm"))
+                 + range_columns + (Column("surface_resistance", "Surface resistance", "mΩ/□"),),
+                 rows=tuple(rows), note=". ".join(notes))
 
 
 def ac_ratio_table(m: Material, record: dict) -> Table | None:
@@ -183,18 +204,28 @@ def ac_ratio_table(m: Material, record: dict) -> Table | None:
     sizes += [(f"awg-{awg_name(n).replace('/', '-')}", f"{awg_name(n)} AWG", awg_area(n)) for n in AC_AWG]
     columns = [Column("size", "Size", "", numeric=False), Column("diameter", "Diameter", "mm")]
     columns += [Column(frequency_row_id(f).replace("-", "_"), f"R_ac/R_dc at {frequency_text(f)}", "") for f in AC_FREQUENCIES]
+    end_rhos = [quiet_rho(end, TWENTY_CELSIUS)[0] for end in range_ends(record)]
     rows = []
+    spread = 0.0  # the largest relative change of a ratio between the ends of the recorded ρ range
     for row_id, label, area in sizes:
         d = diameter_from_area(area)
         ratios = [skin.round_wire_resistance_ratio(d / 2.0, rho, f, mu_r) for f in AC_FREQUENCIES]
+        for r_end in end_rhos:
+            for f, ratio in zip(AC_FREQUENCIES, ratios):
+                moved = skin.round_wire_resistance_ratio(d / 2.0, r_end, f, mu_r)
+                spread = max(spread, abs(moved - ratio) / ratio)
         rows.append(Row(row_id, (label, d * 1e3, *ratios),
                         (label, format_number(d * 1e3, 4, True), *[format_number(r, 4, True) for r in ratios])))
+    note = ""
+    if end_rhos:
+        note = (f"At the ends of the recorded resistivity range these ratios move by at most "
+                f"{format_fixed(spread * 100, 2)} % (the same exact solution with ρ moved to each end)")
     return Table(id="ac-dc-ratio", title="AC/DC resistance ratio of solid round conductors (20 °C)",
                  model="Exact solution for an isolated solid round wire with Kelvin functions: R_ac/R_dc = "
                        "(x/2)·(ber x·bei′x − bei x·ber′x)/(ber′²x + bei′²x), x = √2·a/δ",
                  validity="Isolated, straight, solid wire; no proximity effect from nearby conductors; "
                           "stranded conductors of the same area show less skin effect (IEC 60287-1-1 k_s)",
-                 sources=tuple(record["sources"]), columns=tuple(columns), rows=tuple(rows))
+                 sources=tuple(record["sources"]), columns=tuple(columns), rows=tuple(rows), note=note)
 
 
 def resistance_tables(m: Material, record: dict) -> list[Table]:
@@ -205,28 +236,34 @@ def resistance_tables(m: Material, record: dict) -> list[Table]:
         return []
     columns_tail = tuple(Column(f"r_{format_fixed(t - ZERO_CELSIUS, 0)}c", f"R′ at {format_fixed(t - ZERO_CELSIUS, 0)} °C", "Ω/km")
                          for t, _ in usable)
+    ends20 = [quiet_rho(end, TWENTY_CELSIUS) for end in range_ends(record)]
+    ends20 = [e[0] for e in ends20 if e is not None] if len(ends20) == 2 and None not in ends20 else []
+    if ends20:
+        columns_tail += (Column("r_20c_low", "R′ at 20 °C, low end of the recorded range", "Ω/km"),
+                         Column("r_20c_high", "R′ at 20 °C, high end of the recorded range", "Ω/km"))
+    note = (RANGE_NOTE + ": at the other temperatures R′ spans the same fraction as at 20 °C") if ends20 else ""
     caveat = ("Nominal areas. IEC 60228 specifies a maximum resistance per size and class rather than an area, "
               "and stranded, tinned or compacted conductors differ; for a real cable use its datasheet")
     model = "R′ = ρ(T)/A with ρ(T) from the resistivity table's model; A = nominal area"
     metric_rows = []
     for a in IEC60228_SIZES_MM2:
-        r = [rho / (a * 1e-6) * 1000.0 for _, rho in usable]
+        r = [rho / (a * 1e-6) * 1000.0 for _, rho in usable] + [rho / (a * 1e-6) * 1000.0 for rho in ends20]
         metric_rows.append(Row(size_row_id(a), (a, *r), (format_number(a, 4), *[format_number(x, 4, True) for x in r])))
     awg_rows = []
     for n in AWG_SIZES:
         area = awg_area(n)
-        r = [rho / area * 1000.0 for _, rho in usable]
+        r = [rho / area * 1000.0 for _, rho in usable] + [rho / area * 1000.0 for rho in ends20]
         awg_rows.append(Row(f"awg-{awg_name(n).replace('/', '-')}", (f"{awg_name(n)}", area * 1e6, *r),
                             (f"{awg_name(n)}", format_number(area * 1e6, 4, True), *[format_number(x, 4, True) for x in r])))
     return [
         Table(id="resistance-metric", title="Resistance per length of metric sizes", model=model, validity=caveat,
               sources=tuple(record["sources"]),
-              columns=(Column("area", "Nominal area", "mm²"),) + columns_tail, rows=tuple(metric_rows)),
+              columns=(Column("area", "Nominal area", "mm²"),) + columns_tail, rows=tuple(metric_rows), note=note),
         Table(id="resistance-awg", title="Resistance per length of AWG sizes (solid)", model=model + "; AWG areas from "
               "ASTM B258 nominal diameters", validity="Solid round wire; stranded AWG conductors have a slightly larger "
               "resistance (lay factor)", sources=tuple(record["sources"]) + ("astm-b258",),
               columns=(Column("awg", "AWG", "", numeric=False), Column("area", "Area", "mm²")) + columns_tail,
-              rows=tuple(awg_rows)),
+              rows=tuple(awg_rows), note=note),
     ]
 
 

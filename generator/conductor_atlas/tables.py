@@ -63,6 +63,7 @@ class Table:
             "title": self.title,
             "model": self.model,
             "validity": self.validity,
+            "note": self.note,
             "sources": list(self.sources),
             "data_edition": EDITION_TOKEN,
             "columns": [{"key": c.key, "label": c.label, "unit": c.unit} for c in self.columns],
