@@ -31,7 +31,7 @@ from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import TEMPLATES_DIR
 from conductor_atlas.render import Renderer
-from conductor_atlas.search_index import build_index, index_json, shipped_index
+from conductor_atlas.search_index_file import build_index, index_json, shipped_index
 from conductor_atlas.transpile import transpile_core
 
 sys.path.insert(0, str(Path(__file__).resolve().parent))

@@ -18,7 +18,7 @@ from pathlib import Path
 
 import pytest
 
-from conductor_atlas.errors import DataError
+from conductor_atlas.atlas_errors import DataError
 from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import DATA_DIR, PROJECT_ROOT
 from conductor_atlas.schema import MAX_FILE_BYTES

@@ -14,7 +14,7 @@ import shutil
 import pytest
 
 from conductor_atlas.build import build
-from conductor_atlas.errors import BuildError, DataError
+from conductor_atlas.atlas_errors import BuildError, DataError
 from conductor_atlas.publish import MARKER, publish
 
 

@@ -10,7 +10,7 @@ import sys
 import pytest
 
 from conductor_atlas.cli import main
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 
 
 def run_cli(*args, cwd=None):

@@ -17,7 +17,7 @@ from pathlib import Path
 
 import pytest
 
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 from conductor_atlas.paths import PROJECT_ROOT
 from conductor_atlas.publish import MARKER, publish
 

@@ -43,7 +43,7 @@ from conductor_atlas.model import DataSet
 from conductor_atlas.paths import DATA_DIR, TEMPLATES_DIR
 from conductor_atlas.render import Renderer
 from conductor_atlas.schema import CLASSES, PROPERTIES
-from conductor_atlas.search_index import search_index_files
+from conductor_atlas.search_index_file import search_index_files
 
 DATA_EXAMPLES = int(os.environ.get("FUZZ_DATA_EXAMPLES", "200"))
 SERVE_EXAMPLES = int(os.environ.get("FUZZ_SERVE_EXAMPLES", "300"))

@@ -12,7 +12,7 @@ import subprocess
 import pytest
 
 from conductor_atlas.bundle import bundle, parse_module
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 from conductor_atlas.offline import (ICON_SIZES, MANIFEST, WORKER, add_offline_files, cache_version,
                                      png_size, precache_list)
 from tests.support.node_core import node_available

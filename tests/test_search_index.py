@@ -19,7 +19,7 @@ from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import DATA_DIR
 from conductor_atlas.core.search import search, search_entries
 from conductor_atlas.core.search_format import INDEX_FORMAT
-from conductor_atlas.search_index import build_index, index_json, page_title, shipped_entries, shipped_index
+from conductor_atlas.search_index_file import build_index, index_json, page_title, shipped_entries, shipped_index
 
 UREG = pint.UnitRegistry()
 

@@ -16,7 +16,7 @@ import urllib.request
 
 import pytest
 
-from conductor_atlas.errors import AtlasError
+from conductor_atlas.atlas_errors import AtlasError
 from conductor_atlas.serve import make_server
 
 EXPECTED = {

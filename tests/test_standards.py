@@ -9,7 +9,7 @@ import pytest
 
 from conductor_atlas.build import data_folders
 from conductor_atlas.derive import catalogue_of
-from conductor_atlas.errors import DataError
+from conductor_atlas.atlas_errors import DataError
 from conductor_atlas.load import load_dataset
 from conductor_atlas.paths import DATA_DIR
 

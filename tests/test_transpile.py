@@ -10,7 +10,7 @@ from pathlib import Path
 import pytest
 
 from conductor_atlas import transpile
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 
 
 def _js_files(folder: Path) -> dict[str, bytes]:

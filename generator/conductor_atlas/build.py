@@ -21,7 +21,7 @@ from conductor_atlas.offline import add_offline_files, classic_bundles, scripts_
 from conductor_atlas.paths import CACHE_DIR, DATA_DIR, STATIC_DIR, TEMPLATES_DIR
 from conductor_atlas.publish import check_replaceable, output_lock, publish
 from conductor_atlas.render import Renderer
-from conductor_atlas.search_index import search_index_files
+from conductor_atlas.search_index_file import search_index_files
 from conductor_atlas.transpile import PendingTranspile
 from conductor_atlas.verification import read_record
 from conductor_atlas.edition import Edition, current_edition, read_previous, stamp

@@ -27,7 +27,7 @@ import posixpath
 import re
 from dataclasses import dataclass, field
 
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 
 NAME = r"[A-Za-z_$][A-Za-z0-9_$]*"
 SPEC = r"'(?P<spec>\.{1,2}/[^'\s]+\.js)'"

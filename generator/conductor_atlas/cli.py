@@ -15,7 +15,7 @@ from pathlib import Path
 from conductor_atlas import __version__
 from conductor_atlas.build_stamp import BuildInputs
 from conductor_atlas.calc_cli import add_calc_parser, run_calc
-from conductor_atlas.errors import AtlasError, DataError
+from conductor_atlas.atlas_errors import AtlasError, DataError
 
 
 def build_parser(command: str | None = None) -> argparse.ArgumentParser:

@@ -19,7 +19,7 @@ from conductor_atlas.core.material_models import resistivity_at, resistivity_or_
 from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
 from conductor_atlas.model import DataSet, Material
 from conductor_atlas.standards import limits_record
-from conductor_atlas.tables import Table
+from conductor_atlas.derived_table import Table
 from conductor_atlas.material_tables import material_tables
 
 # The span of the linear model when a file gives none: −50 °C … +200 °C is the trade's usual

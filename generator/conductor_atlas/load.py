@@ -20,7 +20,7 @@ from types import MappingProxyType
 import pint
 
 from conductor_atlas.core.text_match import name_key
-from conductor_atlas.errors import DataError
+from conductor_atlas.atlas_errors import DataError
 from conductor_atlas.model import DataSet, Material, ResistivityTable, Source, Value
 from conductor_atlas.standards import read_standard, standard_files
 from conductor_atlas.schema import (CLASSES, MAX_FILE_BYTES, MAX_TABLE_POINTS, PROPERTIES, RECORD_KEYS,

@@ -1,6 +1,6 @@
 """The charts of a material page: ρ(T) (sourced points and the model curve) and δ(f), as SVG.
 
-Curves are sampled with the same core models the tables use; the charts module draws them.
+Curves are sampled with the same core models the tables use; svg_chart.py draws them.
 """
 
 from __future__ import annotations
@@ -8,7 +8,7 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from conductor_atlas.charts import Series, line_chart
+from conductor_atlas.svg_chart import Series, line_chart
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.constants import TWENTY_CELSIUS
 from conductor_atlas.core.material_models import resistivity_or_none, within_model

@@ -17,7 +17,7 @@ from conductor_atlas.core.material_models import MODEL_LABELS, matthiessen_label
 from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_plain
 from conductor_atlas.model import Material
-from conductor_atlas.tables import Column, Row, Table, temperature_row_id
+from conductor_atlas.derived_table import Column, Row, Table, temperature_row_id
 
 CRYO_K = [4.2, 10.0, 20.0, 40.0, 77.0, 100.0, 150.0, 200.0]
 TABLE_C = [-100.0, -40.0, -20.0, 0.0, 20.0, 40.0, 60.0, 70.0, 80.0, 90.0, 105.0, 120.0, 150.0, 200.0, 250.0,

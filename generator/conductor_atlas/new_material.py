@@ -9,7 +9,7 @@ from __future__ import annotations
 
 from pathlib import Path
 
-from conductor_atlas.errors import AtlasError
+from conductor_atlas.atlas_errors import AtlasError
 from conductor_atlas.load import ID_PATTERN
 from conductor_atlas.schema import CLASSES, PROPERTIES
 

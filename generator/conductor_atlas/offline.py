@@ -25,9 +25,9 @@ import jinja2
 from conductor_atlas import __version__
 from conductor_atlas.bundle import bundle
 from conductor_atlas.cache import files_key
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 from conductor_atlas.paths import TEMPLATES_DIR
-from conductor_atlas.search_index import INDEX_SCRIPT_PATH
+from conductor_atlas.search_index_file import INDEX_SCRIPT_PATH
 
 APP_NAME = "Conductor Atlas"
 SHORT_NAME = "Atlas"

@@ -28,7 +28,7 @@ from typing import Iterator, NamedTuple
 
 from conductor_atlas.build_stamp import MARKER, file_stamps, record_path  # noqa: F401  (MARKER: used by tests)
 from conductor_atlas.cache import files_key
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 
 MARKER_TEXT = "Built by conductor-atlas; this folder is replaced on each build.\n"
 

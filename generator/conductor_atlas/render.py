@@ -18,7 +18,7 @@ import markdown.treeprocessors
 
 from markupsafe import Markup
 
-from conductor_atlas.compare import COLUMNS as COMPARE_COLUMNS, compare_rows, compare_table
+from conductor_atlas.compare_page import COLUMNS as COMPARE_COLUMNS, compare_rows, compare_table
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
 from conductor_atlas.material_calculators import fitting_calculators, link_key
 from conductor_atlas.core.constants import ZERO_CELSIUS

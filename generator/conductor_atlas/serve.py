@@ -13,7 +13,7 @@ import ssl
 import urllib.parse
 from pathlib import Path
 
-from conductor_atlas.errors import AtlasError
+from conductor_atlas.atlas_errors import AtlasError
 
 CONTENT_TYPES = {
     ".js": "text/javascript",

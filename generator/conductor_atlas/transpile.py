@@ -20,7 +20,7 @@ import tempfile
 from importlib import metadata
 from pathlib import Path
 
-from conductor_atlas.errors import BuildError
+from conductor_atlas.atlas_errors import BuildError
 from conductor_atlas.paths import CACHE_DIR, CORE_DIR, PACKAGE_DIR
 
 FLAGS = ["-b", "-n", "-k"]

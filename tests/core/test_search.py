@@ -17,7 +17,7 @@ from conductor_atlas.core.search_prepare import prepare_index
 from conductor_atlas.core.search_text import compact, fold_text, osa_distance, token_match, tokens, typo_budget
 from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
-from conductor_atlas.search_index import build_index
+from conductor_atlas.search_index_file import build_index
 
 UREG = pint.UnitRegistry()
 

@@ -338,7 +338,7 @@ def search_cases():
     from conductor_atlas.build import data_folders
     from conductor_atlas.derive import derive
     from conductor_atlas.load import load_dataset
-    from conductor_atlas.search_index import build_index
+    from conductor_atlas.search_index_file import build_index
     dataset = load_dataset(data_folders())
     everything = build_index(dataset, derive(dataset), {})["entries"]
     # every material, but the tables of a few only: each case carries the whole list to node

@@ -1,6 +1,6 @@
 """Site search: text matching tolerant of case, accents and small typos, plus property filters.
 
-Runs in the browser (transpiled) on search-index.json, which ``conductor_atlas.search_index``
+Runs in the browser (transpiled) on search-index.json, which ``conductor_atlas.search_index_file``
 writes at build time with ``prepare_index``: the entries as lists (see E_*), the vocabulary with
 each word's letters as bits, and per word its postings (entry, field), so the browser parses the
 file and searches it with no preparation and no per-entry dicts. A query compares each query word

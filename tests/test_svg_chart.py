@@ -1,6 +1,6 @@
 """The SVG line-chart renderer: tick rules, pixel mapping, escaping, bad data, HTML validity.
 
-Tick expectations are worked by hand from the rules stated in charts.py's docstring:
+Tick expectations are worked by hand from the rules stated in svg_chart.py's docstring:
 - linear: the smallest step of the form 1, 2 or 5 × 10ⁿ whose covering ticks (first ≤ min,
   last ≥ max, all multiples of the step) number at most 8;
 - logarithmic: ends moved out to the nearest 1, 2, 5 × 10ⁿ; a gridline at each decade; labels at
@@ -25,7 +25,7 @@ import pytest
 from hypothesis import assume, given, strategies as st
 
 from conductor_atlas import paths
-from conductor_atlas.charts import Series, line_chart, linear_ticks, log_ticks
+from conductor_atlas.svg_chart import Series, line_chart, linear_ticks, log_ticks
 from conductor_atlas.load import load_dataset
 
 SVG = "{http://www.w3.org/2000/svg}"

@@ -34,7 +34,7 @@ Usage (the page wraps the chart in a <figure> with a visible <figcaption>; the <
 <desc> are for assistive technology, and the derived table stays the data fallback)::
 
     from markupsafe import Markup
-    from conductor_atlas.charts import Series, line_chart
+    from conductor_atlas.svg_chart import Series, line_chart
 
     svg = line_chart(
         [Series("Handbook table", temps_K, rho_uohm_cm, "points"),

@@ -14,7 +14,7 @@ from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.constants import TWENTY_CELSIUS
 from conductor_atlas.derive import MaterialView
 from conductor_atlas.schema import CLASSES
-from conductor_atlas.tables import Column, Row, Table
+from conductor_atlas.derived_table import Column, Row, Table
 
 IACS_DENSITY = 8890.0  # kg/m³, IEC 60028 density of standard annealed copper
 
