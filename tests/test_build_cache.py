@@ -32,7 +32,8 @@ def own_cache(tmp_path, monkeypatch):
 
 @pytest.fixture()
 def extra_folder(tmp_path):
-    """A --data folder with one material: copper under a new id and alias."""
+    """A --data folder with one material: copper under a new id, alias and name (a shipped name is
+    refused by the loader's clash check)."""
     folder = tmp_path / "shop" / "materials"
     folder.mkdir(parents=True)
     text = (DATA_DIR / "materials" / "copper.toml").read_text(encoding="utf-8")
@@ -42,6 +43,8 @@ def extra_folder(tmp_path):
             line = 'id = "shop-copper"'
         elif line.startswith("aliases = "):
             line = 'aliases = ["shop Cu"]'
+        elif line.startswith("name = "):
+            line = 'name = "Shop copper (demo copy of the copper file)"'
         lines.append(line)
     (folder / "shop-copper.toml").write_text("\n".join(lines) + "\n", encoding="utf-8")
     return folder.parent

@@ -4,12 +4,16 @@
 The fields are read from the page (every text input of the form), so new fields are covered.
 Each bad text goes into one field while the others keep their defaults; the field's error slot
 (``#<input id>-error``) must show a message once the field is left, and the input must be marked
-aria-invalid.
+aria-invalid. A required field's error blanks the resistance; an optional field that the
+calculator lists in SIDE_FIELDS (current, frequency) keeps the resistance shown and blanks only the
+results it feeds.
 """
 
 from __future__ import annotations
 
 import pytest
+
+from conductor_atlas.core.calc_resistance import SIDE_FIELDS
 
 pytestmark = pytest.mark.browser
 
@@ -54,7 +58,15 @@ def test_bad_text_in_each_field_names_that_field(page, served_site):
                 failures.append(f"{name}={text[:30]!r}: no message in #{input_id}-error")
             if page.get_attribute(selector, "aria-invalid") != "true":
                 failures.append(f"{name}={text[:30]!r}: input not marked aria-invalid")
-            if page.text_content("[data-result=resistance]") != "—":
+            shown = page.text_content("[data-result=resistance]") != "—"
+            if name in SIDE_FIELDS:
+                if not shown:
+                    failures.append(f"{name}={text[:30]!r}: the resistance is blanked by an optional field")
+                for fed in SIDE_FIELDS[name]:
+                    slot = page.query_selector(f"[data-result={fed}]")
+                    if slot is not None and slot.text_content() != "—":
+                        failures.append(f"{name}={text[:30]!r}: {fed} is shown despite the error")
+            elif shown:
                 failures.append(f"{name}={text[:30]!r}: a resistance is shown despite the error")
             body = visible_text_without(page, text)
             for word in FORBIDDEN:
