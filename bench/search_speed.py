@@ -65,13 +65,13 @@ process.stdout.write(JSON.stringify(out));
 
 def entries_for(scale: int) -> tuple[list[dict], int]:
     shipped = load_dataset(data_folders())
-    pages = Renderer(TEMPLATES_DIR, __version__).render_site(shipped, derive(shipped))
+    titles = Renderer(TEMPLATES_DIR, __version__).render_site(shipped, derive(shipped)).titles
     if scale <= 1:
-        return build_index(shipped, derive(shipped), pages)["entries"], len(shipped.materials)
+        return build_index(shipped, derive(shipped), titles)["entries"], len(shipped.materials)
     with tempfile.TemporaryDirectory() as folder:
         extra = scaled_copies(Path(folder) / "copies", scale)
         dataset = load_dataset(data_folders([extra]))
-    site_pages = {path: content for path, content in pages.items() if not path.startswith("materials/")}
+    site_pages = {path: title for path, title in titles.items() if not path.startswith("materials/")}
     return build_index(dataset, derive(dataset), site_pages)["entries"], len(dataset.materials)
 
 

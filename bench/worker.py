@@ -61,7 +61,7 @@ def run_floor(args) -> dict:
     renderer = Renderer(TEMPLATES_DIR, __version__)
     out = Path(args.out)
     start, cpu = time.perf_counter(), time.process_time()
-    files = renderer.render_site(dataset, views)
+    files = renderer.render_site(dataset, views).files
     for rel in sorted(files):
         target = out / rel
         target.parent.mkdir(parents=True, exist_ok=True)

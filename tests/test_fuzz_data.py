@@ -301,9 +301,9 @@ def test_generated_material_is_refused_with_messages_or_builds(shipped, doc):
     small = DataSet(materials=tuple(sorted([new, reference_view.material], key=lambda m: m.id)),
                     sources=dataset.sources)
     views = sorted([view, reference_view], key=lambda v: v.material.id)
-    files = renderer.render_material(small, view)
-    files.update(renderer.render_listings(small, views))
-    files.update(search_index_files(small, views, files))
+    pages = renderer.render_material(small, view)
+    pages.update(renderer.render_listings(small, views))
+    files = {**pages.files, **search_index_files(small, views, pages.titles)}
     assert page_problems(files, own_texts(doc)) == []
     event("built")
 

@@ -246,7 +246,7 @@ def test_static_scripts_never_insert_text_as_html():
 def test_code_in_notes_is_escaped_once(notes, shown):
     """`<` and `&` inside Markdown code spans and blocks were shown as "&lt;" and "&amp;" (the
     source was escaped before Markdown, which escapes code again); a reader sees them as typed."""
-    from conductor_atlas.render import markdown_safe
+    from conductor_atlas.markdown_notes import markdown_safe
 
     class Code(HTMLParser):
         def __init__(self):
@@ -271,7 +271,7 @@ def test_code_in_notes_is_escaped_once(notes, shown):
 
 
 def test_raw_html_and_entities_in_notes_stay_text():
-    from conductor_atlas.render import markdown_safe
+    from conductor_atlas.markdown_notes import markdown_safe
     html = markdown_safe('<div onclick="x()">raw <em>HTML</em></div> and <!-- a comment --> & more')
     assert "<div" not in html and "<em>" not in html and "<!--" not in html
     assert "&lt;div onclick=" in html and "&amp; more" in html

@@ -6,6 +6,7 @@ with ``shipped_entries``; searching the parsed file must give what searching the
 
 from __future__ import annotations
 
+import html
 import json
 import re
 import tomllib
@@ -13,13 +14,15 @@ import tomllib
 import pint
 import pytest
 
+from conductor_atlas import __version__
 from conductor_atlas.build import data_folders
 from conductor_atlas.derive import derive
 from conductor_atlas.load import load_dataset
-from conductor_atlas.paths import DATA_DIR
+from conductor_atlas.paths import DATA_DIR, TEMPLATES_DIR
+from conductor_atlas.render import Renderer
 from conductor_atlas.core.search import search, search_entries
 from conductor_atlas.core.search_format import INDEX_FORMAT
-from conductor_atlas.search_index_file import build_index, index_json, page_title, shipped_entries, shipped_index
+from conductor_atlas.search_index_file import build_index, index_json, shipped_entries, shipped_index
 
 UREG = pint.UnitRegistry()
 
@@ -32,9 +35,14 @@ def shipped(built_site):
 @pytest.fixture(scope="module")
 def built_entries(built_site):
     """The index entries of the built site, made again in memory from the data and its rendered pages."""
+    return build_index(*rendered_titles())["entries"]
+
+
+def rendered_titles():
+    """(data set, views, titles by path) as the build renders them."""
     dataset = load_dataset(data_folders())
-    files = {p.relative_to(built_site).as_posix(): p.read_bytes() for p in built_site.rglob("*.html")}
-    return build_index(dataset, derive(dataset), files)["entries"]
+    views = derive(dataset)
+    return dataset, views, Renderer(TEMPLATES_DIR, __version__).render_site(dataset, views).titles
 
 
 @pytest.fixture(scope="module")
@@ -134,7 +142,33 @@ def test_searching_the_parsed_file_equals_searching_the_entries(shipped, built_e
     assert search(shipped, query, 8) == search_entries(built_entries, query, 8)
 
 
-def test_page_title_strips_the_site_name():
-    assert page_title("<html><title>Skin depth · Conductor Atlas</title></html>".encode()) == "Skin depth"
-    assert page_title(b"<html><title>A &amp; B</title></html>") == "A & B"
-    assert page_title(b"<html></html>") == ""
+def test_the_titles_the_index_reads_are_the_titles_the_pages_show(built_site):
+    # the index takes titles from the renderer, not from the HTML: each must be the page's <title>
+    # (without " · Conductor Atlas"), so a search hit names the page it opens
+    titles = rendered_titles()[2]
+    html_pages = {p.relative_to(built_site).as_posix() for p in built_site.rglob("*.html")}
+    assert {"compare/index.html", "calculators/resistance/index.html", "references/index.html"} <= set(titles)
+    for path, title in titles.items():
+        assert path in html_pages, path
+        shown = re.search(r"<title>(.*?)</title>", (built_site / path).read_text(encoding="utf-8"), re.S).group(1)
+        shown = html.unescape(shown)
+        assert shown in (title, f"{title} · Conductor Atlas"), (path, shown, title)
+
+
+# Filters whose unit for a bare number differs from the card's display unit, and why.
+FILTER_UNIT_EXCEPTIONS = {
+    "melting_point": "people type melting points in °C (the card shows K, like the sources' tables)",
+}
+
+
+def test_search_filters_show_the_display_units_of_the_schema():
+    # one home for display units: schema.PROPERTIES[...].shown; the core cannot import the schema,
+    # so its filter vocabulary is checked against it here
+    from conductor_atlas.core.search_filters import FILTERS
+    from conductor_atlas.schema import PROPERTIES
+    property_of = {"rho_20": "resistivity", "iacs_20": "conductivity_iacs"}
+    for key, _label, _words, _kind, _typed, shown in FILTERS:
+        name = property_of.get(key, key)
+        if name in FILTER_UNIT_EXCEPTIONS:
+            continue
+        assert shown == PROPERTIES[name].shown_unit, (key, shown, PROPERTIES[name].shown_unit)

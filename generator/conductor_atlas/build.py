@@ -70,7 +70,7 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
     """
     cache = cache or BuildCache(None)
     renderer = Renderer(TEMPLATES_DIR, __version__)
-    views, files, keys = [], {}, []
+    views, files, keys, page_titles = [], {}, [], {}
     for m in dataset.materials:
         key = material_key(dataset, m)
         keys.append(key)
@@ -81,12 +81,15 @@ def assemble(dataset: DataSet, cache: BuildCache | None = None,
 
         view, pages = cache.get(f"material:{m.id}", key, make)
         views.append(view)
-        files.update(pages)
+        files.update(pages.files)
+        page_titles.update(pages.titles)
     site_key = hashlib.sha256(b"\0".join(keys) + repr(list(dataset.sources.values())).encode()
                               + repr(dataset.limits).encode()
                               + repr((dataset.verification, dataset.previous)).encode()).digest()
-    files.update(cache.get("site:listings", site_key, lambda: renderer.render_listings(dataset, views)))
-    files.update(cache.get("site:search-index", site_key, lambda: search_index_files(dataset, views, files)))
+    listings = cache.get("site:listings", site_key, lambda: renderer.render_listings(dataset, views))
+    files.update(listings.files)
+    titles = {**page_titles, **listings.titles}
+    files.update(cache.get("site:search-index", site_key, lambda: search_index_files(dataset, views, titles)))
     files.update(static_files())
     if transpile is None:
         with PendingTranspile() as pending:

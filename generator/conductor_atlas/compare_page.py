@@ -13,7 +13,7 @@ from conductor_atlas.core.material_models import local_temperature_coefficient
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.constants import TWENTY_CELSIUS
 from conductor_atlas.derive import MaterialView
-from conductor_atlas.schema import CLASSES
+from conductor_atlas.schema import CLASSES, PROPERTIES
 from conductor_atlas.derived_table import Column, Row, Table
 
 IACS_DENSITY = 8890.0  # kg/m³, IEC 60028 density of standard annealed copper
@@ -33,13 +33,17 @@ class CompareRow:
     cells: tuple[Cell, ...]
 
 
+# a column of a recorded property shows it in its display unit (schema.PROPERTIES[...].shown)
+RHO, IACS, ALPHA, DENSITY, MFP = (PROPERTIES[name] for name in (
+    "resistivity", "conductivity_iacs", "temperature_coefficient", "density", "mean_free_path"))
+
 COLUMNS = (
-    ("rho", "ρ at 20 °C", "µΩ·cm"),
-    ("iacs", "Conductivity", "%IACS"),
-    ("alpha", "α at 20 °C", "1/K"),
-    ("density", "Density", "g/cm³"),
+    ("rho", "ρ at 20 °C", RHO.shown_unit),
+    ("iacs", "Conductivity", IACS.shown_unit),
+    ("alpha", "α at 20 °C", ALPHA.shown_unit),
+    ("density", "Density", DENSITY.shown_unit),
     ("mass_iacs", "Conductivity per mass", "% of copper"),
-    ("mfp", "Mean free path", "nm"),
+    ("mfp", "Mean free path", MFP.shown_unit),
     ("delta_50", "Skin depth at 50 Hz", "mm"),
     ("delta_1m", "Skin depth at 1 MHz", "µm"),
 )
@@ -66,12 +70,12 @@ def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
         mass_iacs = dc.iacs_percent(rho) * IACS_DENSITY / density if density else None
         mfp = record["mean_free_path"] or None
         cells = (
-            cell(rho, 1e8, 4),
-            cell(dc.iacs_percent(rho), 1.0, 3),
-            cell(local_alpha(record), 1.0, 3),
-            cell(density, 1e-3, 4),
+            cell(rho, RHO.shown_scale, 4),
+            cell(dc.iacs_percent(rho), IACS.shown_scale, 3),
+            cell(local_alpha(record), ALPHA.shown_scale, 3),
+            cell(density, DENSITY.shown_scale, 4),
             cell(mass_iacs, 1.0, 3),
-            cell(mfp, 1e9, 3),
+            cell(mfp, MFP.shown_scale, 3),
             cell(skin.skin_depth(rho, 50.0, record["mu_r"]), 1e3, 3),
             cell(skin.skin_depth(rho, 1e6, record["mu_r"]), 1e6, 3),
         )

@@ -2,7 +2,7 @@
 
 One entry per material (name, aliases, class, summary, numeric properties in SI and their text
 as the property card shows it), one per derived table, and one per other page of the site
-(calculators, compare, references ...), read from the rendered pages' <title>. When the site has
+(calculators, compare, references ...), with the title the renderer returned beside its bytes. When the site has
 no calculator pages, the calculator embedded in each material page gets an entry instead.
 
 search-index.json holds these entries already prepared by ``core.search_prepare.prepare_index`` (lists of
@@ -11,31 +11,26 @@ search-index.js is the same JSON as a classic script that hands it to the page
 (``self.conductorAtlasSearchIndex = …``): a page opened from a file cannot fetch, but it can load a
 script, so search works from a copied folder too. The service worker does not store it.
 
-Pure: takes the data set, the derived views and the rendered files; returns bytes. Writes nothing.
+Pure: takes the data set, the derived views and the rendered pages' titles; returns bytes. Writes nothing.
 """
 
 from __future__ import annotations
 
-import html
 import json
-import re
 from typing import Mapping, Sequence
 
+from conductor_atlas.core.calculators import CALCULATORS
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.search_format import E_ALIASES, E_ID, E_KIND, E_MATERIAL, E_TITLE, E_URL
 from conductor_atlas.core.search_prepare import prepare_index
 from conductor_atlas.derive import MaterialView
 from conductor_atlas.model import DataSet
-from conductor_atlas.render import CARD_UNITS, SITE_NAME
+from conductor_atlas.render import MATERIAL_PAGE_CALCULATOR
 from conductor_atlas.schema import CLASSES, PROPERTIES
 
 INDEX_PATH = "search-index.json"
 INDEX_SCRIPT_PATH = "search-index.js"     # the same index for pages opened from files
 INDEX_SCRIPT_GLOBAL = "conductorAtlasSearchIndex"
-TITLE_TAG = re.compile(r"<title>(.*?)</title>", re.S)
-H1_TAG = re.compile(r"<h1[^>]*>(.*?)</h1>", re.S)
-CALCULATOR_HEADING = re.compile(r'<h2 id="calculator-title">(.*?)<', re.S)
-TAG = re.compile(r"<[^>]+>")
 # pages that are not entries of their own: the home page, the search page, material pages (from data)
 SKIPPED_PAGES = ("index.html", "search/index.html")
 # Properties kept out of "props": %IACS as stated is in percent (the index carries iacs_20 as a fraction).
@@ -46,28 +41,10 @@ def material_url(material_id: str) -> str:
     return f"materials/{material_id}/index.html"
 
 
-def page_title(content: bytes) -> str:
-    """The page's <title> without the site name, as plain text ("" when it has none)."""
-    text = content.decode("utf-8", errors="replace")
-    found = TITLE_TAG.search(text)
-    if found is None:
-        return ""
-    title = html.unescape(TAG.sub("", found.group(1))).strip()
-    suffix = f" · {SITE_NAME}"
-    if title.endswith(suffix):
-        title = title[: -len(suffix)]
-    return title
-
-
-def first_heading(content: bytes) -> str:
-    found = H1_TAG.search(content.decode("utf-8", errors="replace"))
-    return "" if found is None else html.unescape(TAG.sub("", found.group(1))).strip()
-
-
 def property_text(name: str, si: float) -> str:
-    scale, unit, sig = CARD_UNITS[name]
-    text = format_number(si * scale, sig)
-    return f"{text} {unit}" if unit else text
+    shown = PROPERTIES[name]
+    text = format_number(si * shown.shown_scale, shown.digits)
+    return f"{text} {shown.shown_unit}" if shown.shown_unit else text
 
 
 def material_entry(view: MaterialView) -> dict:
@@ -107,33 +84,29 @@ def table_entries(view: MaterialView) -> list[dict]:
     return out
 
 
-def page_entries(files: Mapping[str, bytes]) -> list[dict]:
-    """Calculator and other pages of the rendered site (everything but home, search and materials)."""
+def page_entries(titles: Mapping[str, str]) -> list[dict]:
+    """Calculator and other pages of the rendered site (everything but home, search and materials),
+    each with the title the renderer gave it."""
     out = []
-    for path in sorted(files):
+    for path in sorted(titles):
         if not path.endswith(".html") or path in SKIPPED_PAGES or path.startswith("materials/"):
             continue
-        title = page_title(files[path]) or first_heading(files[path]) or path
         folder = path.split("/")[0]
         kind = "calculator" if folder == "calculators" else "page"
         entry_id = path[: -len("/index.html")] if path.endswith("/index.html") else path[: -len(".html")]
-        out.append({"id": entry_id, "kind": kind, "title": title, "url": path,
+        out.append({"id": entry_id, "kind": kind, "title": titles[path] or path, "url": path,
                     "keywords": ["calculator"] if kind == "calculator" else []})
     return out
 
 
-def embedded_calculator_entries(views: Sequence[MaterialView], files: Mapping[str, bytes]) -> list[dict]:
-    """The calculator section of each material page, used while the site has no calculator pages."""
+def embedded_calculator_entries(views: Sequence[MaterialView], titles: Mapping[str, str]) -> list[dict]:
+    """The calculator section of each rendered material page, used while the site has no calculator pages."""
     out = []
+    heading = CALCULATORS[MATERIAL_PAGE_CALCULATOR].TITLE
     for view in views:
         m = view.material
-        content = files.get(material_url(m.id))
-        if content is None:
+        if material_url(m.id) not in titles:
             continue
-        found = CALCULATOR_HEADING.search(content.decode("utf-8", errors="replace"))
-        if found is None:
-            continue
-        heading = html.unescape(found.group(1)).strip()
         out.append({
             "id": f"{m.id}/calculator", "kind": "calculator", "title": f"{heading} — {m.name}",
             "url": f"{material_url(m.id)}#calculator", "material": " ".join([m.name, *m.aliases]),
@@ -143,15 +116,16 @@ def embedded_calculator_entries(views: Sequence[MaterialView], files: Mapping[st
     return out
 
 
-def build_index(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[str, bytes]) -> dict:
-    """The whole index as plain data: {"materials": count, "entries": [entry dict]}."""
+def build_index(dataset: DataSet, views: Sequence[MaterialView], titles: Mapping[str, str]) -> dict:
+    """The whole index as plain data: {"materials": count, "entries": [entry dict]}. ``titles``: the
+    rendered pages' titles by path (``render.RenderedPages.titles``)."""
     entries = [material_entry(v) for v in views]
     for view in views:
         entries.extend(table_entries(view))
-    pages = page_entries(files)
+    pages = page_entries(titles)
     entries.extend(pages)
     if not any(e["kind"] == "calculator" for e in pages):
-        entries.extend(embedded_calculator_entries(views, files))
+        entries.extend(embedded_calculator_entries(views, titles))
     return {"materials": len(dataset.materials), "entries": entries}
 
 
@@ -186,7 +160,7 @@ def index_script(json_bytes: bytes) -> bytes:
             b"self." + INDEX_SCRIPT_GLOBAL.encode("ascii") + b" = " + json_bytes.rstrip(b"\n") + b";\n")
 
 
-def search_index_files(dataset: DataSet, views: Sequence[MaterialView], files: Mapping[str, bytes]) -> dict[str, bytes]:
+def search_index_files(dataset: DataSet, views: Sequence[MaterialView], titles: Mapping[str, str]) -> dict[str, bytes]:
     """{"search-index.json": bytes, "search-index.js": bytes} for the publish stage."""
-    data = index_json(shipped_index(build_index(dataset, views, files)))
+    data = index_json(shipped_index(build_index(dataset, views, titles)))
     return {INDEX_PATH: data, INDEX_SCRIPT_PATH: index_script(data)}
