@@ -156,3 +156,23 @@ def test_tables_without_a_range_have_no_range_columns():
     for table in view.tables:
         assert not any(c.key.endswith(("_low", "_high")) for c in table.columns), table.id
         assert "recorded range" not in table.note, table.id
+
+
+def test_compare_carries_the_ranges_of_both_materials(data_ends):
+    """σ2/σ1 at equal temperature is ρ1/ρ2, so its ends are the corners of both recorded ranges:
+    low = ρ1,low/ρ2,high, high = ρ1,high/ρ2,low (ends from the data files: ASTM B1 96.16-97.16 %IACS
+    for hard-drawn copper, ASTM B317 55.0-59.5 %IACS for 6101). Against IACS (no range) the ratio
+    spans 6101's own %IACS range, 0.55 to 0.595 (1e-12: the same arithmetic)."""
+    out = calculate("compare", {"material": "copper-hard-drawn", "other": "aluminium-6101", "size": "95 mm2"},
+                    shipped_catalogue())
+    ratio = out["results"]["conductivity_ratio"]
+    lo1, hi1 = data_ends["copper-hard-drawn"]
+    lo2, hi2 = data_ends["aluminium-6101"]
+    assert ratio["low"] == pytest.approx(ratio["value"] * lo1 / hi2, rel=1e-12)
+    assert ratio["high"] == pytest.approx(ratio["value"] * hi1 / lo2, rel=1e-12)
+    assert sum("has a recorded range" in w for w in out["warnings"]) == 2
+    plain = calculate("compare", {"material": "IACS", "other": "aluminium-6101", "size": "95 mm2"}, shipped_catalogue())
+    ratio = plain["results"]["conductivity_ratio"]
+    assert ratio["low"] == pytest.approx(0.55, rel=1e-4)
+    assert ratio["high"] == pytest.approx(0.595, rel=1e-4)
+    assert ratio["high"] / ratio["low"] == pytest.approx(59.5 / 55.0, rel=1e-12)

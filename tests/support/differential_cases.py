@@ -237,6 +237,10 @@ def new_calculator_cases(catalogue):
                             ("compare", {"other": "IACS", "size": "35 mm2"})):
             cases.append(("conductor_atlas.core.calculators", "calculate", [name, {"material": material, **extra},
                                                                             catalogue]))
+    # both sides of a comparison ranged: four corner runs
+    for material, other in (("copper-hard-drawn", "aluminium-6101"), ("aluminium-6101", "copper-tinned")):
+        cases.append(("conductor_atlas.core.calculators", "calculate",
+                      ["compare", {"material": material, "other": other, "size": "95 mm2"}, catalogue]))
     rg = "conductor_atlas.core.ranges"
     cases.append((rg, "scaled_record", [catalogue["materials"]["copper-hard-drawn"], 1.01]))
     cf = "conductor_atlas.core.conformance"

@@ -59,37 +59,70 @@ def differs(a, b):
     return abs(a - b) > RELATIVE_EPSILON * scale
 
 
-def add_material_range(outcome, calculate, inputs, catalogue):
-    """Give the outcome's results the low and high of the material's ρ range (see the module docstring).
+def ranged_records(outcome, catalogue):
+    """The records of the materials the outcome used (its "material" and every "used" entry, so both
+    sides of a comparison) that carry a recorded ρ range."""
+    ids = []
+    if len(outcome["material"]) > 0:
+        ids.append(outcome["material"])
+    for entry in outcome["used"]:
+        if not (entry[0] in ids):
+            ids.append(entry[0])
+    found = []
+    for mid in ids:
+        if mid in catalogue["materials"] and has_range(catalogue["materials"][mid]):
+            found.append(catalogue["materials"][mid])
+    return found
 
-    ``calculate(inputs, catalogue)`` is the calculator that made ``outcome``.
+
+def end_catalogues(catalogue, records):
+    """The catalogue with every combination of the records' range ends (2 per record: 2, or 4 for a
+    comparison of two ranged materials). Results are monotonic in each ρ, so their extremes lie at
+    these corners."""
+    out = [catalogue]
+    for m in records:
+        moved = []
+        for each in out:
+            moved.append(catalogue_with(each, scaled_record(m, m["rho_low_ratio"])))
+            moved.append(catalogue_with(each, scaled_record(m, m["rho_high_ratio"])))
+        out = moved
+    return out
+
+
+def add_material_range(outcome, calculate, inputs, catalogue):
+    """Give the outcome's results the low and high of the used materials' ρ ranges (see the module
+    docstring). ``calculate(inputs, catalogue)`` is the calculator that made ``outcome``.
     """
-    if has_errors(outcome) or len(outcome["material"]) == 0:
+    if has_errors(outcome):
         return
-    if not (outcome["material"] in catalogue["materials"]):
+    records = ranged_records(outcome, catalogue)
+    if len(records) == 0:
         return
-    m = catalogue["materials"][outcome["material"]]
-    if not has_range(m):
-        return
-    low = calculate(inputs, catalogue_with(catalogue, scaled_record(m, m["rho_low_ratio"])))
-    high = calculate(inputs, catalogue_with(catalogue, scaled_record(m, m["rho_high_ratio"])))
-    if has_errors(low) or has_errors(high):
-        add_warning(outcome, "the recorded range of ρ for " + m["name"] + " could not be carried through: at one "
-                             "of its ends the calculation has no answer")
-        return
+    runs = []
+    for each in end_catalogues(catalogue, records):
+        run = calculate(inputs, each)
+        if has_errors(run):
+            add_warning(outcome, "the recorded range of ρ could not be carried through: at one of its ends the "
+                                 "calculation has no answer")
+            return
+        runs.append(run)
     moved = False
     for key in outcome["results"].keys():
-        if not (key in low["results"] and key in high["results"]):
-            continue
         entry = outcome["results"][key]
-        ends = [entry, low["results"][key], high["results"][key]]
-        lo = ends[0]
-        hi = ends[0]
-        for end in ends:
+        lo = entry
+        hi = entry
+        complete = True
+        for run in runs:
+            if not (key in run["results"]):
+                complete = False
+                continue
+            end = run["results"][key]
             if end["value"] < lo["value"]:
                 lo = end
             if end["value"] > hi["value"]:
                 hi = end
+        if not complete:
+            continue
         if not (differs(lo["value"], entry["value"]) or differs(hi["value"], entry["value"])):
             continue
         moved = True
@@ -97,7 +130,8 @@ def add_material_range(outcome, calculate, inputs, catalogue):
         entry["high"] = hi["value"]
         entry["text"] = entry["text"] + " (range " + lo["text"] + " – " + hi["text"] + ")"
     if moved:
-        add_warning(outcome, "ρ of " + m["name"] + " has a recorded range (" + format_number(m["rho_low_ratio"], 4)
-                    + " to " + format_number(m["rho_high_ratio"], 4) + " × the nominal value): each result that "
-                    "depends on it shows low – high, computed at the range's ends, which are taken to keep their "
-                    "relative width at every temperature")
+        for m in records:
+            add_warning(outcome, "ρ of " + m["name"] + " has a recorded range (" + format_number(m["rho_low_ratio"], 4)
+                        + " to " + format_number(m["rho_high_ratio"], 4) + " × the nominal value): each result "
+                        "that depends on it shows low – high, computed at the range's ends, which are taken to keep "
+                        "their relative width at every temperature")
