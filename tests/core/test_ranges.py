@@ -118,6 +118,12 @@ def test_resistivity_table_carries_the_range_like_the_calculator():
     assert "resistivity_low" not in [c.key for c in next(t for t in plain.tables if t.id == "resistivity-temperature").columns]
 
 
+def row_cells(table, first_value):
+    """{column key: value} of the table's row whose first value is ``first_value``."""
+    row = next(r for r in table.rows if abs(r.values[0] - first_value) < 1e-9)
+    return {c.key: v for c, v in zip(table.columns, row.values)}
+
+
 @pytest.mark.parametrize("mid", RANGED)
 def test_wire_and_skin_tables_carry_the_range_like_the_calculators(mid, data_ends):
     """The resistance-per-length tables (metric and AWG) and the skin-depth table carry low/high
@@ -126,27 +132,23 @@ def test_wire_and_skin_tables_carry_the_range_like_the_calculators(mid, data_end
     from conductor_atlas.derive import derive_material
     view = derive_material(load_dataset(data_folders()).by_id(mid))
     tables = {t.id: t for t in view.tables}
-    metric = tables["resistance-metric"]
-    keys = [c.key for c in metric.columns]
-    row = next(r for r in metric.rows if abs(r.values[0] - 16.0) < 1e-9)
+    cells = row_cells(tables["resistance-metric"], 16.0)
     out = calculate("resistance", {"material": mid, "length": "1 km", "size": "16 mm2", "temperature": "20 °C"},
                     shipped_catalogue())
     r = out["results"]["resistance"]
-    assert row.values[keys.index("r_20c")] == pytest.approx(r["value"], rel=1e-12)
-    assert row.values[keys.index("r_20c_low")] == pytest.approx(r["low"], rel=1e-12)
-    assert row.values[keys.index("r_20c_high")] == pytest.approx(r["high"], rel=1e-12)
+    assert cells["r_20c"] == pytest.approx(r["value"], rel=1e-12)
+    assert cells["r_20c_low"] == pytest.approx(r["low"], rel=1e-12)
+    assert cells["r_20c_high"] == pytest.approx(r["high"], rel=1e-12)
     low, high = data_ends[mid]
-    assert row.values[keys.index("r_20c_low")] / row.values[keys.index("r_20c")] == pytest.approx(low, rel=1e-12)
-    assert row.values[keys.index("r_20c_high")] / row.values[keys.index("r_20c")] == pytest.approx(high, rel=1e-12)
-    assert "same fraction" in metric.note and "same fraction" in tables["resistance-awg"].note
-    skin = tables["skin-depth"]
-    keys = [c.key for c in skin.columns]
-    row = next(r for r in skin.rows if abs(r.values[0] - 50.0) < 1e-9)
+    assert cells["r_20c_low"] / cells["r_20c"] == pytest.approx(low, rel=1e-12)
+    assert cells["r_20c_high"] / cells["r_20c"] == pytest.approx(high, rel=1e-12)
+    assert "same fraction" in tables["resistance-metric"].note and "same fraction" in tables["resistance-awg"].note
+    cells = row_cells(tables["skin-depth"], 50.0)
     out = calculate("skin-effect", {"material": mid, "frequency": "50 Hz", "temperature": "20 °C", "size": ""},
                     shipped_catalogue())
     delta = out["results"]["skin_depth"]
-    assert row.values[keys.index("skin_depth_low")] == pytest.approx(delta["low"] * 1e6, rel=1e-12)
-    assert row.values[keys.index("skin_depth_high")] == pytest.approx(delta["high"] * 1e6, rel=1e-12)
+    assert cells["skin_depth_low"] == pytest.approx(delta["low"] * 1e6, rel=1e-12)
+    assert cells["skin_depth_high"] == pytest.approx(delta["high"] * 1e6, rel=1e-12)
     assert "at most" in tables["ac-dc-ratio"].note
 
 
