@@ -14,6 +14,7 @@
 from __future__ import annotations
 
 import base64
+import re
 import gzip
 import statistics
 import threading
@@ -197,40 +198,143 @@ def throttled_page(browser, url: str):
     return context, page
 
 
-def calculator_times(browser, base: str, names: list[str], rounds: int) -> dict:
+def calculator_times(browser, base: str, names: list[str], rounds: int, reps: int = 1) -> dict:
+    """Per calculator: the median over ``reps`` fresh pages of each page's median update time."""
     out = {}
     for name in names:
-        context, page = throttled_page(browser, f"{base}/calculators/{name}/index.html")
-        page.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
-        result = page.evaluate(CALC_TIMER, {"name": name, "rounds": rounds})
-        context.close()
-        if "error" in result:
-            out[name] = {"error": result["error"]}
-        else:
-            out[name] = {"field": result["field"], "median_ms": statistics.median(result["samples"]),
-                         "samples_ms": result["samples"]}
+        runs, field, error = [], None, None
+        for _ in range(max(1, reps)):
+            context, page = throttled_page(browser, f"{base}/calculators/{name}/index.html")
+            page.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
+            result = page.evaluate(CALC_TIMER, {"name": name, "rounds": rounds})
+            context.close()
+            if "error" in result:
+                error = result["error"]
+                break
+            field = result["field"]
+            runs.append(statistics.median(result["samples"]))
+        out[name] = {"error": error} if error else {"field": field, "median_ms": statistics.median(runs),
+                                                     "runs_ms": runs}
     return out
 
 
-def search_times(browser, base: str, queries: list[str], rounds: int) -> dict:
-    context, page = throttled_page(browser, f"{base}/index.html")
-    page.wait_for_selector("html.search-ready", state="attached", timeout=60000)
-    result = page.evaluate(SEARCH_TIMER, {"queries": queries, "rounds": rounds})
-    context.close()
-    if "error" in result:
-        return {"error": result["error"]}
-    per_query = {q: statistics.median(s) for q, s in result["samples"].items()}
-    return {"median_ms": statistics.median(per_query.values()), "worst_query_ms": max(per_query.values()),
-            "per_query_ms": per_query}
+# Runs in the page: set the bar fields, then change one field back and forth; per change, how long
+# the keystroke's input handler held the page, the time until the AC result's data-value changes,
+# and the longest task meanwhile (Long Tasks API: the solve itself, once typing has paused).
+BAR_TIMER = """
+async ({fields, edit, other, rounds}) => {
+  const form = document.querySelector('form[data-calculator="skin-effect"]');
+  if (!form) return {error: 'no skin-effect form'};
+  const section = form.closest('section');
+  const cell = section.querySelector('[data-result="ac_resistance"]') || section.querySelector('[data-result]');
+  const set = (name, value) => {
+    const input = form.querySelector(`[name="${name}"]`);
+    input.value = value;
+    input.dispatchEvent(new Event('input', {bubbles: true}));
+  };
+  const waitFor = (predicate, limit) => new Promise((resolve) => {
+    const started = performance.now();
+    const poll = () => {
+      if (predicate()) resolve(performance.now());
+      else if (performance.now() - started > limit) resolve(null);
+      else setTimeout(poll, 5);
+    };
+    poll();
+  });
+  for (const [name, value] of Object.entries(fields)) set(name, value);
+  if (await waitFor(() => cell.dataset.value !== undefined && form.dataset.solving === undefined, 60000) === null)
+    return {error: 'no AC result for ' + JSON.stringify(fields)};
+  let longest = 0;
+  const observer = new PerformanceObserver((list) => {
+    for (const entry of list.getEntries()) longest = Math.max(longest, entry.duration);
+  });
+  observer.observe({type: 'longtask'});
+  const samples = [], blocks = [], handlers = [];
+  let busyShown = false;
+  const original = form.querySelector(`[name="${edit}"]`).value;
+  for (let i = 0; i < rounds; i++) {
+    const before = cell.dataset.value;
+    longest = 0;
+    const start = performance.now();
+    set(edit, i % 2 === 0 ? other : original);
+    handlers.push(performance.now() - start);
+    const end = await waitFor(() => {
+      if (form.dataset.solving !== undefined) busyShown = true;
+      return cell.dataset.value !== undefined && cell.dataset.value !== before;
+    }, 60000);
+    if (end === null) return {error: 'the AC result did not change after ' + edit};
+    await new Promise((resolve) => setTimeout(resolve, 50));  // let the observer report the last task
+    samples.push(end - start);
+    blocks.push(longest);
+  }
+  observer.disconnect();
+  return {samples, blocks, handlers, busyShown};
+}
+"""
 
 
-def first_contentful_paint(browser, base: str, path: str, rounds: int) -> dict:
-    samples = []
-    for _ in range(rounds):
-        context, page = throttled_page(browser, f"{base}/{path}")
-        fcp = page.evaluate("() => { const e = performance.getEntriesByName('first-contentful-paint')[0];"
-                            " return e ? e.startTime : null; }")
+def bar_solver_times(browser, base: str, cases: list[dict], reps: int) -> dict:
+    """Per case: typing → AC result (median), the longest main-thread task meanwhile, whether the page
+    said a solve was running."""
+    out = {}
+    for case in cases:
+        context, page = throttled_page(browser, f"{base}/calculators/skin-effect/index.html")
+        page.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
+        result = page.evaluate(BAR_TIMER, {"fields": case["fields"], "edit": case["edit"], "other": case["other"],
+                                           "rounds": max(3, reps)})
         context.close()
-        if fcp is not None:
-            samples.append(fcp)
-    return {"median_ms": statistics.median(samples) if samples else None, "samples_ms": samples}
+        if "error" in result:
+            out[case["label"]] = {"error": result["error"]}
+        else:
+            out[case["label"]] = {"result_ms": statistics.median(result["samples"]), "runs_ms": result["samples"],
+                                  "input_block_ms": max(result["blocks"]), "blocks_ms": result["blocks"],
+                                  "handler_ms": max(result["handlers"]), "handlers_ms": result["handlers"],
+                                  "busy_shown": result["busyShown"]}
+    return out
+
+
+def search_times(browser, base: str, queries: list[str], rounds: int, reps: int = 1) -> dict:
+    """Per query: the median over ``reps`` fresh pages of each page's median time."""
+    runs: dict[str, list[float]] = {q: [] for q in queries}
+    for _ in range(max(1, reps)):
+        context, page = throttled_page(browser, f"{base}/index.html")
+        page.wait_for_selector("html.search-ready", state="attached", timeout=60000)
+        result = page.evaluate(SEARCH_TIMER, {"queries": queries, "rounds": rounds})
+        context.close()
+        if "error" in result:
+            return {"error": result["error"]}
+        for q, samples in result["samples"].items():
+            runs[q].append(statistics.median(samples))
+    per_query = {q: statistics.median(r) for q, r in runs.items()}
+    return {"median_ms": statistics.median(per_query.values()), "worst_query_ms": max(per_query.values()),
+            "per_query_ms": per_query, "runs_ms": runs}
+
+
+FCP = "() => { const e = performance.getEntriesByName('first-contentful-paint')[0]; return e ? e.startTime : null; }"
+SCRIPT_TAG = re.compile(r"<script\b[^>]*>.*?</script>", re.S | re.I)
+
+
+def first_contentful_paint(browser, base: str, path: str, rounds: int) -> tuple[dict, dict]:
+    """First contentful paint of ``path`` and of its floor: the same HTML, served at the same address
+    (so the same CSS and images load), with every <script> element removed. Fresh context and ×4
+    throttling each time; page and floor alternate, so both see the same machine load."""
+    url = f"{base}/{path}"
+    import urllib.request
+    with urllib.request.urlopen(url) as response:
+        floor_html = SCRIPT_TAG.sub("", response.read().decode("utf-8"))
+    samples = {"page": [], "floor": []}
+    for _ in range(max(1, rounds)):
+        for kind in ("page", "floor"):
+            context = browser.new_context(service_workers="block")
+            page = context.new_page()
+            if kind == "floor":
+                page.route(url, lambda route: route.fulfill(body=floor_html, content_type="text/html; charset=utf-8"))
+            cdp = context.new_cdp_session(page)
+            cdp.send("Emulation.setCPUThrottlingRate", {"rate": THROTTLE})
+            page.goto(url, wait_until="load")
+            fcp = page.evaluate(FCP)
+            context.close()
+            if fcp is not None:
+                samples[kind].append(fcp)
+    return tuple({"median_ms": statistics.median(s) if s else None, "samples_ms": s}
+                 for s in (samples["page"], samples["floor"]))

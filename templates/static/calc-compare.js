@@ -110,8 +110,18 @@ function chartFor(inputs, catalogue) {
   draw(figure, series);
 }
 
+// The chart follows the two materials once typing pauses (drawing 2 x 129 model points is several
+// times a calculator update); the first one is drawn with the page's first results.
+const CHART_PAUSE_MS = 300;
+let chartTimer = 0;
+
 start((name, inputs, catalogue) => {
   const outcome = calculate(name, inputs, catalogue);
-  if (name === 'compare') chartFor(inputs, catalogue);
+  if (name === 'compare') {
+    const wanted = {material: inputs.material, other: inputs.other};  // calc-form.js refills `inputs`
+    clearTimeout(chartTimer);
+    if (drawnFor === null) chartFor(wanted, catalogue);
+    else chartTimer = setTimeout(() => chartFor(wanted, catalogue), CHART_PAUSE_MS);
+  }
   return outcome;
 }, dict);

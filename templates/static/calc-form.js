@@ -52,7 +52,7 @@ function viewOf(form) {
   // the key-result strip repeats some results (data-key-result): each mirrors its data-result cell
   const keyCells = Array.from(section.querySelectorAll('[data-key-result]'));
   const cells = Array.from(section.querySelectorAll('[data-result]')).map((cell) => ({
-    cell, name: cell.dataset.result, text: null, value: null,
+    cell, name: cell.dataset.result, text: null, value: null, low: null, high: null,
     mirrors: keyCells.filter((key) => key.dataset.keyResult === cell.dataset.result)}));
   return {
     form, fields, cells, inputs: null, state: null, general: null, warnings: null, model: null, sources: null,
@@ -60,6 +60,7 @@ function viewOf(form) {
     warningsNode: section.querySelector('.calc-warnings'),
     modelNode: section.querySelector('[data-model]'), materialNode: section.querySelector('[data-material]'), used: null,
     sourcesNode: section.querySelector('[data-sources]'),
+    busyNode: section.querySelector('[data-busy]'), slow: false, solveTimer: 0, solved: null,
   };
 }
 
@@ -124,8 +125,14 @@ function show(view, outcome) {
     // a result computed over the material's recorded range (core.ranges) carries its ends
     const low = shown && Number.isFinite(result.low) ? String(result.low) : null;
     const high = shown && Number.isFinite(result.high) ? String(result.high) : null;
-    if (low === null) delete entry.cell.dataset.low; else entry.cell.dataset.low = low;
-    if (high === null) delete entry.cell.dataset.high; else entry.cell.dataset.high = high;
+    if (low !== entry.low) {
+      if (low === null) delete entry.cell.dataset.low; else entry.cell.dataset.low = low;
+      entry.low = low;
+    }
+    if (high !== entry.high) {
+      if (high === null) delete entry.cell.dataset.high; else entry.cell.dataset.high = high;
+      entry.high = high;
+    }
   }
   const problems = general.join(' · ');
   if (view.problemsNode && problems !== view.general) view.problemsNode.textContent = problems;
@@ -187,13 +194,46 @@ function inputsOf(view) {
 
 function run(view, catalogue) {
   const inputs = inputsOf(view);
+  const started = performance.now();
   let outcome;
   try {
     outcome = calculate(view.form.dataset.calculator, inputs, catalogue);
   } catch (problem) {
     outcome = {results: {}, warnings: ['The calculator hit an internal problem: ' + String(problem && problem.message || problem)], errors: {}};
   }
+  view.slow = performance.now() - started > SLOW_MS;
   show(view, outcome);
+}
+
+// A form whose last update took longer than SLOW_MS (the skin-effect calculator's bar sizes run the
+// filament solver: 0.25 s for one bar to 1.4 s for three on a tablet) waits for a pause in typing
+// of SETTLE_MS before it solves again, and says so, so keystrokes never wait for the solver. The
+// note is painted before the solve starts (the solve holds the page until it ends).
+const SLOW_MS = 50;
+const SETTLE_MS = 400;
+
+function setBusy(view, text) {
+  if (view.busyNode && view.busyNode.textContent !== text) view.busyNode.textContent = text;
+  if (text) view.form.dataset.solving = ''; else delete view.form.dataset.solving;
+}
+
+function update(view, catalogue) {
+  clearTimeout(view.solveTimer);
+  const key = view.fields.map((field) => field.input.value).join('\u0000');
+  if (key === view.solved) { setBusy(view, ''); return; }  // e.g. the change event after typing
+  view.solved = key;
+  if (!view.slow) {
+    run(view, catalogue);
+    setBusy(view, '');
+    return;
+  }
+  setBusy(view, 'Solving when you pause typing …');
+  view.solveTimer = setTimeout(() => {
+    setBusy(view, 'Solving …');
+    requestAnimationFrame(() => {
+      view.solveTimer = setTimeout(() => { run(view, catalogue); setBusy(view, ''); }, 0);
+    });
+  }, SETTLE_MS);
 }
 
 // Start every calculator form of the page. `calculateWith(name, inputs, catalogue)` is the core's
@@ -224,13 +264,13 @@ export function start(calculateWith, makeDict) {
     form.addEventListener('input', (event) => {
       const field = fieldOf(event.target);
       if (field) typing(field);
-      run(view, catalogue);
+      update(view, catalogue);
       remember();
     });
-    form.addEventListener('change', () => { run(view, catalogue); clearTimeout(timer); timer = 0; writeQuery(form); });
+    form.addEventListener('change', () => { update(view, catalogue); clearTimeout(timer); timer = 0; writeQuery(form); });
     form.addEventListener('focusout', (event) => { const field = fieldOf(event.target); if (field) judge(field); });
     form.addEventListener('submit', (event) => event.preventDefault());
-    run(view, catalogue);
+    update(view, catalogue);
   }
   document.documentElement.classList.add('calc-ready');
 }
