@@ -315,20 +315,22 @@ SCRIPT_TAG = re.compile(r"<script\b[^>]*>.*?</script>", re.S | re.I)
 
 
 def first_contentful_paint(browser, base: str, path: str, rounds: int) -> tuple[dict, dict]:
-    """First contentful paint of ``path`` and of its floor: the same HTML, served at the same address
-    (so the same CSS and images load), with every <script> element removed. Fresh context and ×4
-    throttling each time; page and floor alternate, so both see the same machine load."""
+    """First contentful paint of ``path`` and of its floor: the same HTML with every <script> element
+    removed, at the same address (so the same CSS and images load from the server). Both documents
+    are answered from this process (Playwright's route), so both pay the same delivery; fresh
+    context and ×4 throttling each time; page and floor alternate, so both see the same machine load."""
     url = f"{base}/{path}"
     import urllib.request
     with urllib.request.urlopen(url) as response:
-        floor_html = SCRIPT_TAG.sub("", response.read().decode("utf-8"))
+        page_html = response.read().decode("utf-8")
+    documents = {"page": page_html, "floor": SCRIPT_TAG.sub("", page_html)}
     samples = {"page": [], "floor": []}
     for _ in range(max(1, rounds)):
         for kind in ("page", "floor"):
             context = browser.new_context(service_workers="block")
             page = context.new_page()
-            if kind == "floor":
-                page.route(url, lambda route: route.fulfill(body=floor_html, content_type="text/html; charset=utf-8"))
+            body = documents[kind]
+            page.route(url, lambda route, body=body: route.fulfill(body=body, content_type="text/html; charset=utf-8"))
             cdp = context.new_cdp_session(page)
             cdp.send("Emulation.setCPUThrottlingRate", {"rate": THROTTLE})
             page.goto(url, wait_until="load")

@@ -1,7 +1,7 @@
 """Conductor Atlas benchmark: build speed, scaling, page weight and in-browser speed, against targets.
 
     .venv/bin/python bench/run.py [--quick] [--reps N] [--scales 10,50] [--out bench/results.json]
-                                  [--no-browser] [--keep DIR]
+                                  [--no-browser] [--keep DIR] [--only PARTS] [--site DIR]
 
 Prints one table and writes JSON. Every figure is the median of --reps runs (``--quick``: one run,
 a ×2 scale, one calculator, so the test suite can check the script still works). Each timing is
@@ -16,7 +16,10 @@ shared machine:
   the cold build is judged on wall clock (its Transcrypt subprocess runs beside the rest), with
   its CPU seconds in the note;
 - browser: the floor is the same measurement on a page whose input handler only copies the
-  input into a data-value (no core), under the same ×4 CPU throttling.
+  input into a data-value (no core), under the same ×4 CPU throttling; for first paint, the same
+  material page with its scripts removed (same HTML, CSS and address), alternating with the page;
+- `conductor-atlas build` as a whole process (interpreter start and imports included): with nothing
+  changed, against the cold build.
 
 Temporary data sets (a copy of data/ with one file edited; ×N renamed copies) live in a temporary
 folder and are removed afterwards unless --keep is given. Nothing is written outside it but the
@@ -343,7 +346,7 @@ def figures(results: dict) -> list[dict]:
         if br.get("fcp"):
             floor = br["fcp_floor"]
             add("browser", f"first contentful paint floor: {FIRST_PAGE} without scripts", floor["median_ms"], "ms",
-                floor["median_ms"], note="same HTML and CSS, every <script> removed; per run: "
+                floor["median_ms"], note="same HTML and CSS, every <script> removed, same address; per run: "
                 + ", ".join(f"{t:.0f}" for t in floor["samples_ms"]))
             value = br["fcp"]["median_ms"]
             ok = value is not None and floor["median_ms"] is not None and value <= 1.5 * floor["median_ms"]

@@ -60,7 +60,7 @@ function viewOf(form) {
     warningsNode: section.querySelector('.calc-warnings'),
     modelNode: section.querySelector('[data-model]'), materialNode: section.querySelector('[data-material]'), used: null,
     sourcesNode: section.querySelector('[data-sources]'),
-    busyNode: section.querySelector('[data-busy]'), slow: false, solveTimer: 0, solved: null,
+    busyNode: section.querySelector('[data-busy]'), slow: false, ran: false, solveTimer: 0, solved: null,
   };
 }
 
@@ -201,15 +201,18 @@ function run(view, catalogue) {
   } catch (problem) {
     outcome = {results: {}, warnings: ['The calculator hit an internal problem: ' + String(problem && problem.message || problem)], errors: {}};
   }
-  view.slow = performance.now() - started > SLOW_MS;
+  // the page's first update also compiles the core, so it does not count
+  if (view.ran) view.slow = performance.now() - started > SLOW_MS;
+  view.ran = true;
   show(view, outcome);
 }
 
 // A form whose last update took longer than SLOW_MS (the skin-effect calculator's bar sizes run the
-// filament solver: 0.25 s for one bar to 1.4 s for three on a tablet) waits for a pause in typing
+// filament solver: 0.25 s for one bar to 1.4 s for three on a tablet; any other update takes a few
+// ms, and SLOW_MS leaves room for a busy machine, so no other form waits) waits for a pause in typing
 // of SETTLE_MS before it solves again, and says so, so keystrokes never wait for the solver. The
 // note is painted before the solve starts (the solve holds the page until it ends).
-const SLOW_MS = 50;
+const SLOW_MS = 100;
 const SETTLE_MS = 400;
 
 function setBusy(view, text) {
@@ -218,10 +221,12 @@ function setBusy(view, text) {
 }
 
 function update(view, catalogue) {
-  clearTimeout(view.solveTimer);
+  // the same inputs as the last update (e.g. the change event after typing): that update stands,
+  // solved or still waiting for its pause
   const key = view.fields.map((field) => field.input.value).join('\u0000');
-  if (key === view.solved) { setBusy(view, ''); return; }  // e.g. the change event after typing
+  if (key === view.solved) return;
   view.solved = key;
+  clearTimeout(view.solveTimer);
   if (!view.slow) {
     run(view, catalogue);
     setBusy(view, '');
