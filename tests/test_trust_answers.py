@@ -158,6 +158,52 @@ def test_6101_busbar_at_75_degrees_answers(catalogue):
     assert 1 + 0.0035 * 55 < ratio < 1 + 0.0039 * 55
 
 
+@pytest.mark.parametrize("grade, iacs", [("copper-clad-steel-30", 30.0), ("copper-clad-steel-40", 40.0)])
+def test_copper_clad_steel_is_its_layers_in_parallel(catalogue, grade, iacs):
+    # By hand from the data files: standard annealed copper 1.7241 µΩ·cm, α 0.00393 /K (IEC 60028);
+    # AISI 1008 14.2 µΩ·cm at 20 °C and 19.0 µΩ·cm at 100 °C (ASM Handbook vol. 1 table). The copper's
+    # area fraction f gives the grade's %IACS at 20 °C (100 %IACS = 58 MS/m = 0.58 /(µΩ·cm), IEC 60028):
+    # iacs/100 · 0.58 = f σ_Cu + (1 − f) σ_steel.
+    sigma_cu, sigma_steel = 1 / 1.7241, 1 / 14.2
+    f = (iacs / 100 * 0.58 - sigma_steel) / (sigma_cu - sigma_steel)
+    rho_100 = 1 / (f / (1.7241 * (1 + 0.00393 * 80)) + (1 - f) / 19.0)
+    outcome = calculate("resistivity", {"material": grade, "temperature": "100 °C"}, catalogue)
+    assert outcome["errors"] == {}
+    # 1e-9: the same arithmetic, the layers' ρ read at a table point of the steel (no interpolation)
+    assert outcome["results"]["resistivity"]["value"] * 1e8 == pytest.approx(rho_100, rel=1e-9)
+    assert outcome["model"].startswith("layers in parallel: " + format(f * 100, ".3g") + " % Standard annealed copper")
+    assert any("is an estimate" in w for w in outcome["warnings"])
+    at_20 = calculate("resistivity", {"material": grade, "temperature": "20 °C"}, catalogue)
+    assert at_20["results"]["resistivity"]["value"] == pytest.approx(1e-6 / 58 / (iacs / 100), rel=1e-12)
+    # outside the span where both layers' models hold (steel's table starts at 20 °C): refused, with it
+    cold = calculate("resistivity", {"material": grade, "temperature": "-40 °C"}, catalogue)
+    assert cold["errors"]["temperature"].startswith("the parallel-layer model of Copper-clad steel")
+
+
+@pytest.mark.parametrize("material, temperature, expected, tolerance", [
+    # 304: the two tabulated points, 72 µΩ·cm at 68 °F and 116 µΩ·cm at 1200 °F (Design Guidelines for the
+    # Selection and Use of Stainless Steel, table of physical properties, as recorded in the data file); the
+    # model is the straight line through them, so the far point is met to the rounding of α to 0.00097 /K
+    ("stainless-304", "1200 °F", 116.0, 2e-3),
+    # Fe-Cr-Al CrAl 25 5: a temperature factor of about 1.06 at 1000 °C (the data file's note, low confidence)
+    ("fe-cr-al", "1000 °C", 144.0 * 1.06, 1e-3),
+])
+def test_stainless_and_fecral_have_a_sourced_coefficient(catalogue, material, temperature, expected, tolerance):
+    outcome = calculate("resistivity", {"material": material, "temperature": temperature}, catalogue)
+    assert outcome["errors"] == {}
+    assert outcome["model"] == "linear temperature-coefficient model"
+    assert outcome["results"]["resistivity"]["value"] * 1e8 == pytest.approx(expected, rel=tolerance)
+
+
+@pytest.mark.parametrize("material", ["6101", "C17200", "C51000", "copper-clad-steel-30", "copper-clad-steel-40",
+                                      "fe-cr-al", "stainless-304"])
+def test_the_seven_grades_answer_at_75_degrees(catalogue, material):
+    outcome = calculate("resistance", {"material": material, "length": "25 m", "size": "16 mm2",
+                                       "temperature": "75 °C"}, catalogue)
+    assert outcome["errors"] == {}
+    assert "reference value only" not in outcome["model"]
+
+
 # --- 3. designations of open standards; word order and class words -------------------------------------
 @pytest.mark.parametrize("typed, material_id", [
     ("C11000", "copper-annealed"), ("ETP", "copper-annealed"), ("Cu-ETP", "copper-annealed"),

@@ -159,6 +159,64 @@ def base_metal_increments(m: Material, t_ref: float) -> tuple[list[float], list[
     return temperatures, increments, base.name
 
 
+CLAD_GRID_STEP = 10.0  # [K] spacing of the precomputed parallel-layer ρ(T) points
+
+
+def model_span(record: dict) -> tuple[float, float]:
+    """(lowest, highest) temperature [K] where a catalogue record's own models hold: the union of its
+    linear span, its table, its Bloch–Grüneisen fit and its Matthiessen estimate."""
+    ends = []
+    if record["alpha"] != 0:
+        ends.append((record["valid_from"], record["valid_to"]))
+    for key in ("table_t", "mt_t"):
+        if len(record[key]) >= 2:
+            ends.append((record[key][0], record[key][-1]))
+    if record["bg_theta"] > 0:
+        ends.append((record["bg_t_min"], record["bg_t_max"]))
+    if not ends:
+        return record["t_ref"], record["t_ref"]
+    return min(e[0] for e in ends), max(e[1] for e in ends)
+
+
+def clad_layers_table(m: Material, rho_ref: float, t_ref: float) -> tuple[list[float], list[float], float, list[str]]:
+    """([T] K, [ρ(T)] Ω·m, outer layer's area fraction, [outer name, core name]) of a clad wire, else
+    ([], [], 0, []).
+
+    The layers conduct in parallel (same length, same voltage), so by area fractions f and 1 − f
+    1/ρ(T) = f/ρ_outer(T) + (1 − f)/ρ_core(T) (a rule of mixtures for parallel conductance; e.g.
+    Callister, Materials Science and Engineering, "composites", the isostrain case applied to σ).
+    f is fitted so that ρ(t_ref) equals the grade's own value: f = (σ − σ_core)/(σ_outer − σ_core).
+    Each layer's ρ(T) is its own "auto" model; the points are a 10 K grid over the span where both
+    layers' models hold (model_span), so interpolating them is the parallel combination to well
+    under 0.1 %."""
+    if len(m.clad_layers) != 2:
+        return [], [], 0.0, []
+    outer, core = (calc_record(layer, linear_model(layer), bloch_gruneisen(layer)) for layer in m.clad_layers)
+    spans = [model_span(outer), model_span(core)]
+    low, high = max(s[0] for s in spans), min(s[1] for s in spans)
+    if not low <= t_ref <= high:
+        raise ValueError(f"clad_layers: the layers' temperature models do not both reach {t_ref:g} K, the "
+                         f"temperature of the grade's own value")
+    sigma_outer = 1.0 / resistivity_at(outer, t_ref, "auto")["rho"]
+    sigma_core = 1.0 / resistivity_at(core, t_ref, "auto")["rho"]
+    fraction = (1.0 / rho_ref - sigma_core) / (sigma_outer - sigma_core)
+    if not 0.0 < fraction < 1.0:
+        raise ValueError(f"clad_layers: the grade's conductivity is not between its layers' "
+                         f"({1e-6 / rho_ref:.4g} MS/m against {1e-6 * sigma_outer:.4g} and {1e-6 * sigma_core:.4g} "
+                         f"MS/m), so no area fraction gives it")
+    # a 10 K grid from the span's low end, the layers' table points and the ends of their linear spans
+    # (where "auto" switches model)
+    grid = {low + CLAD_GRID_STEP * k for k in range(int((high - low) / CLAD_GRID_STEP) + 1)}
+    edges = {t for r in (outer, core) for t in [r["valid_from"], r["valid_to"]] + r["table_t"] if low <= t <= high}
+    temperatures = sorted(grid | edges | {low, high, t_ref})
+    rhos = []
+    for t in temperatures:
+        conductance = (fraction / resistivity_at(outer, t, "auto")["rho"]
+                       + (1.0 - fraction) / resistivity_at(core, t, "auto")["rho"])
+        rhos.append(1.0 / conductance)
+    return temperatures, rhos, fraction, [m.clad_layers[0].name, m.clad_layers[1].name]
+
+
 def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit | None) -> dict:
     """The flat record the calculators read (see core.material_models for the keys)."""
     rho, t_rho, rho_source = reference_resistivity(m)
@@ -168,6 +226,7 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
     mfp_si, mfp_t, mfp_source, mfp_how = own_mean_free_path(m, rho_ref, t_ref)
     low, high = resistivity_range(m)
     matthiessen = base_metal_increments(m, t_ref)
+    clad = clad_layers_table(m, rho_ref, t_ref)
     return {
         "id": m.id,
         "name": m.name,
@@ -207,6 +266,10 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "mt_t": matthiessen[0],
         "mt_drho": matthiessen[1],
         "mt_base": matthiessen[2],
+        "cl_t": clad[0],
+        "cl_rho": clad[1],
+        "cl_fraction": clad[2],
+        "cl_names": clad[3],
         "sources": model_sources(m),
         "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
         "mean_free_path_source": mfp_source,
@@ -220,6 +283,10 @@ def model_sources(m: Material) -> list[str]:
                         "relative_permeability", "cvd_a", "cvd_b", "cvd_c")}
     if m.table is not None:
         keys.add(m.table.source)
+    for layer in m.clad_layers:
+        keys.update(layer.resistivity_source_keys())
+    if m.temperature_base is not None:
+        keys.update(m.temperature_base.resistivity_source_keys())
     return sorted(keys)
 
 

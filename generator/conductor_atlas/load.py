@@ -418,18 +418,28 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
     base_id = data.get("temperature_base", "")
     if not isinstance(base_id, str) or (base_id and not ID_PATTERN.match(base_id)):
         problems.add(f"{where}: temperature_base", f"expected the id of the base metal, found {base_id!r}")
+    layer_ids = data.get("clad_layers", [])
+    if (not isinstance(layer_ids, list) or len(layer_ids) not in (0, 2)
+            or not all(isinstance(i, str) and ID_PATTERN.match(i) for i in layer_ids)):
+        problems.add(f"{where}: clad_layers", f"expected the ids of the outer layer and the core, "
+                     f"e.g. [\"copper-annealed\", \"steel-low-carbon\"], found {layer_ids!r}")
+    elif layer_ids and base_id:
+        problems.add(f"{where}: clad_layers", "a material takes ρ(T) from its base metal (temperature_base) "
+                     "or from its layers (clad_layers), not both")
     if len(problems.lines) > before:
         return None
     return Material(id=material_id, name=data["name"].strip(), klass=klass, aliases=tuple(a.strip() for a in aliases),
                     summary=data["summary"].strip(), notes=notes, properties=MappingProxyType(properties),
-                    table=table, path=path, temperature_base_id=base_id, alias_sources=tuple(alias_sources))
+                    table=table, path=path, temperature_base_id=base_id, alias_sources=tuple(alias_sources),
+                    clad_layer_ids=tuple(layer_ids))
 
 
 def attach_temperature_bases(materials: list[Material], problems: Problems) -> list[Material]:
     """Each material with a ``temperature_base`` gets that material attached (Matthiessen's rule):
-    it must exist, have a ρ(T) table of its own and no base itself."""
+    it must exist, have a ρ(T) table of its own and no base itself. Then each clad wire gets its two
+    layers (``clad_layers``, with their own bases attached): they must exist and not be clad."""
     by_id = {m.id: m for m in materials}
-    out = []
+    based = []
     for m in materials:
         if m.temperature_base_id:
             base = by_id.get(m.temperature_base_id)
@@ -439,6 +449,18 @@ def attach_temperature_bases(materials: list[Material], problems: Problems) -> l
                              f"found \"{m.temperature_base_id}\"")
             else:
                 m = dataclasses.replace(m, temperature_base=base)
+        based.append(m)
+    by_id = {m.id: m for m in based}
+    out = []
+    for m in based:
+        if m.clad_layer_ids:
+            layers = tuple(by_id.get(i) for i in m.clad_layer_ids)
+            if any(layer is None or layer.clad_layer_ids or layer.id == m.id for layer in layers):
+                problems.add(f"{display_path(m.path)}: clad_layers",
+                             "expected the ids of two other materials that are not clad themselves, found "
+                             + ", ".join(f"\"{i}\"" for i in m.clad_layer_ids))
+            else:
+                m = dataclasses.replace(m, clad_layers=layers)
         out.append(m)
     return out
 

@@ -99,11 +99,23 @@ class Material:
     # (Matthiessen's rule): the base's id as written, and the base itself once every file is loaded
     temperature_base_id: str = ""
     temperature_base: "Material | None" = None
+    # a clad wire takes ρ(T) from its layers conducting in parallel: the ids of [outer layer, core] as
+    # written, and the layers themselves once every file is loaded
+    clad_layer_ids: tuple[str, ...] = ()
+    clad_layers: "tuple[Material, ...]" = ()
     # (alias, source key, locator) for the aliases that are designations of a standard
     alias_sources: tuple[tuple[str, str, str], ...] = ()
 
     def get(self, name: str) -> Value | None:
         return self.properties.get(name)
+
+    def resistivity_source_keys(self) -> list[str]:
+        """The sources of ρ and its temperature dependence (reference value, coefficient, table)."""
+        keys = {v.source for name, v in self.properties.items()
+                if name in ("resistivity", "conductivity_iacs", "temperature_coefficient")}
+        if self.table is not None:
+            keys.add(self.table.source)
+        return sorted(keys)
 
     def source_keys(self) -> list[str]:
         keys = {v.source for v in self.properties.values()}
@@ -111,6 +123,8 @@ class Material:
             keys.add(self.table.source)
         if self.temperature_base is not None:
             keys.update(self.temperature_base.source_keys())
+        for layer in self.clad_layers:
+            keys.update(layer.resistivity_source_keys())
         keys.update(source for _, source, _ in self.alias_sources)
         return sorted(keys)
 

@@ -20,7 +20,7 @@ CLASSES = {
 }
 
 TOP_LEVEL_KEYS = {"schema", "id", "name", "class", "aliases", "summary", "notes", "properties",
-                  "resistivity_table", "temperature_base"}
+                  "resistivity_table", "temperature_base", "clad_layers"}
 RECORD_KEYS = {"value", "min", "max", "temperature", "valid_from", "valid_to", "source", "locator",
                "note"}
 TABLE_KEYS = {"temperature_unit", "resistivity_unit", "source", "locator", "note", "points"}

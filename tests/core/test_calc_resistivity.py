@@ -28,12 +28,17 @@ def test_pt385_follows_callendar_van_dusen(catalogue):
 
 
 def test_no_coefficient_claimed_without_a_temperature_model(catalogue):
-    # 304 stainless has only a 20 °C value on record: the calculator gives ρ there, and no α at all
-    out = calculate_resistivity({"material": "stainless-304", "temperature": "20 °C"}, catalogue)
+    # every shipped material now has a temperature model, so 304 stainless is stripped of its coefficient
+    # here: with only a 20 °C value on record the calculator gives ρ there, and no α at all
+    from conductor_atlas.core.ranges import catalogue_with
+    record = dict(catalogue["materials"]["stainless-304"], alpha=0.0)
+    stripped = catalogue_with(catalogue, record)
+    out = calculate_resistivity({"material": "stainless-304", "temperature": "20 °C"}, stripped)
     assert value(out, "resistivity") > 0
     assert "temperature_coefficient" not in out["results"]
-    record = catalogue["materials"]["stainless-304"]
     assert local_temperature_coefficient(record, 293.15, "auto") == [None, []]
+    assert calculate_resistivity({"material": "stainless-304", "temperature": "75 °C"}, stripped)["errors"][
+        "temperature"].startswith("no temperature model is on record for Stainless steel 304")
 
 
 def test_bad_temperature_names_the_field(catalogue):

@@ -132,13 +132,14 @@ def calculator_cases():
     ]
     cases = []
     names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", "", "copper",
-             "Aluminum", "6101", "C17200"]
+             "Aluminum", "6101", "C17200", "CCS-30", "fe-cr-al"]
     for name in names:
         for inp in inputs:
             cases.append(("conductor_atlas.core.calculators", "calculate",
                           ["resistance", {**inp, "material": name}, catalogue]))
-        for t in ("20 °C", "77 K", "4.2 K", "500 °C", "1200 K", "-300 °C", "abc"):
-            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen"):
+        for t in ("20 °C", "77 K", "4.2 K", "75 °C", "500 °C", "1200 K", "-300 °C", "abc"):
+            for model in ("auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen",
+                          "layers"):
                 cases.append(("conductor_atlas.core.calculators", "calculate",
                               ["resistivity", {"material": name, "temperature": t, "model": model}, catalogue]))
     cases.append(("conductor_atlas.core.calculators", "calculate", ["nonsense", {}, catalogue]))

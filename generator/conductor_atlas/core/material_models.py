@@ -3,7 +3,9 @@
 A catalogue record (conductor_atlas.derive.calc_record) may carry any of: the linear α model
 (rho_ref, alpha, t_ref, valid_from, valid_to), a sourced ρ(T) table (table_t, table_rho), a
 Bloch–Grüneisen fit to that table (bg_rho0, bg_a, bg_theta, bg_t_min, bg_t_max, bg_worst), and
-Callendar–Van Dusen coefficients (cvd_a, cvd_b, cvd_c) for platinum sensor metals.
+Callendar–Van Dusen coefficients (cvd_a, cvd_b, cvd_c) for platinum sensor metals, a Matthiessen
+estimate from a base metal (mt_t, mt_drho, mt_base) and, for clad wire, ρ(T) of its two layers
+conducting in parallel (cl_t, cl_rho, cl_fraction, cl_names: derive.clad_layers_table).
 
 ``resistivity_at`` returns {"rho": [Ω·m], "model": key, "label": text, "warnings": [...]};
 "auto" picks, in order: Callendar–Van Dusen inside −200…850 °C (the defining equation of a
@@ -15,7 +17,7 @@ range; else the nearest model with a warning. Never silent outside a model's ran
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import temperature_models as tm
-from conductor_atlas.core.numfmt import temperature_text
+from conductor_atlas.core.numfmt import format_number, temperature_text
 
 MODEL_LABELS = {
     "linear": "linear temperature-coefficient model",
@@ -24,12 +26,13 @@ MODEL_LABELS = {
     "callendar-van-dusen": "Callendar–Van Dusen equation (IEC 60751)",
     "reference": "the reference value only (no temperature model on record)",
     "matthiessen": "estimated by Matthiessen's rule",
+    "layers": "layers in parallel",
 }
 
-MODEL_CHOICES = ["auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen"]
+MODEL_CHOICES = ["auto", "linear", "table", "bloch-gruneisen", "callendar-van-dusen", "matthiessen", "layers"]
 
 # The "model" field of every calculator form: [label, hint]
-MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen, callendar-van-dusen or matthiessen "
+MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen, callendar-van-dusen, matthiessen or layers "
                     "(any case; the models of the chosen material are listed when another is typed)"]
 
 
@@ -63,6 +66,21 @@ def matthiessen_label(m):
             + temperature_text(m["mt_t"][len(m["mt_t"]) - 1]))
 
 
+def has_layers(m):
+    return len(m["cl_t"]) >= 2
+
+
+def in_layers_span(m, t):
+    return has_layers(m) and t >= m["cl_t"][0] and t <= m["cl_t"][len(m["cl_t"]) - 1]
+
+
+def layers_label(m):
+    """"layers in parallel: 20.3 % <outer> by area over a core of <core>, valid <span>"."""
+    return (MODEL_LABELS["layers"] + ": " + format_number(m["cl_fraction"] * 100.0, 3) + " % " + m["cl_names"][0]
+            + " by area over a core of " + m["cl_names"][1] + ", valid " + temperature_text(m["cl_t"][0]) + " to "
+            + temperature_text(m["cl_t"][len(m["cl_t"]) - 1]))
+
+
 def in_linear_span(m, t):
     return t >= m["valid_from"] and t <= m["valid_to"]
 
@@ -92,6 +110,8 @@ def available_models(m):
         out.append("bloch-gruneisen")
     if has_matthiessen(m):
         out.append("matthiessen")
+    if has_layers(m):
+        out.append("layers")
     return out
 
 
@@ -102,6 +122,7 @@ MODEL_NEEDS = {
     "bloch-gruneisen": "no ρ(T) table to fit",
     "callendar-van-dusen": "not a platinum sensor metal",
     "matthiessen": "no base metal on record",
+    "layers": "not a clad wire",
 }
 
 
@@ -137,6 +158,8 @@ def choose_model(m, t):
         return "table"
     if in_bg_range(m, t):
         return "bloch-gruneisen"
+    if has_layers(m):
+        return "layers"
     if has_bg(m):
         return "bloch-gruneisen"
     if has_table(m):
@@ -225,6 +248,20 @@ def resistivity_at(m, t, model):
                         + " (Matthiessen's rule; alloying adds a nearly constant part to ρ). Check against the "
                         "supplier's data where it matters")
         return {"rho": rho, "model": key, "label": matthiessen_label(m), "warnings": warnings}
+    elif key == "layers":
+        if not has_layers(m):
+            raise CoreError(m["name"] + " is not a clad wire with its layers on record", "model")
+        if not in_layers_span(m, t):
+            raise CoreError("the parallel-layer model of " + m["name"] + " spans only " + temperature_text(m["cl_t"][0])
+                            + " to " + temperature_text(m["cl_t"][len(m["cl_t"]) - 1])
+                            + " (where both layers' own models hold)", "temperature")
+        rho = tm.interpolate_table(t, m["cl_t"], m["cl_rho"])
+        if abs(t - m["t_ref"]) > 0.5:
+            warnings.append("ρ of " + m["name"] + " at " + temperature_text(t) + " is an estimate: "
+                            + m["cl_names"][0] + " and a core of " + m["cl_names"][1]
+                            + " conducting in parallel, with the area fraction that gives the grade's value at "
+                            + temperature_text(m["t_ref"]) + "; the layers of a real wire may be other grades than these")
+        return {"rho": rho, "model": key, "label": layers_label(m), "warnings": warnings}
     elif key == "reference":
         if abs(t - m["t_ref"]) > 0.5:
             raise CoreError("no temperature model is on record for " + m["name"] + "; only "

@@ -30,6 +30,10 @@ def scaled_record(m, ratio):
     for rho in m["table_rho"]:
         table.append(rho * ratio)
     out["table_rho"] = table
+    layers = []
+    for rho in m["cl_rho"]:
+        layers.append(rho * ratio)
+    out["cl_rho"] = layers
     out["bg_rho0"] = m["bg_rho0"] * ratio
     out["bg_a"] = m["bg_a"] * ratio
     if m["mean_free_path_how"] == "rho-lambda":
