@@ -37,6 +37,17 @@ def test_estimated_alloys_have_tables_that_name_the_estimate(mid):
     assert row.values[keys.index("r_70c")] == pytest.approx(out["results"]["resistance"]["value"], rel=1e-12)
 
 
+@pytest.mark.parametrize("mid", ["copper-clad-steel-30", "copper-clad-steel-40"])
+def test_clad_steel_has_tables_that_name_the_layers(mid):
+    view = derive_material(load_dataset(data_folders()).by_id(mid))
+    rt = next(t for t in view.tables if t.id == "resistivity-temperature")
+    assert "layers in parallel" in rt.model and "estimate" in rt.model
+    row = next(r for r in rt.rows if abs(r.values[0] - 70.0) < 1e-9)
+    out = calculate("resistivity", {"material": mid, "temperature": "70 °C"}, shipped_catalogue())
+    assert out["results"]["resistivity"]["value"] * 1e8 == pytest.approx(row.values[2], rel=1e-12)
+    assert "layers in parallel" in row.values[-1]
+
+
 def test_extrapolation_still_leaves_a_gap():
     """A linear model outside its span warns: such rows stay out (copper's table starts where its
     models hold; no row below the lowest sourced point carries an extrapolation note)."""

@@ -13,7 +13,8 @@ from conductor_atlas.core import size_effect as film
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.core.geometry import IEC60228_SIZES_MM2, awg_area, awg_name, diameter_from_area
-from conductor_atlas.core.material_models import MODEL_LABELS, matthiessen_label, resistivity_or_none, within_model
+from conductor_atlas.core.material_models import (MODEL_LABELS, layers_label, matthiessen_label, resistivity_or_none,
+                                                  within_model)
 from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_plain
 from conductor_atlas.model import Material
@@ -110,6 +111,9 @@ def resistivity_temperature(m: Material, record: dict) -> Table | None:
     if "matthiessen" in models:
         pieces.append(matthiessen_label(record) + ": ρ(T) = ρ(20 °C) + ρ_base(T) − ρ_base(20 °C), an estimate; "
                       "check against the supplier's data where it matters")
+    if "layers" in models:
+        pieces.append(layers_label(record) + ": 1/ρ(T) = f/ρ_outer(T) + (1 − f)/ρ_core(T) with the outer layer's area "
+                      "fraction f, an estimate; check against the supplier's data where it matters")
     if "callendar-van-dusen" in models:
         pieces.append("Callendar–Van Dusen (IEC 60751) ratio applied to the reference resistivity")
     return Table(

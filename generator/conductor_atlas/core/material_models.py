@@ -183,13 +183,14 @@ def resistivity_or_none(m, t):
 
 def within_model(found):
     """True when an answer of resistivity_at lies inside its model: no warnings, or only the standing
-    note that a Matthiessen's-rule value is an estimate (that model raises outside its span). Tables
+    note that a Matthiessen's-rule or parallel-layer value is an estimate (those models raise outside
+    their spans). Tables
     and charts show such rows, naming the model; any other warning (extrapolation) leaves a gap."""
     if found is None:
         return False
     if len(found["warnings"]) == 0:
         return True
-    return found["model"] == "matthiessen" and len(found["warnings"]) == 1
+    return (found["model"] == "matthiessen" or found["model"] == "layers") and len(found["warnings"]) == 1
 
 
 def resistivity_at(m, t, model):
