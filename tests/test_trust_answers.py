@@ -296,3 +296,100 @@ def test_a_current_past_fusing_is_warned(catalogue):
     quiet = calculate("resistance", {"material": "IACS", "length": "1 m", "size": "2.5 mm2", "current": "16 A"},
                       catalogue)
     assert not any("fusing" in w for w in quiet["warnings"])
+
+
+@pytest.mark.parametrize("name, inputs, quiet_inputs", [
+    # sizing: 500 A over 1 m with 10 V allowed gives A_min = 2 ρ L I / ΔU = 1.72 mm², next size 2.5 mm²
+    # (IEC 60228) and 14 AWG (2.08 mm²): both fuse far under 500 A by Preece. Quiet: 16 A over 30 m, 10 V:
+    # A_min = 1.66 mm², the same two sizes, far above 16 A
+    ("sizing", {"material": "IACS", "length": "1 m", "current": "500 A", "max_drop": "10 V", "supply": "",
+                "temperature": "20 °C"}, {"length": "30 m", "current": "16 A"}),
+    ("carriers", {"material": "Cu", "current": "60 kA", "size": "2.5 mm2"}, {"current": "16 A"}),
+])
+def test_fusing_is_warned_wherever_a_current_meets_a_cross_section(catalogue, name, inputs, quiet_inputs):
+    outcome = calculate(name, inputs, catalogue)
+    assert outcome["errors"] == {}
+    # Preece: 80.0 A/mm^1.5 · (1.784 mm)^1.5 = 191 A for 2.5 mm² (d = sqrt(4 · 2.5 / π) mm)
+    assert any("above the fusing current" in w and "191 A" in w for w in outcome["warnings"])
+    quiet = calculate(name, {**inputs, **quiet_inputs}, catalogue)
+    assert quiet["errors"] == {} and not any("fusing" in w for w in quiet["warnings"])
+
+
+def test_sizing_for_drop_alone_can_give_a_size_that_fuses(catalogue):
+    # 16 A over 1 m with 10 V allowed: A_min = 2 · 1.7241e-8 · 1 · 16 / 10 = 0.055 mm², next size 0.5 mm², whose
+    # Preece fusing current is 80.0 · (0.798 mm)^1.5 = 12.3 A: below the 16 A it is sized for
+    outcome = calculate("sizing", {"material": "IACS", "length": "1 m", "current": "16 A", "max_drop": "10 V",
+                                   "supply": "", "temperature": "20 °C"}, catalogue)
+    assert any("above the fusing current" in w and "12.3 A" in w for w in outcome["warnings"])
+
+
+def test_a_bad_coolant_keeps_the_winding_temperature(catalogue):
+    outcome = calculate("temperature-rise", {"material": "IACS", "resistance_cold": "10 ohm", "temperature_cold": "20 °C",
+                                             "resistance_hot": "12.5 ohm", "coolant": "25"}, catalogue)
+    assert outcome["errors"]["coolant"].startswith("needs a unit")
+    # IEEE Std 118 resistance method with k = 234.5: t2 = (12.5/10)(234.5 + 20) − 234.5 = 83.625 °C
+    assert outcome["results"]["temperature_hot"]["value"] == pytest.approx(273.15 + 83.625, rel=1e-12)
+    assert "temperature_rise" not in outcome["results"]
+
+
+def test_a_bad_supply_keeps_a_voltage_sized_answer(catalogue):
+    inputs = {"material": "IACS", "length": "30 m", "current": "16 A", "max_drop": "6.9 V", "supply": "230",
+              "conductors": "2", "temperature": "20 °C"}
+    outcome = calculate("sizing", inputs, catalogue)
+    assert outcome["errors"]["supply"].startswith("needs a unit")
+    # A_min = 2 ρ L I / ΔU = 2 · 1.7241e-8 · 30 · 16 / 6.9 = 2.3987 mm² (IEC 60028 ρ; exact arithmetic)
+    assert outcome["results"]["min_area"]["value"] == pytest.approx(2 * 1.7241e-8 * 30 * 16 / 6.9, rel=1e-12)
+    assert "voltage_drop_percent" not in outcome["results"]
+    # with a percentage the supply is needed: its own problem is shown and nothing is computed
+    percent = calculate("sizing", {**inputs, "max_drop": "3 %"}, catalogue)
+    assert percent["errors"]["supply"].startswith("needs a unit") and percent["results"] == {}
+
+
+# --- 8. the sources listed are those the result used ---------------------------------------------------
+def property_sources(material_id, *names, table=False):
+    """The source keys the shipped data file of ``material_id`` gives for ``names`` (and its ρ(T) table)."""
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.load import load_dataset
+    m = load_dataset(data_folders()).by_id(material_id)
+    keys = {m.get(name).source for name in names if m.get(name) is not None}
+    if table and m.table is not None:
+        keys.add(m.table.source)
+    return keys
+
+
+RHO = ("resistivity", "conductivity_iacs", "temperature_coefficient")
+
+
+@pytest.mark.parametrize("name, inputs, expected", [
+    # R = ρL/A with mass: ρ(T) and density, nothing else
+    ("resistance", {"material": "IACS"}, lambda: property_sources("copper-annealed", *RHO, "density")),
+    ("resistivity", {"material": "Cu"}, lambda: property_sources("copper", *RHO, table=True)),
+    # the resistance method with k typed, or with the standards' k for copper: no material value is used
+    ("temperature-rise", {"material": "", "k": "234.5"}, lambda: set()),
+    ("temperature-rise", {"material": "Cu"}, lambda: set()),
+    # k = 1/α − t_ref: only the coefficient
+    ("temperature-rise", {"material": "Ni"}, lambda: property_sources("nickel", "temperature_coefficient")),
+    # the size effect needs ρ(T) and the bulk mean free path (its source was missing)
+    ("thin-film", {"material": "film-copper", "thickness": "20 nm"},
+     lambda: property_sources("film-copper", *RHO, "mean_free_path", "rho_lambda", table=True)),
+    ("skin-effect", {"material": "steel-low-carbon", "frequency": "50 Hz"},
+     lambda: property_sources("steel-low-carbon", *RHO, "relative_permeability", table=True)),
+    ("sizing", {}, lambda: property_sources("copper-annealed", *RHO)),
+    ("short-circuit", {}, lambda: property_sources("copper-annealed", *RHO, "density", "specific_heat") | {"iec60949"}),
+    ("compare", {}, lambda: property_sources("copper-annealed", *RHO, "density")
+     | property_sources("aluminium-1350", *RHO, "density")),
+    # Matthiessen's rule: the alloy's value and its base metal's ρ(T)
+    ("resistivity", {"material": "6101", "temperature": "75 °C"},
+     lambda: property_sources("aluminium-6101", *RHO) | property_sources("aluminium", *RHO, table=True)),
+    # clad wire: the grade's value and both layers' ρ(T)
+    ("resistivity", {"material": "CCS-30", "temperature": "75 °C"},
+     lambda: property_sources("copper-clad-steel-30", *RHO) | property_sources("copper-annealed", *RHO)
+     | property_sources("steel-low-carbon", *RHO, table=True)),
+])
+def test_sources_are_those_the_result_used(catalogue, name, inputs, expected):
+    from conductor_atlas.core.calculators import CALCULATORS
+    fields = {**CALCULATORS[name].DEFAULTS, **inputs}
+    outcome = calculate(name, fields, catalogue)
+    assert outcome["errors"] == {}
+    assert set(outcome["sources"]) == expected()
+    assert len(outcome["sources"]) == len(set(outcome["sources"]))

@@ -271,9 +271,26 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "cl_fraction": clad[2],
         "cl_names": clad[3],
         "sources": model_sources(m),
+        # what each kind of result rests on: the calculators list only the ones they use
+        "rho_sources": resistivity_sources(m),
+        "alpha_source": m.get("temperature_coefficient").source if m.get("temperature_coefficient") else "",
+        "density_source": m.get("density").source if m.get("density") else "",
+        "mu_source": m.get("relative_permeability").source if m.get("relative_permeability") else "",
         "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
         "mean_free_path_source": mfp_source,
     }
+
+
+def resistivity_sources(m: Material) -> list[str]:
+    """Source keys behind ρ(T) alone: the reference value, coefficient, table, Callendar–Van Dusen
+    coefficients, and the ρ(T) sources of a Matthiessen base or of clad layers."""
+    keys = set(m.resistivity_source_keys())
+    keys.update(v.source for name, v in m.properties.items() if name in ("cvd_a", "cvd_b", "cvd_c"))
+    for layer in m.clad_layers:
+        keys.update(layer.resistivity_source_keys())
+    if m.temperature_base is not None:
+        keys.update(m.temperature_base.resistivity_source_keys())
+    return sorted(keys)
 
 
 def model_sources(m: Material) -> list[str]:

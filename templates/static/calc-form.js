@@ -151,12 +151,26 @@ function show(view, outcome) {
   const model = outcome.model ? 'Model: ' + outcome.model : '';
   if (view.modelNode && model !== view.model) view.modelNode.textContent = model;
   view.model = model;
-  const sources = outcome.sources && outcome.sources.length ? 'Sources: ' + outcome.sources.join(', ') : '';
-  if (view.sourcesNode && sources !== view.sources) view.sourcesNode.textContent = sources;
+  const sources = outcome.sources && outcome.sources.length ? outcome.sources.join(', ') : '';
+  if (view.sourcesNode && sources !== view.sources) showSources(view.sourcesNode, outcome.sources || []);
   view.sources = sources;
   const state = Object.keys(errors).length ? 'error' : 'ok';
   if (state !== view.state) view.form.dataset.state = state;
   view.state = state;
+}
+
+// The sources a result used, each linked to its entry on the references page (as on material pages).
+function showSources(node, keys) {
+  node.replaceChildren();
+  if (!keys.length) return;
+  node.appendChild(document.createTextNode('Sources: '));
+  keys.forEach((key, index) => {
+    if (index > 0) node.appendChild(document.createTextNode(', '));
+    const link = document.createElement('a');
+    link.href = node.dataset.root + 'references/index.html#src-' + encodeURIComponent(key);
+    link.textContent = key;
+    node.appendChild(link);
+  });
 }
 
 // The first result line: each material the results were computed for, linked to its page, with the

@@ -113,7 +113,10 @@ def test_bad_input_names_the_field(catalogue, fields, field, words):
     out = run(catalogue, **fields)
     assert field in out["errors"], out["errors"]
     assert words in out["errors"][field]
-    assert out["results"] == {}
+    if field == "coolant":  # an optional field that feeds only the rise (SIDE_FIELDS)
+        assert "temperature_rise" not in out["results"] and "temperature_hot" in out["results"]
+    else:
+        assert out["results"] == {}
 
 
 def test_command_line_json():

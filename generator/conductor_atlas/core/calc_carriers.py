@@ -4,9 +4,10 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import carriers as fe
 from conductor_atlas.core.constants import ELECTRON_VOLT
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import add_error, add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+                                          new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
-from conductor_atlas.core.calc_common import material_at_temperature
+from conductor_atlas.core.calc_common import material_at_temperature, warn_if_fusing
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "carriers"
@@ -65,6 +66,7 @@ def read_current_density(outcome, inputs):
     if current < 0:
         add_error(outcome, "current", "must not be negative (enter the magnitude)")
         return None
+    warn_if_fusing(outcome, current, size["area"])
     return current / size["area"]
 
 
@@ -108,6 +110,8 @@ def calculate(inputs, catalogue):
     add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "electron_density", n, "1/m³", format_number(n, 4) + " m⁻³")
+    if len(m["electron_density_source"]) > 0:
+        add_sources(outcome, [m["electron_density_source"]])
     add_result(outcome, "relaxation_time", tau, "s", format_si(tau, "s", 4))
     add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 4))
     add_result(outcome, "fermi_velocity", v_f, "m/s", format_number(v_f / 1000.0, 4) + " km/s")
@@ -128,6 +132,8 @@ def calculate(inputs, catalogue):
         at = ""
         if m["mean_free_path_t"] > 0:
             at = " at " + temperature_text(m["mean_free_path_t"])
+        if len(m["mean_free_path_source"]) > 0:
+            add_sources(outcome, [m["mean_free_path_source"]])
         add_warning(outcome, "the mean free path on record for " + m["name"] + " is " + format_si(m["mean_free_path"],
                     "m", 3) + at + "; the free-electron value above assumes a spherical Fermi surface")
     if t < 150.0:

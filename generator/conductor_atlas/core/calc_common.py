@@ -1,10 +1,12 @@
 """Steps shared by several calculators: the opening (material, temperature, ρ by the model asked) and
-the mean free path on record."""
+the mean free path on record; the fusing-current warning."""
+
+import math
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import add_error, add_warning, has_errors
+from conductor_atlas.core.outcome import add_error, add_sources, add_warning, has_errors
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_temperature
 
 
@@ -23,9 +25,29 @@ def material_resistivity(outcome, m, t, inputs):
         return None
     for w in found["warnings"]:
         add_warning(outcome, w)
+    add_sources(outcome, m["rho_sources"])
     warn_if_molten(outcome, m, t)
     outcome["model"] = found["label"]
     return found["rho"]
+
+
+# Preece (1884): a bare wire in still air fuses at I = a · d^1.5; for copper a = 10244 A/in^1.5, i.e.
+# 80.0 A/mm^1.5 (W. H. Preece, Proc. R. Soc. London 36, 464, 1884; constant from memory of the paper's
+# table). Used for every material as a marker of "far past fusing": copper has the highest constant of
+# the common conductor metals, so for others the warning comes late, never early.
+PREECE_COPPER = 10244.0 / math.pow(0.0254, 1.5)  # [A/m^1.5]
+
+
+def warn_if_fusing(outcome, current, area):
+    """Warn when ``current`` [A] exceeds Preece's fusing current of a bare copper wire of the same
+    cross-section ``area`` [m²] (round: d = sqrt(4A/π))."""
+    d = math.sqrt(4.0 * area / math.pi)
+    fusing = PREECE_COPPER * math.pow(d, 1.5)
+    if current > fusing:
+        add_warning(outcome, "a current of " + format_si(current, "A", 3) + " is above the fusing current of a bare "
+                    "copper wire of this cross-section in air (" + format_si(fusing, "A", 3) + " by Preece's rule, "
+                    "I = 80.0 A/mm^1.5 · d^1.5, Preece 1884, constant from memory): the conductor would melt, so results "
+                    "that assume it flows steadily (loss, voltage drop, drift) cannot be reached")
 
 
 def warn_if_molten(outcome, m, t):

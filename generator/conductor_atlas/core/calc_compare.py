@@ -3,7 +3,7 @@
 from conductor_atlas.core import practice
 from conductor_atlas.core.geometry import awg_area, awg_name, diameter_from_area, next_awg, next_metric_size
 from conductor_atlas.core.numfmt import format_number, temperature_text
-from conductor_atlas.core.outcome import add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.outcome import add_result, add_sources, add_warning, check_finite_results, new_outcome
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_size, read_temperature
 from conductor_atlas.core.calc_common import material_resistivity, resistivity_when_ready
 from conductor_atlas.core.calc_resistance import mass_text
@@ -80,6 +80,7 @@ def calculate(inputs, catalogue):
         mass_ratio = practice.equal_resistance_mass_ratio(rho1, m1["density"], rho2, m2["density"])
         add_result(outcome, "mass_ratio", mass_ratio, "", format_number(mass_ratio, 4))
         add_result(outcome, "conductivity_per_mass_ratio", 1.0 / mass_ratio, "", format_number(1.0 / mass_ratio, 4))
+        add_sources(outcome, [m1["density_source"], m2["density_source"]])
     else:
         missing = m1["name"]
         if m1["density"] > 0:

@@ -6,7 +6,7 @@ its fields and reports every problem at once (see core.outcome for the record th
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.lookup import find_material, trade_word_note
-from conductor_atlas.core.outcome import add_error, add_material_used, add_sources, add_warning
+from conductor_atlas.core.outcome import add_error, add_material_used, add_warning
 from conductor_atlas.core.units import parse_quantity, point_reading_note, portable_text
 
 
@@ -82,13 +82,13 @@ def read_size(outcome, inputs, field):
 
 
 def read_material(outcome, inputs, catalogue, field):
-    """The material named in ``field`` (or None, with errors[field] set), named in outcome["used"]."""
+    """The material named in ``field`` (or None, with errors[field] set), named in outcome["used"]. Its
+    sources are added by the steps that use its values (calc_common.material_resistivity and others)."""
     text = field_text(inputs, field)
     try:
         m = find_material(catalogue, text, field)
     except CoreError as problem:
         add_error(outcome, field, problem.message)
         return None
-    add_sources(outcome, m["sources"])
     add_material_used(outcome, m, trade_word_note(catalogue, text))
     return m

@@ -6,9 +6,11 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import add_error, add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+                                          new_outcome)
 from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_positive
-from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
+from conductor_atlas.core.calc_common import (material_at_temperature, recorded_mean_free_path, warn_if_anomalous,
+                                              warn_if_fusing)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 from conductor_atlas.core.ac_layout import ac_ratio_for
 
@@ -52,25 +54,6 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
 def ac_ratio(outcome, size, rho, f, mu_r):
     """R_ac/R_dc of one isolated conductor of the size's shape, with its method (core.ac_layout)."""
     return ac_ratio_for(outcome, size, ["single"], rho, f, mu_r)
-
-
-# Preece (1884): a bare wire in still air fuses at I = a · d^1.5; for copper a = 10244 A/in^1.5, i.e.
-# 80.0 A/mm^1.5 (W. H. Preece, Proc. R. Soc. London 36, 464, 1884; constant from memory of the paper's
-# table). Used for every material as a marker of "far past fusing": copper has the highest constant of
-# the common conductor metals, so for others the warning comes late, never early.
-PREECE_COPPER = 10244.0 / math.pow(0.0254, 1.5)  # [A/m^1.5]
-
-
-def warn_if_fusing(outcome, current, area):
-    """Warn when ``current`` [A] exceeds Preece's fusing current of a bare copper wire of the same
-    cross-section ``area`` [m²] (round: d = sqrt(4A/π))."""
-    d = math.sqrt(4.0 * area / math.pi)
-    fusing = PREECE_COPPER * math.pow(d, 1.5)
-    if current > fusing:
-        add_warning(outcome, "a current of " + format_si(current, "A", 3) + " is above the fusing current of a bare "
-                    "copper wire of this cross-section in air (" + format_si(fusing, "A", 3) + " by Preece's rule, "
-                    "I = 80.0 A/mm^1.5 · d^1.5, Preece 1884, constant from memory): the conductor would melt, so the "
-                    "loss and voltage drop shown cannot be reached in steady state")
 
 
 def mass_text(mass):
@@ -120,6 +103,7 @@ def calculate(inputs, catalogue):
     if m["density"] > 0:
         mass = m["density"] * length_m * area
         add_result(outcome, "mass", mass, "kg", mass_text(mass))
+        add_sources(outcome, [m["density_source"]])
     if current is not None:
         u = dc.voltage_drop(r, current)
         add_result(outcome, "voltage_drop", u, "V", format_si(u, "V", 4))
@@ -139,6 +123,8 @@ def calculate(inputs, catalogue):
             add_error(outcome, "frequency", problem.message)  # the DC results stand
             return outcome
         add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
+        if len(m["mu_source"]) > 0:
+            add_sources(outcome, [m["mu_source"]])
         warn_if_anomalous(outcome, recorded_mean_free_path(m, rho, t)[0], delta)
         add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
         add_result(outcome, "resistance_ac", r * ratio, "Ω", format_si(r * ratio, "Ω", 4))

@@ -202,7 +202,8 @@ def calculate(inputs, catalogue):
         return outcome
     outcome["model"] = "adiabatic heat balance, ρ(T) by the " + here["label"]
     cv = m["density"] * m["specific_heat"]
-    add_sources(outcome, m["sources"])
+    add_sources(outcome, m["rho_sources"])
+    add_sources(outcome, [m["density_source"]])
     if len(m["specific_heat_source"]) > 0:
         add_sources(outcome, [m["specific_heat_source"]])
     iec = iec_constants(m, catalogue)

@@ -10,7 +10,7 @@ from conductor_atlas.core.numfmt import format_number, format_si, temperature_te
 from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, has_errors,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, require_positive
-from conductor_atlas.core.calc_common import material_at_temperature
+from conductor_atlas.core.calc_common import material_at_temperature, warn_if_fusing
 from conductor_atlas.core.units import normalise_text, parse_number, parse_quantity
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
@@ -39,6 +39,8 @@ RESULT_LABELS = [
     ["max_drop", "Allowed voltage drop"], ["resistivity", "Resistivity at temperature"],
     ["temperature", "Temperature"],
 ]
+# optional input -> the results that need it: a problem in that field is shown under it and drops only these
+SIDE_FIELDS = {"supply": ["voltage_drop_percent"]}
 CAUTION = ("Sizes for voltage drop only: not for current rating (ampacity and heating), short-circuit withstand or "
            "mechanical strength, which often need a larger size. Resistive drop only (no reactance). Installations "
            "follow the local electrical code and licensed practice.")
@@ -78,8 +80,9 @@ def read_conductors(outcome, inputs):
     return None
 
 
-def read_max_drop(outcome, inputs, supply):
-    """The allowed drop [V] from "3 V" or "3 %" (with the supply); None with errors set."""
+def read_max_drop(outcome, inputs, supply, supply_problem):
+    """The allowed drop [V] from "3 V" or "3 %" (with the supply); None with errors set. A percentage
+    with no usable supply puts ``supply_problem`` (or "is empty") under the supply field."""
     text = field_text(inputs, "max_drop")
     if len(text) == 0:
         add_error(outcome, "max_drop", "is empty: enter a voltage (e.g. 6.9 V) or a percentage of the supply "
@@ -96,7 +99,10 @@ def read_max_drop(outcome, inputs, supply):
             if not (fraction > 0 and fraction < 1.0):
                 raise CoreError("a percentage must be above 0 % and below 100 %", "max_drop")
             if supply is None:
-                add_error(outcome, "supply", "is empty: a percentage drop needs the supply voltage (e.g. 230 V)")
+                if len(supply_problem) > 0:
+                    add_error(outcome, "supply", supply_problem)
+                else:
+                    add_error(outcome, "supply", "is empty: a percentage drop needs the supply voltage (e.g. 230 V)")
                 return None
             return fraction * supply
         drop = parse_quantity(text, "voltage", "max_drop")
@@ -130,13 +136,21 @@ def calculate(inputs, catalogue):
     require_positive(outcome, "length", route, "the route length")
     current = read_quantity(outcome, inputs, "current", "current", True)
     require_positive(outcome, "current", current, "the current")
-    supply = read_quantity(outcome, inputs, "supply", "voltage", False)
+    # the supply is needed only with a percentage drop: with a voltage, a problem in it is shown under it
+    # and drops only the drop in percent (SIDE_FIELDS)
+    read_supply = new_outcome(NAME, inputs)
+    supply = read_quantity(read_supply, inputs, "supply", "voltage", False)
     if supply is not None and not (supply > 0):
-        add_error(outcome, "supply", "must be greater than zero")
+        add_error(read_supply, "supply", "must be greater than zero")
         supply = None
-    drop = read_max_drop(outcome, inputs, supply)
+    supply_problem = ""
+    if "supply" in read_supply["errors"]:
+        supply_problem = read_supply["errors"]["supply"]
+    drop = read_max_drop(outcome, inputs, supply, supply_problem)
     circuit = read_conductors(outcome, inputs)
     opening = material_at_temperature(outcome, inputs, catalogue)
+    if len(supply_problem) > 0:
+        add_error(outcome, "supply", supply_problem)
     if opening is None:
         return outcome
     t = opening[1]
@@ -177,6 +191,7 @@ def calculate(inputs, catalogue):
                        format_number(100.0 * u / supply, 3) + " %")
         add_result(outcome, "voltage_drop", u, "V", u_text)
         add_result(outcome, "power_loss", p, "W", format_si(p, "W", 4))
+        warn_if_fusing(outcome, current, area)
     else:
         add_warning(outcome, "the minimum cross-section exceeds the largest IEC 60228 size (2500 mm²): split the run "
                              "into parallel conductors or allow more drop")
@@ -187,12 +202,13 @@ def calculate(inputs, catalogue):
                    + " mm²)")
         u_awg = factor * rho * route * current / a_awg
         add_result(outcome, "voltage_drop_awg", u_awg, "V", format_si(u_awg, "V", 4))
+        warn_if_fusing(outcome, current, a_awg)
     else:
         add_warning(outcome, "the minimum cross-section exceeds 4/0 AWG: use kcmil sizes or parallel conductors")
     add_warning(outcome, "circuit: " + circuit[1] + "; resistive drop only (reactance and power factor not "
                                                    "included)")
     add_warning(outcome, SAFETY)
     check_finite_results(outcome, "length")
-    if has_errors(outcome):
+    if len(outcome["results"].keys()) == 0:
         outcome["warnings"] = []
     return outcome

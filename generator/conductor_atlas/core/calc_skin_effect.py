@@ -105,6 +105,8 @@ def calculate(inputs, catalogue):
     add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
+    if len(m["mu_source"]) > 0:
+        add_sources(outcome, [m["mu_source"]])
     add_result(outcome, "surface_resistance", rs, "Ω", format_si(rs, "Ω", 4) + " per square")
     if size is not None:
         area = size["area"]

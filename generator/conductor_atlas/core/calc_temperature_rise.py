@@ -5,7 +5,7 @@ from conductor_atlas.core import practice
 from conductor_atlas.core.constants import ZERO_CELSIUS
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.numfmt import format_fixed, format_number, temperature_text
-from conductor_atlas.core.outcome import (add_error, add_result, add_warning, check_finite_results, has_errors,
+from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results, has_errors,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_quantity, require_positive
 from conductor_atlas.core.units import normalise_text, normalise_unit, parse_number, parse_quantity
@@ -30,6 +30,8 @@ RESULT_LABELS = [
     ["temperature_hot", "Mean winding temperature (hot)"], ["temperature_rise", "Temperature rise"],
     ["resistance_ratio", "Resistance ratio R2/R1"], ["k", "k used"],
 ]
+# optional input -> the results that need it: a problem in that field is shown under it and drops only these
+SIDE_FIELDS = {"coolant": ["temperature_rise"]}
 CAUTION = ("The resistance method gives the mean winding temperature; hot spots run hotter. Measure R1 with the "
            "winding at a uniform, known temperature and R2 as soon as possible after switching off.")
 
@@ -107,6 +109,7 @@ def material_k(outcome, m, catalogue):
                   + "; enter k")
         return None
     k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
+    add_sources(outcome, [m["alpha_source"]])
     add_warning(outcome, "k = " + format_number(k, 4) + " from the temperature coefficient of " + m["name"] + " (α = "
                 + format_number(m["alpha"], 4) + " /K at " + format_fixed(m["t_ref"] - ZERO_CELSIUS, 1)
                 + " °C): k = 1/α − t_ref; the standards give k for copper and aluminium only")
@@ -140,11 +143,15 @@ def calculate(inputs, catalogue):
         add_error(outcome, "temperature_cold", "must be above absolute zero (−273.15 °C)")
     r2 = read_quantity(outcome, inputs, "resistance_hot", "resistance", True)
     require_positive(outcome, "resistance_hot", r2, "the hot resistance")
+    # the coolant temperature feeds only the rise: a problem in it is shown under it (SIDE_FIELDS)
     coolant = read_quantity(outcome, inputs, "coolant", "temperature", False)
     if coolant is not None and not (coolant > 0):
         add_error(outcome, "coolant", "must be above absolute zero (−273.15 °C)")
-    if has_errors(outcome):
-        return outcome
+        coolant = None
+    coolant_bad = "coolant" in outcome["errors"]
+    for field in outcome["errors"].keys():
+        if field != "coolant":
+            return outcome
     if k is None:
         k = material_k(outcome, m, catalogue)
         if k is None:
@@ -176,6 +183,8 @@ def calculate(inputs, catalogue):
     if coolant is not None:
         add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the coolant ("
                    + format_fixed(coolant - ZERO_CELSIUS, 1) + " °C)")
+    elif coolant_bad:
+        pass  # the rise needs the coolant typed: it is left out, the message is under the field
     else:
         add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the cold temperature ("
                    + format_fixed(t1 - ZERO_CELSIUS, 1) + " °C)")

@@ -4,7 +4,8 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import size_effect as sz
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import add_error, add_result, add_warning, check_finite_results, new_outcome
+from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+                                          new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, require_positive
 from conductor_atlas.core.calc_common import (material_at_temperature, mean_free_path_origin, recorded_mean_free_path,
                                               recorded_mean_free_path_temperature)
@@ -69,6 +70,8 @@ def bulk_mean_free_path(outcome, inputs, m, rho, t):
             return mfp
         return None
     found = recorded_mean_free_path(m, rho, t)
+    if found[1] != "none" and len(m["mean_free_path_source"]) > 0:
+        add_sources(outcome, [m["mean_free_path_source"]])
     if found[1] == "as recorded":
         return found[0]
     if found[1] != "none":
@@ -82,6 +85,8 @@ def bulk_mean_free_path(outcome, inputs, m, rho, t):
     if m["electron_density"] > 0:
         add_warning(outcome, "no mean free path is on record for " + m["name"] + "; using the free-electron value "
                              "ℓ = ħ k_F / (n e² ρ), which can be off by a factor of several for transition metals")
+        if len(m["electron_density_source"]) > 0:
+            add_sources(outcome, [m["electron_density_source"]])
         return fe.mean_free_path(rho, m["electron_density"])
     add_error(outcome, "mean_free_path", "no mean free path is on record for " + m["name"]
               + "; enter the bulk mean free path (e.g. 39 nm for copper at 20 °C)")
