@@ -50,7 +50,9 @@ def typo(rng: random.Random, word: str) -> str:
 def make_queries(vocabulary: list[str], count: int) -> list[str]:
     rng = random.Random(20261202)
     queries = ["copper", "C17200", "nickl chrom", "resistivity < 3 uohm*cm", "c", "co", "alumin", "aluminum alloy",
-               "skin depth copper", "copper alloy, iacs > 50", "1.4301", "the of", "zzzz qqqq"]
+               "skin depth copper", "copper alloy, iacs > 50", "1.4301", "the of", "zzzz qqqq",
+               # designations of open standards (issue 13): each finds its material first
+               "C11000", "ETP", "Cu-ETP", "OF", "Cu-OF", "C10100", "C10200", "A91350", "EC", "CW004A", "6101-T6"]
     while len(queries) < count:
         word = rng.choice(vocabulary)
         kind = rng.randrange(6)

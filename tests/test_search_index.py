@@ -172,3 +172,17 @@ def test_search_filters_show_the_display_units_of_the_schema():
         if name in FILTER_UNIT_EXCEPTIONS:
             continue
         assert shown == PROPERTIES[name].shown_unit, (key, shown, PROPERTIES[name].shown_unit)
+
+
+@pytest.mark.parametrize("query, title", [
+    ("C11000", "Standard annealed copper"), ("ETP", "Standard annealed copper"), ("Cu-ETP", "Standard annealed copper"),
+    ("CW004A", "Standard annealed copper"), ("OF", "Oxygen-free copper"), ("Cu-OF", "Oxygen-free copper"),
+    ("C10100", "Oxygen-free copper"), ("C10200", "Oxygen-free copper"), ("A91350", "Conductor aluminium 1350"),
+    ("EC", "Conductor aluminium 1350"), ("6101-T6", "Aluminium alloy 6101"),
+])
+def test_designations_find_their_material_first(shipped, query, title):
+    # the designations of open standards that practitioners type (ASTM B224 / UNS, EN 13601, ANSI H35.1,
+    # ASTM B317), recorded as aliases with their sources in the data files
+    outcome = search(shipped, query, 5)
+    assert outcome["errors"] == {} or not outcome["errors"]
+    assert outcome["results"][0]["title"].startswith(title), [r["title"] for r in outcome["results"]]

@@ -393,3 +393,14 @@ def test_sources_are_those_the_result_used(catalogue, name, inputs, expected):
     assert outcome["errors"] == {}
     assert set(outcome["sources"]) == expected()
     assert len(outcome["sources"]) == len(set(outcome["sources"]))
+
+
+# --- 3. the material page shows where each designation comes from ---------------------------------------
+def test_material_page_names_the_source_of_each_designation(built_site):
+    page = (built_site / "materials" / "copper-annealed" / "index.html").read_text(encoding="utf-8")
+    # C11000 is the UNS number of ETP copper in ASTM B224; Cu-ETP and CW004A are EN 13601's name and number
+    for alias, source in (("C11000", "astm-b224"), ("Cu-ETP", "en13601"), ("CW004A", "en13601")):
+        assert (f'<span class="alias">{alias}</span> <a class="alias-source" '
+                f'href="../../references/index.html#src-{source}"') in page
+    # an alias without a source (a trade word) carries no link
+    assert '<span class="alias">IACS</span>,' in page

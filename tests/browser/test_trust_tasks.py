@@ -58,8 +58,10 @@ def test_c_copper_names_standard_annealed_copper(tablet_page, served_site, catal
     line = pg.text_content("[data-material]")
     assert line.startswith("Material: Standard annealed copper (conductor grade, id copper-annealed)")
     assert "for Copper (high purity) enter Cu" in line
-    # the first thing in the results block, and a link to the material's page
-    first = pg.eval_on_selector(".calc-results", "el => el.firstElementChild.dataset.material !== undefined")
+    # the first line of the results block (after the status line a slow solve writes into), and a link to
+    # the material's page
+    first = pg.eval_on_selector(
+        ".calc-results", "el => [...el.children].find(c => !c.matches('[data-busy]')).dataset.material !== undefined")
     assert first
     pg.click("[data-material] a")
     pg.wait_for_load_state()
@@ -91,4 +93,45 @@ def test_d_designations_resolve(tablet_page, served_site, catalogue, typed, mate
     assert_page_matches_core(pg, catalogue, inputs)
     assert f"id {material_id})" in pg.text_content("[data-material]")
     assert pg.text_content("#in-resistance-material-error") == ""
+    assert pg.errors == []
+
+
+def test_sources_under_a_result_link_to_the_references_page(tablet_page, served_site, catalogue):
+    pg = tablet_page
+    open_resistance(pg, served_site)
+    inputs = {"material": "IACS", "length": "10 m", "size": "2.5 mm2"}
+    type_inputs(pg, inputs)
+    expected = assert_page_matches_core(pg, catalogue, inputs)
+    links = pg.eval_on_selector_all("[data-sources] a", "els => els.map(e => [e.textContent, e.getAttribute('href')])")
+    assert [text for text, _ in links] == expected["sources"]
+    for key, href in links:
+        assert href.endswith(f"references/index.html#src-{key}")
+    pg.click("[data-sources] a")
+    pg.wait_for_load_state()
+    assert pg.url.endswith(f"/references/index.html#src-{expected['sources'][0]}")
+    assert pg.errors == []
+
+
+@pytest.mark.parametrize("name, inputs, bad_field, kept, dropped", [
+    # a drop in volts does not need the supply: the size stays, only the drop in percent goes
+    ("sizing", {"material": "IACS", "length": "30 m", "current": "16 A", "max_drop": "6.9 V", "supply": "230",
+                "conductors": "2", "temperature": "20 °C"}, "supply", "min_area", "voltage_drop_percent"),
+    # the coolant feeds only the rise: the winding temperature stays
+    ("temperature-rise", {"material": "IACS", "resistance_cold": "10 ohm", "temperature_cold": "20 °C",
+                          "resistance_hot": "12.5 ohm", "coolant": "25"}, "coolant", "temperature_hot",
+     "temperature_rise"),
+])
+def test_a_bad_optional_field_drops_only_its_results(tablet_page, served_site, catalogue, name, inputs, bad_field,
+                                                     kept, dropped):
+    pg = tablet_page
+    pg.goto(f"{served_site}/calculators/{name}/index.html")
+    pg.wait_for_selector("html.calc-ready")
+    for field, text in inputs.items():
+        pg.fill(f"#in-{name}-{field}", text)
+    pg.locator(f"#in-{name}-{bad_field}").blur()  # a field's message shows once the person leaves it
+    expected = calculate(name, inputs, catalogue)
+    assert pg.text_content(f"#in-{name}-{bad_field}-error") == expected["errors"][bad_field]
+    value = pg.get_attribute(f"[data-result={kept}]", "data-value")
+    assert float(value) == pytest.approx(expected["results"][kept]["value"], rel=1e-12, abs=0)
+    assert pg.text_content(f"[data-result={dropped}]") == "—"
     assert pg.errors == []
