@@ -6,8 +6,20 @@ from __future__ import annotations
 
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
 from conductor_atlas.core.lookup import TRADE_WORDS
+from conductor_atlas.core.material_models import MODEL_CHOICES, MODEL_LABELS, MODEL_NEEDS
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.derive import MaterialView
+
+
+MODEL_HINT = ("auto takes the model that holds at the temperature; a model the chosen material has no data for is "
+              "marked not available, with the reason")
+
+
+def model_choices() -> list[tuple[str, str, str]]:
+    """(key, label, why it may be missing) for each temperature model the model field offers."""
+    out = [("auto", "auto: the model that holds at the temperature", "")]
+    out.extend((key, f"{key}: {MODEL_LABELS[key]}", MODEL_NEEDS[key]) for key in MODEL_CHOICES if key != "auto")
+    return out
 
 
 def calc_spec(name: str, fixed: dict | None = None, datalist: str = "") -> dict:
@@ -20,7 +32,8 @@ def calc_spec(name: str, fixed: dict | None = None, datalist: str = "") -> dict:
     fields = []
     for field in module.FIELDS:
         label, hint = module.FIELD_INFO[field]
-        fields.append({"name": field, "label": label, "hint": hint,
+        choices = model_choices() if field == "model" else []
+        fields.append({"name": field, "label": label, "hint": MODEL_HINT if choices else hint, "choices": choices,
                        "value": fixed.get(field, module.DEFAULTS.get(field, "")),
                        "hidden": field in fixed,
                        "list": datalist if field in ("material", "other") and datalist else ""})

@@ -15,7 +15,7 @@ from conductor_atlas.core.carriers import electron_density
 from conductor_atlas.core.lookup import word_order_key
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
-from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
+from conductor_atlas.core.material_models import available_models, resistivity_at, resistivity_or_none
 from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
 from conductor_atlas.model import DataSet, Material
 from conductor_atlas.standards import limits_record
@@ -227,7 +227,7 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
     low, high = resistivity_range(m)
     matthiessen = base_metal_increments(m, t_ref)
     clad = clad_layers_table(m, rho_ref, t_ref)
-    return {
+    record = {
         "id": m.id,
         "name": m.name,
         "klass": m.klass,
@@ -279,6 +279,8 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
         "mean_free_path_source": mfp_source,
     }
+    record["models"] = available_models(record)  # the model field's choices for this material
+    return record
 
 
 def resistivity_sources(m: Material) -> list[str]:

@@ -29,7 +29,38 @@ function visibleFields(form) {
 function fillFromQuery(form) {
   const params = new URLSearchParams(window.location.search);
   for (const input of visibleFields(form)) {
-    if (params.has(input.name)) input.value = params.get(input.name);
+    if (params.has(input.name)) setValue(input, params.get(input.name));
+  }
+}
+
+// A choice from an address is matched in any case ("Linear"); one the list does not hold is added as
+// typed, so the core names the problem under the field instead of the list falling back silently.
+function setValue(input, text) {
+  if (input.tagName !== 'SELECT') { input.value = text; return; }
+  const wanted = text.trim().toLowerCase();
+  const match = Array.from(input.options).find((option) => option.value === wanted);
+  if (!match) {
+    const option = document.createElement('option');
+    option.value = text;
+    option.textContent = text;
+    input.appendChild(option);
+  }
+  input.value = match ? wanted : text;
+}
+
+// The model field offers every model; those the material in use has no data for are marked not
+// available, with the reason (the catalogue record's "models" lists the ones it has).
+function showModels(view, catalogue, outcome) {
+  const select = view.form.querySelector('select[name=model]');
+  if (!select || !outcome.material || select.dataset.material === outcome.material) return;
+  const record = catalogue.materials[outcome.material];
+  if (!record || !record.models) return;
+  select.dataset.material = outcome.material;
+  for (const option of select.options) {
+    if (!option.dataset.needs) continue;
+    const has = record.models.includes(option.value);
+    option.disabled = !has;
+    option.textContent = option.dataset.label + (has ? '' : ' (not available: ' + option.dataset.needs + ')');
   }
 }
 
@@ -219,6 +250,7 @@ function run(view, catalogue) {
   if (view.ran) view.slow = performance.now() - started > SLOW_MS;
   view.ran = true;
   show(view, outcome);
+  showModels(view, catalogue, outcome);
 }
 
 // A form whose last update took longer than SLOW_MS (the skin-effect calculator's bar sizes run the

@@ -135,3 +135,43 @@ def test_a_bad_optional_field_drops_only_its_results(tablet_page, served_site, c
     assert float(value) == pytest.approx(expected["results"][kept]["value"], rel=1e-12, abs=0)
     assert pg.text_content(f"[data-result={dropped}]") == "—"
     assert pg.errors == []
+
+
+def test_model_field_offers_the_material_s_models_and_explains_the_others(tablet_page, served_site, catalogue):
+    pg = tablet_page
+    open_resistance(pg, served_site)
+    inputs = {"material": "CCS-30", "length": "25 m", "size": "4 mm2", "temperature": "75 °C"}
+    type_inputs(pg, inputs)
+    options = pg.eval_on_selector_all("#in-resistance-model option",
+                                      "els => Object.fromEntries(els.map(e => [e.value, [e.disabled, e.textContent]]))")
+    # copper-clad steel has only its parallel-layer model on record
+    assert options["layers"][0] is False and options["auto"][0] is False
+    assert options["linear"] == [True, "linear: linear temperature-coefficient model (not available: no temperature "
+                                       "coefficient on record)"]
+    assert options["callendar-van-dusen"][1].endswith("(not available: not a platinum sensor metal)")
+    pg.focus("#in-resistance-model")  # chosen by hand: the person then leaves it for the material field
+    pg.select_option("#in-resistance-model", "layers")
+    assert_page_matches_core(pg, catalogue, {**inputs, "model": "layers"})
+    # another material without that model: the option is marked, and the core's message is under the field
+    pg.fill("#in-resistance-material", "Cu")
+    expected = calculate("resistance", {**inputs, "material": "Cu", "model": "layers"}, catalogue)
+    assert pg.text_content("#in-resistance-model-error") == expected["errors"]["model"]
+    assert pg.eval_on_selector("#in-resistance-model option[value=layers]", "e => e.disabled") is True
+    assert pg.eval_on_selector("#in-resistance-model option[value=table]", "e => e.disabled") is False
+    assert pg.errors == []
+
+
+def test_a_model_in_the_address_is_read_in_any_case(tablet_page, served_site, catalogue):
+    pg = tablet_page
+    pg.goto(f"{served_site}/calculators/resistance/index.html?material=IACS&length=10%20m&size=2.5%20mm2"
+            "&temperature=90%20%C2%B0C&model=Linear")
+    pg.wait_for_selector("html.calc-ready")
+    assert pg.input_value("#in-resistance-model") == "linear"
+    assert_page_matches_core(pg, catalogue, {"material": "IACS", "length": "10 m", "size": "2.5 mm2",
+                                             "temperature": "90 °C", "model": "linear"})
+    # a model no list holds is kept as typed, so the core names the problem instead of a silent "auto"
+    pg.goto(f"{served_site}/calculators/resistance/index.html?material=IACS&model=cubic")
+    pg.wait_for_selector("html.calc-ready")
+    assert pg.input_value("#in-resistance-model") == "cubic"
+    assert pg.text_content("[data-result=resistance]") == "—"
+    assert pg.errors == []
