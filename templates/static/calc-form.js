@@ -52,10 +52,10 @@ function setValue(input, text) {
 // available, with the reason (the catalogue record's "models" lists the ones it has).
 function showModels(view, catalogue, outcome) {
   const select = view.form.querySelector('select[name=model]');
-  if (!select || !outcome.material || select.dataset.material === outcome.material) return;
+  if (!select || !outcome.material || select.dataset.modelsFor === outcome.material) return;
   const record = catalogue.materials[outcome.material];
   if (!record || !record.models) return;
-  select.dataset.material = outcome.material;
+  select.dataset.modelsFor = outcome.material;
   for (const option of select.options) {
     if (!option.dataset.needs) continue;
     const has = record.models.includes(option.value);
