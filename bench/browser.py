@@ -310,8 +310,23 @@ def search_times(browser, base: str, queries: list[str], rounds: int, reps: int 
             "per_query_ms": per_query, "runs_ms": runs}
 
 
-FCP = "() => { const e = performance.getEntriesByName('first-contentful-paint')[0]; return e ? e.startTime : null; }"
+# the first-contentful-paint entry, waited for: a throttled page may paint after its load event
+FCP = """() => new Promise((resolve) => {
+  const seen = (entries) => entries.find((e) => e.name === 'first-contentful-paint');
+  const now = seen(performance.getEntriesByType('paint'));
+  if (now) { resolve(now.startTime); return; }
+  new PerformanceObserver((list) => { const e = seen(list.getEntries()); if (e) resolve(e.startTime); })
+    .observe({type: 'paint', buffered: true});
+  setTimeout(() => resolve(null), 15000);
+})"""
 SCRIPT_TAG = re.compile(r"<script\b[^>]*>.*?</script>", re.S | re.I)
+
+
+def answer_with(html: str):
+    """A route handler (Playwright calls it with the route and its request) that answers ``html``."""
+    def answer(route, request=None) -> None:
+        route.fulfill(body=html, content_type="text/html; charset=utf-8")
+    return answer
 
 
 def first_contentful_paint(browser, base: str, path: str, rounds: int) -> tuple[dict, dict]:
@@ -329,8 +344,7 @@ def first_contentful_paint(browser, base: str, path: str, rounds: int) -> tuple[
         for kind in ("page", "floor"):
             context = browser.new_context(service_workers="block")
             page = context.new_page()
-            body = documents[kind]
-            page.route(url, lambda route, body=body: route.fulfill(body=body, content_type="text/html; charset=utf-8"))
+            page.route(url, answer_with(documents[kind]))
             cdp = context.new_cdp_session(page)
             cdp.send("Emulation.setCPUThrottlingRate", {"rate": THROTTLE})
             page.goto(url, wait_until="load")
