@@ -11,7 +11,7 @@ from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.material_models import local_temperature_coefficient
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.constants import TWENTY_CELSIUS
+from conductor_atlas.core.celsius import TWENTY_CELSIUS
 from conductor_atlas.derive import MaterialView
 from conductor_atlas.schema import CLASSES, PROPERTIES
 from conductor_atlas.derived_table import Column, Row, Table

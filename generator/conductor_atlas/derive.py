@@ -14,7 +14,7 @@ from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.carriers import electron_density
 from conductor_atlas.core.lookup import word_order_key
 from conductor_atlas.core.text_match import name_key
-from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
+from conductor_atlas.core.celsius import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.core.material_models import available_models, resistivity_at, resistivity_or_none
 from conductor_atlas.fits import BlochGruneisenFit, fit_bloch_gruneisen
 from conductor_atlas.model import DataSet, Material

@@ -18,7 +18,8 @@ import math
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.constants import TWENTY_CELSIUS
+from conductor_atlas.core.celsius import TWENTY_CELSIUS
+from conductor_atlas.core.numfmt import temperature_text
 from conductor_atlas.derive import (carrier_density, derive_material, linear_model, own_mean_free_path,
                                     reference_resistivity)
 from conductor_atlas.model import Material
@@ -37,10 +38,6 @@ def range_text(name: str) -> str:
     return f"{spec.low:g} … {spec.high:g} {spec.unit}"
 
 
-def kelvin_text(t: float) -> str:
-    return f"{t:g} K ({t - 273.15:g} °C)"
-
-
 def linear_model_problems(m: Material, where: str) -> list[str]:
     """ρ_ref = ρ(T_ρ) / (1 + α (T_ρ − T_α)) and ρ(T) = ρ_ref [1 + α (T − T_α)] at both ends of the span."""
     alpha = m.get("temperature_coefficient")
@@ -52,7 +49,7 @@ def linear_model_problems(m: Material, where: str) -> list[str]:
     field = f"{where}: properties.temperature_coefficient"
     if not factor > 0 or not plausible("resistivity", rho / factor):
         found = "not positive" if not factor > 0 else f"{rho / factor:g} ohm * m"
-        return [f"{field}: with ρ given at {kelvin_text(t_rho)} and α = {alpha.si:g} 1/K at {kelvin_text(t_alpha)}, "
+        return [f"{field}: with ρ given at {temperature_text(t_rho)} and α = {alpha.si:g} 1/K at {temperature_text(t_alpha)}, "
                 f"1 + α·ΔT = {factor:g} and ρ at α's temperature is {found}, expected "
                 f"{range_text('resistivity')}; give ρ and α at the same temperature, or check α"]
     model = linear_model(m)
@@ -62,7 +59,7 @@ def linear_model_problems(m: Material, where: str) -> list[str]:
             iacs = f" ({dc.iacs_percent(value):.4g} %IACS)" if value > 0 else ""
             default = "" if model.span_sourced else " (the default span)"
             return [f"{field}.{end}: the linear model gives ρ = {value:g} ohm * m{iacs} at "
-                    f"{kelvin_text(t)}{default}, outside the plausible {range_text('resistivity')}; "
+                    f"{temperature_text(t)}{default}, outside the plausible {range_text('resistivity')}; "
                     f"narrow valid_from … valid_to or check α"]
     return []
 

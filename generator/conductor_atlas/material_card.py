@@ -7,7 +7,7 @@ from __future__ import annotations
 
 from dataclasses import dataclass
 
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.numfmt import format_fixed, format_number
 from conductor_atlas.derive import MaterialView
 from conductor_atlas.model import Value

@@ -10,7 +10,7 @@ from dataclasses import dataclass
 
 from conductor_atlas.svg_chart import Series, line_chart
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.constants import TWENTY_CELSIUS
+from conductor_atlas.core.celsius import TWENTY_CELSIUS
 from conductor_atlas.core.material_models import resistivity_or_none, within_model
 from conductor_atlas.derive import MaterialView
 

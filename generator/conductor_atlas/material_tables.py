@@ -11,7 +11,7 @@ from conductor_atlas.core import resistance as dc
 from conductor_atlas.core.ranges import has_range, scaled_record
 from conductor_atlas.core import size_effect as film
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.constants import TWENTY_CELSIUS, ZERO_CELSIUS
+from conductor_atlas.core.celsius import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.core.geometry import IEC60228_SIZES_MM2, awg_area, awg_name, diameter_from_area
 from conductor_atlas.core.material_models import (MODEL_LABELS, layers_label, matthiessen_label, resistivity_or_none,
                                                   within_model)

@@ -10,6 +10,7 @@ to a few ulp, because the core computes them from their defining relations.
 import pytest
 import scipy.constants as sc
 
+from conductor_atlas.core import celsius
 from conductor_atlas.core import constants as k
 from tests.support.approx import approx
 
@@ -73,4 +74,5 @@ def test_derived_constants_match_codata_2018(name, scipy_name):
 
 def test_zero_celsius():
     # scipy.constants.zero_Celsius = 273.15 K (definition of the Celsius scale).
-    assert k.ZERO_CELSIUS == sc.zero_Celsius
+    assert celsius.ZERO_CELSIUS == sc.zero_Celsius
+    assert celsius.TWENTY_CELSIUS == sc.zero_Celsius + 20.0

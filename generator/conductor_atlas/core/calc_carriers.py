@@ -40,7 +40,7 @@ CAUTION = ("Free-electron estimates with the free-electron mass and σ = n e² �
 
 
 def read_current_density(outcome, inputs):
-    """J [A/m²] from the current density field, or from current / area; None when neither is given."""
+    """J [A/m^2] from the current density field, or from current / area; None when neither is given."""
     has_j = len(field_text(inputs, "current_density")) > 0
     has_i = len(field_text(inputs, "current")) > 0
     if has_j and has_i:

@@ -40,7 +40,7 @@ PREECE_COPPER = 10244.0 / math.pow(0.0254, 1.5)  # [A/m^1.5]
 
 def warn_if_fusing(outcome, current, area):
     """Warn when ``current`` [A] exceeds Preece's fusing current of a bare copper wire of the same
-    cross-section ``area`` [m²] (round: d = sqrt(4A/π))."""
+    cross-section ``area`` [m^2] (round: d = sqrt(4A/π))."""
     d = math.sqrt(4.0 * area / math.pi)
     fusing = PREECE_COPPER * math.pow(d, 1.5)
     if current > fusing:
@@ -77,7 +77,7 @@ def material_at_temperature(outcome, inputs, catalogue, check=None):
 
 def resistivity_when_ready(outcome, m, t, inputs):
     """None when any field of the outcome has a problem; otherwise records m as the outcome's material
-    and returns ρ [Ω·m] of m at t [K] by the model asked in the "model" field (material_resistivity:
+    and returns ρ [ohm*m] of m at t [K] by the model asked in the "model" field (material_resistivity:
     its warnings and label go into the outcome), or None when no model reaches t."""
     if has_errors(outcome):
         return None

@@ -94,7 +94,7 @@ def per_km_text(r_per_m):
 
 
 def standard_limit(outcome, catalogue, m, size, klass, rho_high_20):
-    """[limit [Ω/m], text naming the limit and its table] for the size, or None (with a warning why)."""
+    """[limit [ohm/m], text naming the limit and its table] for the size, or None (with a warning why)."""
     if size["label"].find(" AWG") > 0:
         if len(klass) > 0 and klass != "1":
             add_warning(outcome, "AWG sizes are checked as solid round wire (ASTM B258); class " + klass

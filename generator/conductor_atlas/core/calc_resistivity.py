@@ -26,7 +26,7 @@ CAUTION = "Values follow the named model and its sources; outside a model's rang
 def calculate(inputs, catalogue):
     """Resistivity of a material at a temperature by the model that fits there.
 
-    Results: resistivity [Ω·m], conductivity [S/m], iacs_percent (100·ρ_IACS/ρ, comparing at the
+    Results: resistivity [ohm*m], conductivity [S/m], iacs_percent (100·ρ_IACS/ρ, comparing at the
     given temperature against annealed copper at 20 °C), temperature_coefficient: the local
     α(T) = (dρ/dT)/ρ(T) by material_models.local_temperature_coefficient (none when only a
     reference value is on record).

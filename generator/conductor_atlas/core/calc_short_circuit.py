@@ -2,7 +2,7 @@
 under a fault current, by the adiabatic heat balance with the material's own ρ(T), IEC 60949 beside it."""
 
 from conductor_atlas.core import short_circuit as sc
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import next_metric_size, parse_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at
@@ -53,7 +53,7 @@ AGREEMENT = 0.02  # the integrated answer and IEC 60949's formula are expected t
 
 
 def iec_constants(m, catalogue):
-    """[K [A·s^½/m²], β [K], "copper" / "aluminium"] of IEC 60949 for the material, or None."""
+    """[K [A*s^0.5/m^2], β [K], "copper" / "aluminium"] of IEC 60949 for the material, or None."""
     if is_copper(m, catalogue):
         return [sc.IEC60949_K_COPPER, sc.IEC60949_BETA_COPPER, "copper"]
     if is_ec_aluminium(m, catalogue) or m["id"] == "aluminium":
@@ -62,7 +62,7 @@ def iec_constants(m, catalogue):
 
 
 def resistivities(m, points, model):
-    """ρ [Ω·m] of m at each temperature of ``points`` by ``model`` (warnings are read separately)."""
+    """ρ [ohm*m] of m at each temperature of ``points`` by ``model`` (warnings are read separately)."""
     out = []
     for t in points:
         out.append(resistivity_at(m, t, model)["rho"])
@@ -70,7 +70,7 @@ def resistivities(m, points, model):
 
 
 def heat_integral_of(m, model, lo, hi, cv):
-    """∫ c_v/ρ(θ) dθ from lo to hi [K] with m's own ρ(T), [A²·s/m⁴]."""
+    """∫ c_v/ρ(θ) dθ from lo to hi [K] with m's own ρ(T), [A^2*s/m^4]."""
     return sc.heat_integral(resistivities(m, sc.integration_points(lo, hi), model), lo, hi, cv)
 
 

@@ -2,7 +2,7 @@
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.numfmt import format_fixed, format_number, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results, has_errors,

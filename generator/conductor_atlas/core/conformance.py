@@ -6,7 +6,7 @@ and handed to the calculators as catalogue["limits"]); this module only does the
 floats in and out, the Transcrypt subset, CoreError for impossible inputs.
 """
 
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 
 # IEC 60228:2004 Annex B: the temperature correction factor to 20 °C, k_t = (β + 20)/(β + t) with
@@ -40,8 +40,8 @@ def correction_factor(rho_20, rho_t):
 
     k = ρ(20 °C) / ρ(t),   R20 = k · R_t
 
-    rho_20 : float  Resistivity of the material at 20 °C, [Ω·m]
-    rho_t : float   Resistivity at the measurement temperature, [Ω·m]
+    rho_20 : float  Resistivity of the material at 20 °C, [ohm*m]
+    rho_t : float   Resistivity at the measurement temperature, [ohm*m]
 
     Assumes the sample's length and area do not change with temperature (thermal expansion,
     about 17e-6 /K for copper, moves R by under 0.02 % per 10 K and is left out, as the
@@ -53,7 +53,7 @@ def correction_factor(rho_20, rho_t):
 
 
 def resistance_per_length(resistance, sample_length):
-    """Resistance per unit length R' = R / L, [Ω/m].  resistance [Ω], sample_length [m]."""
+    """Resistance per unit length R' = R / L, [ohm/m].  resistance [ohm], sample_length [m]."""
     if not (sample_length > 0):
         raise CoreError("the sample length must be above zero", "length")
     return resistance / sample_length
@@ -77,9 +77,9 @@ def margin_to_limit(value, limit):
 
 
 def nominal_row(areas, area):
-    """Index of the row whose nominal area equals ``area`` [m²] (within 1e-6 relative), or -1.
+    """Index of the row whose nominal area equals ``area`` [m^2] (within 1e-6 relative), or -1.
 
-    areas : list of float  Nominal areas of a standard's table, increasing, [m²]
+    areas : list of float  Nominal areas of a standard's table, increasing, [m^2]
     """
     for i in range(len(areas)):
         if abs(areas[i] - area) <= 1e-6 * areas[i]:
@@ -88,7 +88,7 @@ def nominal_row(areas, area):
 
 
 def neighbour_rows(areas, area):
-    """The nominal areas [m²] just below and above ``area`` (-1.0 where there is none): [below, above]."""
+    """The nominal areas [m^2] just below and above ``area`` (-1.0 where there is none): [below, above]."""
     below = -1.0
     above = -1.0
     for a in areas:

@@ -46,8 +46,3 @@ ELECTRON_VOLT = 1.602176634e-19
 
 # Bohr radius a_0, [m]. CODATA 2018 recommended value 5.29177210903e-11.
 BOHR_RADIUS = 5.29177210903e-11
-
-# Zero of the Celsius scale, [K]. Exact by definition of the kelvin and degree Celsius
-# (not a CODATA constant; listed in the same CODATA tables of conversion factors).
-ZERO_CELSIUS = 273.15
-TWENTY_CELSIUS = ZERO_CELSIUS + 20.0  # [K] the reference temperature of IACS and of most conductor tables

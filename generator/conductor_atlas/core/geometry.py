@@ -179,18 +179,18 @@ def awg_diameter(n):
 
 
 def awg_area(n):
-    """Cross-section of a solid round AWG wire from its nominal diameter, [m²]: A = π d² / 4."""
+    """Cross-section of a solid round AWG wire from its nominal diameter, [m^2]: A = π d² / 4."""
     d = awg_diameter(n)
     return math.pi * d * d / 4.0
 
 
 def round_area(diameter):
-    """Area of a round conductor, A = π d² / 4 [m²]; diameter [m]."""
+    """Area of a round conductor, A = π d² / 4 [m^2]; diameter [m]."""
     return math.pi * diameter * diameter / 4.0
 
 
 def diameter_from_area(area):
-    """Diameter of the round conductor of a given area, d = sqrt(4 A / π) [m]; area [m²]."""
+    """Diameter of the round conductor of a given area, d = sqrt(4 A / π) [m]; area [m^2]."""
     return math.sqrt(4.0 * area / math.pi)
 
 
@@ -207,7 +207,7 @@ def size_record(shape, area, label, diameter, width, thickness):
 
 
 def usable_area(area, field):
-    """``area`` [m²] when it is finite and above zero; a CoreError naming ``field`` otherwise.
+    """``area`` [m^2] when it is finite and above zero; a CoreError naming ``field`` otherwise.
 
     A diameter or bar side that parses can still give an area that overflows to infinity
     ("d 1e200 m") or underflows to zero ("d 1e-200 mm"); either would reach R = ρL/A.
@@ -281,7 +281,7 @@ def size_from_text(text, field):
 
 
 def next_metric_size(area):
-    """Smallest IEC 60228 nominal size (mm², as a float) whose nominal area is >= area [m²].
+    """Smallest IEC 60228 nominal size (mm², as a float) whose nominal area is >= area [m^2].
 
     Returns -1.0 when the area exceeds the largest listed size.
     """
@@ -293,7 +293,7 @@ def next_metric_size(area):
 
 
 def next_awg(area):
-    """Largest AWG gauge number (thinnest wire) whose nominal area is >= area [m²].
+    """Largest AWG gauge number (thinnest wire) whose nominal area is >= area [m^2].
 
     Returns -99 when even 4/0 is too small (use kcmil sizes or parallel conductors).
     """

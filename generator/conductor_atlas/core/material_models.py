@@ -7,7 +7,7 @@ Callendar–Van Dusen coefficients (cvd_a, cvd_b, cvd_c) for platinum sensor met
 estimate from a base metal (mt_t, mt_drho, mt_base) and, for clad wire, ρ(T) of its two layers
 conducting in parallel (cl_t, cl_rho, cl_fraction, cl_names: derive.clad_layers_table).
 
-``resistivity_at`` returns {"rho": [Ω·m], "model": key, "label": text, "warnings": [...]};
+``resistivity_at`` returns {"rho": [ohm*m], "model": key, "label": text, "warnings": [...]};
 "auto" picks, in order: Callendar–Van Dusen inside −200…850 °C (the defining equation of a
 platinum sensor metal wins over its mean α); linear inside its span;
 the table inside its range (interpolated, flagged); the Bloch–Grüneisen fit inside its fitted
@@ -172,7 +172,7 @@ def choose_model(m, t):
 
 
 def resistivity_or_none(m, t):
-    """The "auto" model's answer at t [K] (resistivity_at's record: "rho" [Ω·m], "model", "label",
+    """The "auto" model's answer at t [K] (resistivity_at's record: "rho" [ohm*m], "model", "label",
     "warnings"), or None where no model reaches t: for tables, charts and estimates that leave a gap
     or fall back instead of showing a message."""
     try:

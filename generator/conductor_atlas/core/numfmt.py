@@ -10,7 +10,7 @@ byte-identical in both runtimes.
 
 import math
 
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 
 SUPERSCRIPT_DIGITS = "⁰¹²³⁴⁵⁶⁷⁸⁹"

@@ -8,7 +8,7 @@ module; this one returns areas. Pure Python in the Transcrypt subset; CoreError 
 impossible inputs.
 """
 
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError, check_positive
 
 # Inferred zero-resistance temperature below 0 degC, [K]. From memory: IEEE Std 118 and

@@ -13,7 +13,7 @@ Transcrypt subset (math only), so it runs unchanged in the browser.
 
 import math
 
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.quadrature import GL_NODES, GL_WEIGHTS
 

@@ -14,7 +14,7 @@ tests/core/test_text_scanning.py checks each scan against the pattern it replace
 
 import math
 
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 
 # kind -> SI unit symbol shown in messages and results
@@ -38,7 +38,7 @@ SI_UNIT = {
 }
 
 MIL = 2.54e-5  # [m] 0.001 in; the inch is 0.0254 m exactly (international yard and pound, 1959)
-CIRCULAR_MIL = math.pi / 4.0 * MIL * MIL  # [m²] the area of a circle one mil across
+CIRCULAR_MIL = math.pi / 4.0 * MIL * MIL  # [m^2] the area of a circle one mil across
 
 # normalised spelling -> [kind, factor, offset]; offset only for temperatures
 UNITS = {

@@ -18,7 +18,7 @@ from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.resistance import resistivity_linear
 from conductor_atlas.core.temperature_models import interpolate_table
 from conductor_atlas.core.skin_effect import skin_depth
-from conductor_atlas.core.constants import ZERO_CELSIUS
+from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.search import search, search_entries
 from conductor_atlas.core.search_format import INDEX_FORMAT
 from conductor_atlas.core.search_prepare import prepare_index
