@@ -45,7 +45,7 @@ class LimitTable:
 def standard_files(folder: Path, problems) -> list[Path]:
     """FOLDER/standards/*.toml, sorted (none when the folder has no standards/; a standards/ that
     cannot be opened or is not a folder is reported)."""
-    from conductor_atlas.load import display_path, unreachable
+    from conductor_atlas.data_fields import display_path, unreachable
     sub = folder / "standards"
     if not os.path.lexists(sub):
         return []
@@ -64,7 +64,7 @@ def standard_files(folder: Path, problems) -> list[Path]:
 
 def read_standard(path: Path, sources: set[str], material_ids: set[str], problems) -> list[LimitTable]:
     """Validate one standards file into its limit tables ([] with problems reported when broken)."""
-    from conductor_atlas.load import convert, display_path, parse_temperature, read_toml
+    from conductor_atlas.data_fields import convert, display_path, parse_temperature, read_toml
     data = read_toml(path, problems)
     if data is None:
         return []

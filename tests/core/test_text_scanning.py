@@ -14,13 +14,13 @@ import re
 import pytest
 from hypothesis import given, settings, strategies as st
 
-from conductor_atlas.core import geometry, lookup, search_text, text_match, units
+from conductor_atlas.core import geometry, lookup, search_text, text_match, typed_text, units
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
 
 # --- the former definitions (units.py, geometry.py and search.py compiled these) -------------------
 # ... extended since by groups: "1,500,000", "12,500.5", "1 500" (a space and exactly three digits);
-# what the separators mean is units.grouped_number_text's job, checked in test_units.py
+# what the separators mean is typed_text.grouped_number_text's job, checked in test_units.py
 NUMBER_PATTERN = re.compile(r"^([+-]?(?:[0-9]+(?:[.,][0-9]+| [0-9]{3}(?![0-9]))*[.,]?|[.,][0-9]+)(?:[eE][+-]?[0-9]+)?)"
                             r"\s*(.*)$")
 UNPORTABLE_PATTERN = re.compile(r"[\x00-\x08\x0b\x0c\x0e-\x1f\x7f-\x9f\ufeff]")
@@ -98,7 +98,7 @@ def regex_parse_number(text, field):
     if SECOND_SEPARATOR.match(rest) is not None:
         raise CoreError("“" + text + "” mixes a decimal comma and a decimal point, or has two separators; "
                         "write it as 1234.5 or 1234,5", field)
-    number_text = units.grouped_number_text(number_text, field)
+    number_text = typed_text.grouped_number_text(number_text, field)
     value = float(number_text)
     if value - value != 0:
         raise CoreError("“" + number_text + "” is not a finite number", field)
@@ -138,7 +138,7 @@ def regex_awg_number(name):
 
 def regex_size_from_text(text, field):
     """size_from_text as it read with the former patterns."""
-    compact = units.normalise_text(text).strip()
+    compact = typed_text.normalise_text(text).strip()
     awg = AWG_FIRST.match(compact) or AWG_LAST.match(compact)
     if awg is not None:
         n = regex_awg_number(awg.group(1))
@@ -191,49 +191,49 @@ def mismatches(scan, reference, texts):
 def test_space_characters_are_what_regex_s_matches():
     # Python's re \s over every code point
     matched = [chr(c) for c in range(0x110000) if re.match(r"\s", chr(c)) is not None]
-    assert matched == list(units.SPACE_CHARACTERS)
+    assert matched == list(typed_text.SPACE_CHARACTERS)
 
 
 def test_has_space_flags_every_character_regex_s_matches():
-    assert [chr(c) for c in range(0x10000) if re.match(r"\s", chr(c)) and not units.has_space(chr(c))] == []
+    assert [chr(c) for c in range(0x10000) if re.match(r"\s", chr(c)) and not typed_text.has_space(chr(c))] == []
 
 
 def test_split_number_gives_the_groups_of_number_pattern():
-    assert mismatches(units.split_number, lambda t: groups_of(NUMBER_PATTERN, t), NUMBER_TEXTS) == []
+    assert mismatches(typed_text.split_number, lambda t: groups_of(NUMBER_PATTERN, t), NUMBER_TEXTS) == []
 
 
 def test_parse_number_reads_as_number_pattern_did():
-    assert mismatches(lambda t: outcome_of(units.parse_number, t, "f"),
+    assert mismatches(lambda t: outcome_of(typed_text.parse_number, t, "f"),
                       lambda t: outcome_of(regex_parse_number, t, "f"), NUMBER_TEXTS) == []
 
 
 def test_the_text_cleaners_give_what_the_patterns_gave():
-    assert mismatches(units.without_controls, lambda t: LINE_BREAKS.sub(" ", UNPORTABLE_PATTERN.sub("", t)),
+    assert mismatches(typed_text.without_controls, lambda t: LINE_BREAKS.sub(" ", UNPORTABLE_PATTERN.sub("", t)),
                       SIZE_TEXTS) == []
-    assert mismatches(units.portable_text, regex_portable_text, SIZE_TEXTS) == []
+    assert mismatches(typed_text.portable_text, regex_portable_text, SIZE_TEXTS) == []
     assert mismatches(units.joined_spaces, regex_joined_spaces, SIZE_TEXTS) == []
     assert mismatches(units.normalise_unit, regex_normalise_unit, SIZE_TEXTS) == []
     # the geometry scans are handed normalised text: one line, whatever was typed
-    assert [t for t in SIZE_TEXTS if "\n" in units.normalise_text(t)] == []
+    assert [t for t in SIZE_TEXTS if "\n" in typed_text.normalise_text(t)] == []
 
 
 @settings(max_examples=3000, deadline=None)
 @given(TEXTS)
 def test_parse_number_scans_as_number_pattern_matches(text):
-    assert outcome_of(units.parse_number, text, "f") == outcome_of(regex_parse_number, text, "f")
+    assert outcome_of(typed_text.parse_number, text, "f") == outcome_of(regex_parse_number, text, "f")
 
 
 @settings(max_examples=3000, deadline=None)
 @given(TEXTS)
 def test_fast_paths_of_the_text_cleaners_change_nothing(text):
     slow_portable = regex_portable_text(text)
-    assert units.portable_text(text) == slow_portable
+    assert typed_text.portable_text(text) == slow_portable
     slow = slow_portable
     for old, new in [("−", "-"), ("–", "-"), ("µ", "u"), ("μ", "u"), ("Ω", "ohm"), ("Ω", "ohm"), ("²", "2"),
                      ("^2", "2"), ("³", "3"), ("^3", "3"), ("°", "deg"), ("·", "*"), ("⋅", "*"),
                      ("\u00a0", " "), ("\u202f", " "), ("\u2009", " ")]:
         slow = slow.replace(old, new)
-    assert units.normalise_text(text) == slow
+    assert typed_text.normalise_text(text) == slow
     assert units.normalise_unit(text) == regex_normalise_unit(text)
 
 
@@ -296,14 +296,16 @@ def scan_calls():
     """[module, function, args] for each scan on the edge cases and 1,500 generated texts (raw:
     line breaks and controls included, except for the one-line geometry scans)."""
     u, g, s = "conductor_atlas.core.units", "conductor_atlas.core.geometry", "conductor_atlas.core.search_text"
+    t = "conductor_atlas.core.typed_text"
     calls = []
     for text in EDGE_TEXTS + generated(SIZE_PIECES, 1500, 3):
-        for function in ("split_number", "without_controls", "portable_text", "joined_spaces"):
-            calls.append([u, function, [text]])
+        for function in ("split_number", "without_controls", "portable_text"):
+            calls.append([t, function, [text]])
+        calls.append([u, "joined_spaces", [text]])
         # normalise_unit strips first, and the runtimes' strip differs on raw controls (\x85,
         # U+FEFF): it is only ever handed normalised text
-        calls.append([u, "normalise_unit", [units.normalise_text(text)]])
-        calls.append([u, "parse_number", [text, "f"]])
+        calls.append([u, "normalise_unit", [typed_text.normalise_text(text)]])
+        calls.append([t, "parse_number", [text, "f"]])
         calls.append([s, "is_ascii", [text]])
         line = text.replace("\n", " ").strip()
         for function in ("awg_gauge_text", "diameter_text", "bar_parts"):

@@ -133,7 +133,7 @@ def test_a_number_read_two_ways_is_refused_with_both_readings(text, words):
 
 
 def test_a_point_before_three_digits_is_read_as_decimal_and_said():
-    from conductor_atlas.core.units import point_reading_note
+    from conductor_atlas.core.typed_text import point_reading_note
     assert point_reading_note("1.500 m", "length") == ("length: “1.500” is read with a decimal point as 1.5; "
                                                        "for 1500 write 1500")
     for plain in ["1.5 m", "0.500 m", "1500 m", "1.5000 m", "1.500e3 m", "1,500,000 m", "abc"]:

@@ -24,7 +24,8 @@ from pathlib import Path
 from conductor_atlas.build import DATA_DIR, data_folders
 from conductor_atlas.core.celsius import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.derive import linear_model
-from conductor_atlas.load import convert, load_dataset
+from conductor_atlas.data_fields import convert
+from conductor_atlas.load import load_dataset
 from conductor_atlas.model import DataSet, Material
 from tests.support import element_datasets
 

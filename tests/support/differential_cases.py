@@ -37,7 +37,7 @@ def unit_cases():
     return cases
 
 
-# Texts at every branch of the unit parser's hand-written scanners (units.number_end,
+# Texts at every branch of the unit parser's hand-written scanners (typed_text.number_end,
 # needs_cleaning, has_lookalikes, has_space): both runtimes must read them alike.
 SCANNING_TEXTS = [
     "5", "+5", "-5", "+", "-", ".", ",", ".5", ",5", "5.", "5,", "5.5.5", "5,5.5", "5..5", "1e", "1e5", "1E+5",
@@ -46,7 +46,7 @@ SCANNING_TEXTS = [
     "5\rmm", "5\u2028mm", "5\u2029mm", "5\x1cmm", "5\x85mm", "5\x00mm", "5\x7fmm", "\U0001F600 5 mm",
     "5 \U0001F600", "5 mm\U0001F600", "−40 °F", "5 µΩ·cm", "35 mm^2", "35 mm²", "1 m^3", "20 deg C",
     "2.5 sq mm", "250 kcm", "10 ohms", "1 W / ( m * K )", "1 A/ mm2", "3 ppm / K", "  7  ", "", " ",
-    # thousands groups and decimal commas (units.grouped_number_text)
+    # thousands groups and decimal commas (typed_text.grouped_number_text)
     "1,500 ft", "-12,500 m", "1,500,000 m", "1.500.000 m", "12,500.5 m", "1.234,5 m", "1 500 m", "1\u2009500 m",
     "1\u202f500 m", "12 500 000 m", "1 500,5 m", "0,820 m", "1,5 m", "1,5000 m", "1234,567 m", "1.500 m",
     "1,5,5 m", "0 500 m", "1 5000 m", "1,500e3 m", "1,500. m", "1,500.000,5 m",
@@ -54,18 +54,18 @@ SCANNING_TEXTS = [
 
 
 def scanning_cases():
-    from conductor_atlas.core.units import normalise_text
+    from conductor_atlas.core.typed_text import normalise_text
     cases = []
     for text in SCANNING_TEXTS:
-        cases.append(("conductor_atlas.core.units", "portable_text", [text]))
-        cases.append(("conductor_atlas.core.units", "normalise_text", [text]))
+        cases.append(("conductor_atlas.core.typed_text", "portable_text", [text]))
+        cases.append(("conductor_atlas.core.typed_text", "normalise_text", [text]))
         cases.append(("conductor_atlas.core.units", "parse_quantity", [text, "length", "f"]))
         # parse_number and normalise_unit only ever see normalised text (raw control characters
         # are read differently by the two runtimes' patterns, which is why portable_text exists)
         cleaned = normalise_text(text)
-        cases.append(("conductor_atlas.core.units", "parse_number", [cleaned, "f"]))
+        cases.append(("conductor_atlas.core.typed_text", "parse_number", [cleaned, "f"]))
         cases.append(("conductor_atlas.core.units", "normalise_unit", [cleaned]))
-        cases.append(("conductor_atlas.core.units", "point_reading_note", [text, "f"]))
+        cases.append(("conductor_atlas.core.typed_text", "point_reading_note", [text, "f"]))
         cases.append(("conductor_atlas.core.units", "normalise_unit", [cleaned.lstrip("+-.,0123456789eE")]))
     return cases
 

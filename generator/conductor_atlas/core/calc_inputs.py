@@ -7,7 +7,8 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.lookup import find_material, trade_word_note
 from conductor_atlas.core.outcome import add_error, add_material_used, add_warning
-from conductor_atlas.core.units import parse_quantity, point_reading_note, portable_text
+from conductor_atlas.core.typed_text import point_reading_note, portable_text
+from conductor_atlas.core.units import parse_quantity
 
 
 def field_text(inputs, field):
@@ -43,7 +44,7 @@ def read_quantity(outcome, inputs, field, kind, required, default_text=""):
 
 def note_point_reading(outcome, text, field):
     """Say so when ``text`` was read with a decimal point before three digits ("1.500 m" is 1.5 m,
-    1500 m to a reader of the thousands-point convention): units.point_reading_note."""
+    1500 m to a reader of the thousands-point convention): typed_text.point_reading_note."""
     note = point_reading_note(text, field)
     if len(note) > 0:
         add_warning(outcome, note)
@@ -61,7 +62,13 @@ def require_positive(outcome, field, value, what):
 
 def read_temperature(outcome, inputs, field):
     """Conductor temperature [K]; 20 °C when the field is empty."""
-    t = read_quantity(outcome, inputs, field, "temperature", False, "20 °C")
+    return read_temperature_or_empty(outcome, inputs, field, False, "20 °C")
+
+
+def read_temperature_or_empty(outcome, inputs, field, required, default_text):
+    """A temperature [K] above absolute zero from ``field``; an empty field as read_quantity reads it
+    (``default_text``, else an error when ``required``, else None with no error)."""
+    t = read_quantity(outcome, inputs, field, "temperature", required, default_text)
     if t is not None and not (t > 0):
         add_error(outcome, field, "must be above absolute zero (−273.15 °C)")
         return None

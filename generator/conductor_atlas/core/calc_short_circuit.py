@@ -4,13 +4,13 @@ under a fault current, by the adiabatic heat balance with the material's own ρ(
 from conductor_atlas.core import short_circuit as sc
 from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.geometry import next_metric_size, parse_size
+from conductor_atlas.core.geometry import next_metric_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           has_errors, new_outcome)
-from conductor_atlas.core.calc_inputs import (field_text, note_point_reading, read_material, read_quantity,
-                                              require_positive)
+from conductor_atlas.core.calc_inputs import (field_text, read_material, read_quantity, read_size,
+                                              read_temperature_or_empty, require_positive)
 from conductor_atlas.core.calc_temperature_rise import is_copper, is_ec_aluminium
 
 NAME = "short-circuit"
@@ -114,14 +114,6 @@ def guard_squares(outcome, current, size):
         add_error(outcome, problem.field, problem.message)
 
 
-def read_temperature_field(outcome, inputs, field, required):
-    t = read_quantity(outcome, inputs, field, "temperature", required)
-    if t is not None and not (t > 0):
-        add_error(outcome, field, "must be above absolute zero (−273.15 °C)")
-        return None
-    return t
-
-
 def celsius_text(t):
     return format_fixed(t - ZERO_CELSIUS, 1) + " °C"
 
@@ -155,13 +147,9 @@ def calculate(inputs, catalogue):
         require_positive(outcome, "duration", duration, "the duration")
     size = None
     if len(field_text(inputs, "size")) > 0:
-        try:
-            size = parse_size(field_text(inputs, "size"), "size")
-            note_point_reading(outcome, field_text(inputs, "size"), "size")
-        except CoreError as problem:
-            add_error(outcome, "size", problem.message)
-    t_i = read_temperature_field(outcome, inputs, "initial", True)
-    t_f = read_temperature_field(outcome, inputs, "final", False)
+        size = read_size(outcome, inputs, "size")
+    t_i = read_temperature_or_empty(outcome, inputs, "initial", True, "")
+    t_f = read_temperature_or_empty(outcome, inputs, "final", False, "")
     guard_squares(outcome, current, size)
     if has_errors(outcome):
         return outcome

@@ -11,7 +11,8 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_warning, ch
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature, warn_if_fusing
-from conductor_atlas.core.units import normalise_text, parse_number, parse_quantity
+from conductor_atlas.core.typed_text import parse_number, normalise_text
+from conductor_atlas.core.units import parse_quantity
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "sizing"

@@ -8,7 +8,8 @@ from conductor_atlas.core.numfmt import format_fixed, format_number, temperature
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results, has_errors,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_quantity, require_positive
-from conductor_atlas.core.units import normalise_text, normalise_unit, parse_number, parse_quantity
+from conductor_atlas.core.typed_text import parse_number, normalise_text
+from conductor_atlas.core.units import normalise_unit, parse_quantity
 
 NAME = "temperature-rise"
 TITLE = "Winding temperature by the resistance method"

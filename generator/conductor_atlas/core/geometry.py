@@ -14,7 +14,8 @@ the regular expression it replaced gave; tests/core/test_text_scanning.py checks
 import math
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import (parse_quantity, normalise_text, recall_field, remember_field, space_end)
+from conductor_atlas.core.typed_text import normalise_text, space_end
+from conductor_atlas.core.units import parse_quantity, recall_field, remember_field
 
 INCH = 0.0254  # m, exact by definition (1959 international yard and pound agreement)
 

@@ -3,7 +3,8 @@ units.parse_quantity (FILTERS is the vocabulary), clauses split on ";", "," or "
 comparison of a value with a filter. Part of the site search (see core.search)."""
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.units import parse_quantity, known_units, normalise_text, split_number, SI_UNIT
+from conductor_atlas.core.typed_text import split_number, normalise_text
+from conductor_atlas.core.units import parse_quantity, known_units, SI_UNIT
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.search_text import (cached_tokens, DIGITS, fold_text, has_digit, osa_distance, tokens,
                                               typo_budget)

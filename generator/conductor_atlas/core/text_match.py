@@ -9,7 +9,7 @@ one edit distance, core.search_text.osa_distance.)
 # joiner, U+FEFF) and the controls. Typed or pasted into a name they look like nothing.
 INVISIBLE = ("\u00ad\u034f\u180e\u200b\u200c\u200d\u200e\u200f\u202a\u202b\u202c\u202d\u202e"
              "\u2060\u2061\u2062\u2063\u2064\ufeff")
-# Every character Python's str.isspace() accepts (units.SPACE_CHARACTERS): a run of them is one space
+# Every character Python's str.isspace() accepts (typed_text.SPACE_CHARACTERS): a run of them is one space
 NAME_SPACES = ("\t\n\x0b\x0c\r\x1c\x1d\x1e\x1f \x85\xa0\u1680\u2000\u2001\u2002\u2003\u2004\u2005"
                "\u2006\u2007\u2008\u2009\u200a\u2028\u2029\u202f\u205f\u3000")
 
