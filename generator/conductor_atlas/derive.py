@@ -278,6 +278,7 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "mu_source": m.get("relative_permeability").source if m.get("relative_permeability") else "",
         "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
         "mean_free_path_source": mfp_source,
+        **layer_fields(m),
     }
     record["models"] = available_models(record)  # the model field's choices for this material
     return record
@@ -295,6 +296,19 @@ def resistivity_sources(m: Material) -> list[str]:
     return sorted(keys)
 
 
+def layer_fields(m: Material) -> dict:
+    """A clad wire's construction for core.clad_layers: the core's and the cladding's own records and the
+    cladding's share of the area (0 and empty records for a material without layers)."""
+    layers = m.layers
+    if layers is None or layers.core is None or layers.cladding is None:
+        return {"layer_share": 0.0, "layer_core": {}, "layer_cladding": {}, "layer_source": ""}
+    return {"layer_share": layers.cladding_share,
+            "layer_core": calc_record(layers.core, linear_model(layers.core), bloch_gruneisen(layers.core)),
+            "layer_cladding": calc_record(layers.cladding, linear_model(layers.cladding),
+                                          bloch_gruneisen(layers.cladding)),
+            "layer_source": layers.source}
+
+
 def model_sources(m: Material) -> list[str]:
     """Source keys behind ρ(T) and density: what a resistance result rests on."""
     keys = {v.source for name, v in m.properties.items()
@@ -306,6 +320,8 @@ def model_sources(m: Material) -> list[str]:
         keys.update(layer.resistivity_source_keys())
     if m.temperature_base is not None:
         keys.update(m.temperature_base.resistivity_source_keys())
+    if m.layers is not None:
+        keys.add(m.layers.source)
     return sorted(keys)
 
 

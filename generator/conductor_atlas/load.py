@@ -17,9 +17,9 @@ from conductor_atlas.core.text_match import name_key
 from conductor_atlas.atlas_errors import DataError
 from conductor_atlas.data_fields import (Problems, convert, display_path, invisible_character, parse_quantity,
                                          parse_temperature, read_locator, read_toml, unreachable)
-from conductor_atlas.model import DataSet, Material, ResistivityTable, Source, Value
+from conductor_atlas.model import DataSet, Layers, Material, ResistivityTable, Source, Value
 from conductor_atlas.standards import read_standard, standard_files
-from conductor_atlas.schema import (CLASSES, MAX_TABLE_POINTS, PROPERTIES, RECORD_KEYS,
+from conductor_atlas.schema import (CLASSES, LAYER_KEYS, MAX_TABLE_POINTS, PROPERTIES, RECORD_KEYS,
                                     SCHEMA_VERSION, TABLE_KEYS, TABLE_RESISTIVITY_OHM_M, TABLE_TEMPERATURE_K,
                                     TOP_LEVEL_KEYS, YEARS)
 
@@ -251,12 +251,59 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
     elif layer_ids and base_id:
         problems.add(f"{where}: clad_layers", "a material takes ρ(T) from its base metal (temperature_base) "
                      "or from its layers (clad_layers), not both")
+    layers = read_layers(data["layers"], f"{where}: layers", sources, problems) if "layers" in data else None
     if len(problems.lines) > before:
         return None
     return Material(id=material_id, name=data["name"].strip(), klass=klass, aliases=tuple(a.strip() for a in aliases),
                     summary=data["summary"].strip(), notes=notes, properties=MappingProxyType(properties),
                     table=table, path=path, temperature_base_id=base_id, alias_sources=tuple(alias_sources),
-                    clad_layer_ids=tuple(layer_ids))
+                    clad_layer_ids=tuple(layer_ids), layers=layers)
+
+
+def read_layers(table: object, where: str, sources: set[str], problems: Problems) -> Layers | None:
+    """Validate [layers] of a clad round wire: core and cladding ids, cladding_share (0 < share < 1, by area),
+    source and locator. That the ids exist is checked once every file is read (attach_layers)."""
+    if not isinstance(table, dict):
+        problems.add(where, "expected a table with core, cladding, cladding_share, source and locator")
+        return None
+    before = len(problems.lines)
+    for key in sorted(set(table) - LAYER_KEYS):
+        problems.add(f"{where}.{key}", f"unknown key; expected one of {', '.join(sorted(LAYER_KEYS))}")
+    for key in ("core", "cladding"):
+        value = table.get(key)
+        if not isinstance(value, str) or not ID_PATTERN.fullmatch(value):
+            problems.add(f"{where}.{key}", f"expected the id of another material, such as \"copper-annealed\", "
+                         f"found {value!r}")
+    share = parse_quantity(table.get("cladding_share"), "dimensionless", f"{where}.cladding_share", problems)
+    if share is not None and not (0.0 < share < 1.0):
+        problems.add(f"{where}.cladding_share", f"expected the cladding's share of the cross-section by area, "
+                     f"between 0 and 1 (e.g. \"0.10\"), found {table.get('cladding_share')!r}")
+    source = table.get("source")
+    if source not in sources:
+        problems.add(f"{where}.source", f"unknown source key {source!r}; add it to data/sources.toml")
+    read_locator(table, where, problems)
+    if len(problems.lines) > before:
+        return None
+    return Layers(table["core"], table["cladding"], share, source, table["locator"].strip(), str(table.get("note", "")))
+
+
+def attach_layers(materials: list[Material], problems: Problems) -> list[Material]:
+    """A clad wire's core and cladding must be other materials of the data set without layers of their own;
+    they are attached to its Layers."""
+    by_id = {m.id: m for m in materials}
+    out = []
+    for m in materials:
+        if m.layers is not None:
+            found = []
+            for key, layer_id in (("core", m.layers.core_id), ("cladding", m.layers.cladding_id)):
+                other = by_id.get(layer_id)
+                if other is None or other.layers is not None or layer_id == m.id:
+                    problems.add(f"{display_path(m.path)}: layers.{key}",
+                                 f"expected the id of another material without layers, found \"{layer_id}\"")
+                found.append(other)
+            m = dataclasses.replace(m, layers=dataclasses.replace(m.layers, core=found[0], cladding=found[1]))
+        out.append(m)
+    return out
 
 
 def attach_temperature_bases(materials: list[Material], problems: Problems) -> list[Material]:
@@ -415,6 +462,7 @@ def load_dataset(folders: list[Path]) -> DataSet:
     if not materials and not problems.lines:
         problems.add(display_path(folders[0]), "holds no material files")
     materials = attach_temperature_bases(materials, problems)
+    materials = attach_layers(materials, problems)
     # what passes here builds: run what the build derives from each material (derived_checks)
     from conductor_atlas.derived_checks import material_problems  # imports derive, which imports numpy
     for m in materials:

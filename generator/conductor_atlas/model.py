@@ -83,6 +83,22 @@ class ResistivityTable:
 
 
 @dataclass(frozen=True)
+class Layers:
+    """A clad round wire's construction: a core and a cladding, each another material of the data set,
+    and the cladding's share of the cross-section by area (0 < share < 1), with its source."""
+
+    core_id: str
+    cladding_id: str
+    cladding_share: float
+    source: str
+    locator: str
+    note: str = ""
+    # the two materials themselves, attached once every file is loaded
+    core: "Material | None" = None
+    cladding: "Material | None" = None
+
+
+@dataclass(frozen=True)
 class Material:
     """One conductor material, as validated from its TOML file."""
 
@@ -105,6 +121,8 @@ class Material:
     clad_layers: "tuple[Material, ...]" = ()
     # (alias, source key, locator) for the aliases that are designations of a standard
     alias_sources: tuple[tuple[str, str, str], ...] = ()
+    # a clad wire (copper-clad steel or aluminium): its core and cladding ([layers] in the file)
+    layers: Layers | None = None
 
     def get(self, name: str) -> Value | None:
         return self.properties.get(name)
@@ -126,6 +144,8 @@ class Material:
         for layer in self.clad_layers:
             keys.update(layer.resistivity_source_keys())
         keys.update(source for _, source, _ in self.alias_sources)
+        if self.layers is not None:
+            keys.add(self.layers.source)
         return sorted(keys)
 
 

@@ -20,7 +20,10 @@ CLASSES = {
 }
 
 TOP_LEVEL_KEYS = {"schema", "id", "name", "class", "aliases", "summary", "notes", "properties",
-                  "resistivity_table", "temperature_base", "clad_layers"}
+                  "resistivity_table", "temperature_base", "clad_layers", "layers"}
+# [layers] of a clad round wire (its AC resistance): core and cladding are ids of other materials,
+# cladding_share the cladding's fraction of the cross-section by area
+LAYER_KEYS = {"core", "cladding", "cladding_share", "source", "locator", "note"}
 RECORD_KEYS = {"value", "min", "max", "temperature", "valid_from", "valid_to", "source", "locator",
                "note"}
 TABLE_KEYS = {"temperature_unit", "resistivity_unit", "source", "locator", "note", "points"}

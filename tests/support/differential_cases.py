@@ -132,7 +132,7 @@ def calculator_cases():
     ]
     cases = []
     names = ["IACS", "1350", "Ag", "Cu", "Pt385", "fe", "stainless-304", "film-copper", "coper", "", "copper",
-             "Aluminum", "6101", "C17200", "CCS-30", "fe-cr-al"]
+             "Aluminum", "6101", "C17200", "CCS-30", "fe-cr-al", "CCS-40", "CCA-10"]
     for name in names:
         for inp in inputs:
             cases.append(("conductor_atlas.core.calculators", "calculate",
@@ -165,7 +165,7 @@ def new_calculator_cases(catalogue):
     def add(name, function, inputs):
         cases.append(("conductor_atlas.core.calc_" + name, "calculate", [inputs, catalogue]))
 
-    for material in ("IACS", "Cu", "1350", "Fe", "ni", "stainless-304", "Pt385", "xx", ""):
+    for material in ("IACS", "Cu", "1350", "Fe", "ni", "stainless-304", "Pt385", "xx", "", "CCS-40", "CCA-15"):
         for f, size, t in (("50 Hz", "240 mm2", "20 °C"), ("1 MHz", "d 1 mm", "90 °C"), ("10 kHz", "100 x 10 mm", ""),
                            ("400 Hz", "", "77 K"), ("0 Hz", "", ""), ("1e308 Hz", "4/0 AWG", ""), ("-5 Hz", "abc", "x"),
                            ("", "", ""), ("60 Hz", "12 AWG", "-300 °C")):
@@ -312,6 +312,20 @@ def filament_cases():
     cases.append((fs, "bar_pair_solution", [0.02, 0.003, 0.01, rho, 60.0]))
     cases.append((fs, "round_layers_solution", [[[9.49e-4, 2.8264e-8], [1e-3, rho]], 1e6]))
     cases.append((fs, "round_layers_solution", [[[5e-3, rho]], 50.0]))
+    lr = "conductor_atlas.core.layered_round"
+    for x in (1e-3, 0.7, 5.0, 16.0, 40.0, 2500.0):
+        cases.append((lr, "kelvin_k_scaled", [x]))
+    rho_st = 14.2e-8
+    for f in (50.0, 6e4, 1e6, 1e9, 1e13):
+        cases.append((lr, "layered_round_resistance_ratio", [4.1e-4, 5e-4, rho_st, 200.0, rho / 0.97, 1.0, f]))
+    cases.append((lr, "layered_round_impedance", [0.0, 5e-4, rho_st, 200.0, rho, 1.0, 1e6]))
+    cases.append((lr, "layered_round_impedance", [5e-4, 5e-4, rho_st, 200.0, rho, 1.0, 1e6]))
+    cases.append((lr, "layered_round_impedance", [6e-4, 5e-4, rho_st, 200.0, rho, 1.0, 1e6]))
+    cases.append((lr, "layered_round_dc_resistance", [4.1e-4, 5e-4, rho_st, rho]))
+    cases.append((lr, "core_radius_for_cladding_share", [5e-4, 0.328]))
+    catalogue = shipped_catalogue()
+    for name in ("copper-clad-steel-40", "copper-annealed"):
+        cases.append(("conductor_atlas.core.clad_layers", "is_clad", [catalogue["materials"][name]]))
     for text in ("", "single", "3 bars, gap 10 mm", "2 bars gap 5 mm", "pair, 30 mm", "go-and-return 4 cm", "pair at 25 mm",
                  "bars 3", "12 bars, gap 1 mm", "3 bars", "pair", "1 bar", "zig"):
         cases.append(("conductor_atlas.core.ac_layout", "parse_arrangement", [text, "arrangement"]))

@@ -4,13 +4,15 @@ Round wire (or an area taken as round): the exact Kelvin-function solution (core
 Non-magnetic bars, bar groups and go-and-return bar pairs: the filament solver
 (core.filament_solver). Magnetic bars: the shell approximation, flagged as a lower estimate (the
 filament method takes the field as in free space). Each answer adds the result "ac_method"
-(value: the filament count, 0 for a closed form; text: the method in words).
+(value: the filament count, 0 for a closed form; text: the method in words). Clad wire (a core and a
+cladding on record, core.clad_layers): the exact two-layer solution for round wire; bars refused.
 
 Arrangement text (field "arrangement"): "" or "single"; "N bars, gap G" (N = 2..8 bars per
 phase side by side, wide faces facing, G the clear gap); "pair, S" or "go-and-return S" (a
 go-and-return pair of bars, wide faces facing at centre distance S).
 """
 
+from conductor_atlas.core.clad_layers import clad_round_ratio
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import filament_solver as filaments
 from conductor_atlas.core import skin_effect as skin
@@ -80,13 +82,19 @@ def _note_solution(outcome, solution, what):
                     + " %): the conductor is many skin depths across; read the AC/DC ratio to about that")
 
 
-def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r):
+def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
     """R_ac / R_dc of one conductor (single, pair) or of the group (bars per phase), with its method.
 
     size: core.geometry.parse_size's record; arrangement: parse_arrangement's list; rho [ohm m];
-    f [Hz]; mu_r [-]. Raises CoreError (field "arrangement") for a layout it cannot compute.
+    f [Hz]; mu_r [-]; layers: core.clad_layers.clad_layers_at's list for a clad wire, else None.
+    Raises CoreError (field "arrangement") for a layout it cannot compute, (field "size") for a clad bar.
     """
     kind = arrangement[0]
+    if layers is not None:
+        if kind != "single":
+            raise CoreError("groups and pairs of clad conductors are not computed: only a single round clad wire",
+                            "arrangement")
+        return clad_round_ratio(outcome, size, layers, f)
     if size["shape"] != "bar":
         if kind != "single":
             raise CoreError("bars per phase and go-and-return pairs are computed for bars (w x t); "

@@ -12,6 +12,7 @@ from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_p
 from conductor_atlas.core.calc_common import (material_at_temperature, recorded_mean_free_path, warn_if_anomalous,
                                               warn_if_fusing)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
+from conductor_atlas.core.clad_layers import clad_layers_at
 from conductor_atlas.core.ac_layout import ac_ratio_for
 
 NAME = "resistance"
@@ -51,9 +52,10 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
            "licensed practice.")
 
 
-def ac_ratio(outcome, size, rho, f, mu_r):
-    """R_ac/R_dc of one isolated conductor of the size's shape, with its method (core.ac_layout)."""
-    return ac_ratio_for(outcome, size, ["single"], rho, f, mu_r)
+def ac_ratio(outcome, size, rho, f, mu_r, layers):
+    """R_ac/R_dc of one isolated conductor of the size's shape, with its method (core.ac_layout; layers:
+    core.clad_layers.clad_layers_at's list for a clad wire, else None)."""
+    return ac_ratio_for(outcome, size, ["single"], rho, f, mu_r, layers)
 
 
 def mass_text(mass):
@@ -116,13 +118,18 @@ def calculate(inputs, catalogue):
         if m["mu_r"] > 1.5:
             add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(m["mu_r"], 3)
                         + "; in iron, steel and nickel it depends strongly on field strength and frequency")
+        layers = clad_layers_at(outcome, m, t)
         try:
             delta = skin.skin_depth(rho, f, m["mu_r"])
-            ratio = ac_ratio(outcome, size, rho, f, m["mu_r"])
+            where = ""
+            if layers is not None:
+                delta = skin.skin_depth(layers[2], f, layers[3])
+                where = " in the " + layers[6] + " cladding"
+            ratio = ac_ratio(outcome, size, rho, f, m["mu_r"], layers)
         except CoreError as problem:
             add_error(outcome, "frequency", problem.message)  # the DC results stand
             return outcome
-        add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
+        add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4) + where)
         if len(m["mu_source"]) > 0:
             add_sources(outcome, [m["mu_source"]])
         warn_if_anomalous(outcome, recorded_mean_free_path(m, rho, t)[0], delta)

@@ -9,6 +9,7 @@ from conductor_atlas.core.outcome import (add_error, add_result, add_sources, ad
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
 from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
+from conductor_atlas.core.clad_layers import CLAD_BAR_MESSAGE, clad_layers_at
 from conductor_atlas.core.ac_layout import ARRANGEMENT_HINT, ac_ratio_for, parse_arrangement
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
@@ -58,7 +59,8 @@ def calculate(inputs, catalogue):
     model. δ = sqrt(ρ / (π f μ0 μr)); R_s = ρ / δ (per square, for a conductor much thicker than
     δ); with a size: R_dc per metre = ρ / A (ρ / (n A) for n bars per phase), R_ac/R_dc by the exact
     Kelvin solution for round wire (or an area taken as round) and the filament solver for bars,
-    bar groups and go-and-return pairs (core.ac_layout), R_ac per metre = R_dc · ratio.
+    bar groups and go-and-return pairs (core.ac_layout), R_ac per metre = R_dc · ratio. A clad wire
+    (core.clad_layers): δ and R_s of its cladding, the ratio by the exact two-layer solution (round only).
     """
     outcome = new_outcome(NAME, inputs)
     f = read_quantity(outcome, inputs, "frequency", "frequency", True)
@@ -83,6 +85,16 @@ def calculate(inputs, catalogue):
     t = opening[1]
     rho = opening[2]
     mu_r = m["mu_r"]
+    layers = clad_layers_at(outcome, m, t)
+    where = ""
+    if layers is not None:
+        # the skin depth and surface resistance a clad wire's surface sees are its cladding's
+        rho = layers[2]
+        mu_r = layers[3]
+        where = " in the " + layers[6] + " cladding"
+        if size is not None and size["shape"] == "bar":
+            add_error(outcome, "size", CLAD_BAR_MESSAGE)
+            size = None
     if mu_r > 1.5:
         add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(mu_r, 3)
                     + "; in iron, steel and nickel it depends strongly on field strength, frequency and "
@@ -94,7 +106,7 @@ def calculate(inputs, catalogue):
         rs = skin.surface_resistance(rho, f, mu_r)
         ratio = 0.0
         if size is not None:
-            ratio = ac_ratio_for(outcome, size, arrangement, rho, f, mu_r)
+            ratio = ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers)
     except CoreError as problem:
         field = problem.field
         if field != "arrangement":
@@ -103,16 +115,16 @@ def calculate(inputs, catalogue):
         outcome["results"] = {}
         return outcome
     add_result(outcome, "temperature", t, "K", temperature_text(t))
-    add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
-    add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4))
+    add_result(outcome, "resistivity", opening[2], "Ω·m", format_number(opening[2] * 1e8, 5) + " µΩ·cm")
+    add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4) + where)
     if len(m["mu_source"]) > 0:
         add_sources(outcome, [m["mu_source"]])
-    add_result(outcome, "surface_resistance", rs, "Ω", format_si(rs, "Ω", 4) + " per square")
+    add_result(outcome, "surface_resistance", rs, "Ω", format_si(rs, "Ω", 4) + " per square" + where)
     if size is not None:
         area = size["area"]
         if arrangement[0] == "bars":
             area = area * arrangement[1]  # the group: n bars in parallel
-        r = dc.resistance(rho, 1.0, area)
+        r = dc.resistance(opening[2], 1.0, area)
         add_result(outcome, "area", area, "m²", format_number(area * 1e6, 4) + " mm²")
         add_result(outcome, "resistance", r, "Ω/m", format_si(r, "Ω", 4) + " per metre")
         add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
@@ -123,7 +135,7 @@ def calculate(inputs, catalogue):
             add_warning(outcome, "the surface resistance assumes a conductor much thicker than δ; here the current "
                                  "reaches the middle (radius or half-thickness is " + format_number(depth, 3)
                         + " δ), so use the AC resistance instead")
-    mean_free_path_check(outcome, m, rho, t, delta)
+    mean_free_path_check(outcome, m, opening[2], t, delta)
     check_finite_results(outcome, "frequency")
     return outcome
 

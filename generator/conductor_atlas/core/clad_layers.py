@@ -1,0 +1,64 @@
+"""Clad wire (copper-clad steel, copper-clad aluminium) in the calculators: its two layers at a temperature.
+
+A material record with layer_share > 0 (conductor_atlas.derive.layer_fields) carries the records of
+its core and its cladding and the cladding's share of the cross-section by area. Each layer's ρ at
+the conductor temperature comes from its own record's "auto" model (its reference value when no
+model reaches that temperature, with a warning), its μr from its record. The AC/DC ratio of a
+round clad wire is then the exact two-layer solution (core.layered_round); a clad bar is refused,
+since an averaged ρ would be wrong at high frequency and no two-layer bar model is built.
+"""
+
+from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.layered_round import core_radius_for_cladding_share, layered_round_resistance_ratio
+from conductor_atlas.core.material_models import resistivity_or_none
+from conductor_atlas.core.numfmt import format_number, temperature_text
+from conductor_atlas.core.outcome import add_result, add_sources, add_warning
+
+CLAD_BAR_MESSAGE = ("the AC/DC ratio of a clad wire is computed for round wire only (type a diameter such as d 1 mm, "
+                    "an AWG size or an area): in a clad bar the current divides between copper and core in a way "
+                    "not modelled here, and the averaged resistivity would be wrong at high frequency")
+
+
+def is_clad(m):
+    """True when material record m is a clad wire with a core and a cladding on record."""
+    return m["layer_share"] > 0.0
+
+
+def layer_resistivity(outcome, layer, t):
+    """ρ [Ω·m] of one layer's record at t [K]: its "auto" model, or its reference value with a warning."""
+    found = resistivity_or_none(layer, t)
+    if found is None:
+        add_warning(outcome, "no temperature model of " + layer["name"] + " reaches " + temperature_text(t)
+                    + ": its layer is taken at its reference resistivity")
+        return layer["rho_ref"]
+    return found["rho"]
+
+
+def clad_layers_at(outcome, m, t):
+    """[ρ_core, μr_core, ρ_cladding, μr_cladding, cladding share, core name, cladding name] of the clad
+    record m at t [K] (ρ in Ω·m, share by area), or None when m has no layers. Adds the layers' source."""
+    if not is_clad(m):
+        return None
+    core = m["layer_core"]
+    clad = m["layer_cladding"]
+    add_sources(outcome, [m["layer_source"]])
+    return [layer_resistivity(outcome, core, t), core["mu_r"], layer_resistivity(outcome, clad, t), clad["mu_r"],
+            m["layer_share"], core["name"], clad["name"]]
+
+
+def clad_round_ratio(outcome, size, layers, f):
+    """R_ac / R_dc of a clad round wire of the size's diameter (an area is taken as round) by the exact
+    two-layer solution, with the method as the result "ac_method". Raises CoreError (field "size") for a bar."""
+    if size["shape"] == "bar":
+        raise CoreError(CLAD_BAR_MESSAGE, "size")
+    a = size["diameter"] / 2.0
+    b = core_radius_for_cladding_share(a, layers[4])
+    ratio = layered_round_resistance_ratio(b, a, layers[0], layers[1], layers[2], layers[3], f)
+    add_result(outcome, "ac_method", 0.0, "", "exact two-layer solution (round wire: " + layers[5] + " core, "
+               + layers[6] + " cladding of " + format_number(100.0 * layers[4], 3) + " % of the area, "
+               + format_number(1e6 * (a - b), 3) + " µm thick)")
+    if layers[1] > 1.5:
+        add_warning(outcome, "the core's relative permeability is taken as " + format_number(layers[1], 3)
+                    + " (" + layers[5] + "); it depends on the field and saturates, which moves the AC resistance "
+                      "wherever the current still reaches the core")
+    return ratio
