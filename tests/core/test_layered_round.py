@@ -73,7 +73,7 @@ def test_scipy_ker_family_and_kve_agree(x):
 
 
 def test_kelvin_k_refuses_zero_and_nan():
-    for x in (0.0, -1.0, float("nan"), float("inf")):
+    for x in (0.0, 1e-101, -1.0, float("nan"), float("inf")):
         with pytest.raises(CoreError):
             kelvin_k_scaled(x)
 
@@ -144,6 +144,12 @@ def test_copper_clad_steel_matches_fem(f):
     exact = layered_round_resistance_ratio(b, a, RHO_STEEL, 200.0, RHO_CU_HD, 1.0, f)
     fem = layered_round_ac_ratio([(b, RHO_STEEL, 200.0), (a, RHO_CU_HD, 1.0)], f)["ratio"]
     assert exact == pytest.approx(fem, rel=1e-5)
+
+
+def test_a_vanishing_wire_is_dc_not_an_overflow():
+    # found by the calculator fuzz: a 1e-308 mm2 clad wire overflowed the integration range
+    assert layered_round_resistance_ratio(1e-160, 1.1e-160, RHO_STEEL, 200.0, RHO_CU, 1.0, 50.0) == 1.0
+    assert kelvin_k_scaled(1e-100)[0] == pytest.approx(sp.ker(1e-100), rel=1e-13)
 
 
 def test_refuses_a_core_larger_than_the_wire():

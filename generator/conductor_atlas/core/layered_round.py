@@ -68,7 +68,7 @@ def kelvin_k_scaled(x):
     Parameters
     ----------
     x : float
-        Real argument, x > 0, [-]
+        Real argument, x >= 1e-100, [-]
 
     Returns
     -------
@@ -84,14 +84,16 @@ def kelvin_k_scaled(x):
     is below exp(-40). No cancellation: the scaled integrand is at most 1 and the value is of the
     same order. Checked against scipy.special (ker, kei, kerp, keip, kve) in the tests.
     """
-    if not (x - x == 0) or not (x > 0.0):
-        raise CoreError("Kelvin function argument must be a finite number > 0", "x")
+    if not (x - x == 0) or not (x >= 1e-100):
+        raise CoreError("Kelvin function argument must be a finite number >= 1e-100", "x")
     s = x * _INV_SQRT2  # Re z = Im z
     h = 0.125
     if 0.35 / math.sqrt(x) < h:
         h = 0.35 / math.sqrt(x)
     y = 1.0 + 40.0 / s  # cosh t at which s (cosh t - 1) = 40
-    t_max = math.log(y + math.sqrt(y * y - 1.0))
+    t_max = math.log(2.0 * y)  # acosh y, for large y
+    if y < 1e8:
+        t_max = math.log(y + math.sqrt(y * y - 1.0))
     n = math.floor(t_max / h) + 1
     k0 = [0.0, 0.0]
     k1 = [0.0, 0.0]
@@ -178,6 +180,8 @@ def layered_round_impedance(core_radius, outer_radius, rho_core, mu_core, rho_cl
         b = 0.0
     d2 = skin.skin_depth(rho_clad, f, mu_clad)
     xa = _SQRT2 * a / d2
+    if xa < 1e-100:
+        raise CoreError("the conductor is too thin against its skin depth to compute an impedance", "outer_radius")
     if xa > 1e8:
         raise CoreError("the conductor is more than 7e7 skin depths across: frequency too high to compute", "f")
     p = [0.0, 0.0]
@@ -218,7 +222,12 @@ def layered_round_dc_resistance(core_radius, outer_radius, rho_core, rho_clad):
 
 def layered_round_resistance_ratio(core_radius, outer_radius, rho_core, mu_core, rho_clad, mu_clad, f):
     """R_ac / R_dc of a round conductor with a core and a cladding (layered_round_impedance's R over
-    layered_round_dc_resistance), [-]."""
+    layered_round_dc_resistance), [-]; exactly 1 where both layers are under 1e-6 skin depths across."""
+    check_positive(outer_radius, "outer_radius", "outer radius")
+    x_core = _SQRT2 * core_radius / skin.skin_depth(rho_core, f, mu_core)
+    x_clad = _SQRT2 * outer_radius / skin.skin_depth(rho_clad, f, mu_clad)
+    if x_core < 1e-6 and x_clad < 1e-6:
+        return 1.0  # the first correction is of order x^4 / 192 < 1e-26
     z = layered_round_impedance(core_radius, outer_radius, rho_core, mu_core, rho_clad, mu_clad, f)
     return z[0] / layered_round_dc_resistance(core_radius, outer_radius, rho_core, rho_clad)
 
