@@ -120,6 +120,14 @@ def carrier_density(m: Material) -> tuple[float, str]:
     return 0.0, ""
 
 
+def permeability_range(m: Material) -> tuple[float, float]:
+    """(lowest, highest) relative permeability the record's min/max give; (0, 0) without a range."""
+    value = m.get("relative_permeability")
+    if value is None or value.low is None or value.high is None:
+        return 0.0, 0.0
+    return value.low, value.high
+
+
 def si_or(m: Material, name: str, default: float) -> float:
     value = m.get(name)
     return value.si if value is not None else default
@@ -242,6 +250,9 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "valid_to": model.valid_to if model else t_rho,
         "density": si_or(m, "density", 0.0),
         "mu_r": si_or(m, "relative_permeability", 1.0),
+        # the recorded μr range (0, 0: none), run through the calculators by core.ranges
+        "mu_r_low": permeability_range(m)[0],
+        "mu_r_high": permeability_range(m)[1],
         "electron_density": n,
         "electron_density_how": n_how,
         "mean_free_path": mfp_si,

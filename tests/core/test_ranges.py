@@ -178,3 +178,64 @@ def test_compare_carries_the_ranges_of_both_materials(data_ends):
     assert ratio["low"] == pytest.approx(0.55, rel=1e-4)
     assert ratio["high"] == pytest.approx(0.595, rel=1e-4)
     assert ratio["high"] / ratio["low"] == pytest.approx(59.5 / 55.0, rel=1e-12)
+
+# ---- the relative permeability's recorded range (steel-low-carbon 100-2000, iron 150-5000, nickel
+# 110-600, cobalt 70-250: ASM Handbook vol. 1 and the CRC soft-magnetic table, from memory, as in the
+# data files), run through the calculators by core.ranges.add_permeability_range
+
+MAGNETIC = ["steel-low-carbon", "iron", "nickel", "cobalt"]
+
+
+@pytest.fixture(scope="module")
+def mu_ends():
+    """(μr_min, μr_max) of each magnetic material, straight from its file."""
+    dataset = load_dataset(data_folders())
+    return {mid: (dataset.by_id(mid).get("relative_permeability").low,
+                  dataset.by_id(mid).get("relative_permeability").high) for mid in MAGNETIC}
+
+
+@pytest.mark.parametrize("mid", MAGNETIC)
+def test_skin_depth_ends_follow_mu(mid, mu_ends):
+    # δ = sqrt(ρ / (π f μ0 μr)) with scipy's μ0 at each recorded end of μr (1e-9: scipy's μ0 is the
+    # CODATA 2018 value, the core's 4π·1e-7 differs by 5.5e-10 relative)
+    from scipy.constants import mu_0
+    out = calculate("skin-effect", {"material": mid, "frequency": "50 Hz"}, shipped_catalogue())
+    entry = out["results"]["skin_depth"]
+    rho = out["results"]["resistivity"]["value"]
+    low, high = mu_ends[mid]
+    assert entry["low"] == pytest.approx(math.sqrt(rho / (math.pi * 50.0 * mu_0 * high)), rel=1e-9)
+    assert entry["high"] == pytest.approx(math.sqrt(rho / (math.pi * 50.0 * mu_0 * low)), rel=1e-9)
+    assert "μr " in entry["text"] and any("saturates" in w for w in out["warnings"])
+
+
+def test_steel_rod_ac_ratio_range_is_kelvin_at_the_ends(mu_ends):
+    # the 10 mm low-carbon steel rod at 50 Hz: exact Kelvin ratio at μr 100 and 2000 (Ramo et al. 1994, sec. 5.6)
+    from conductor_atlas.core.skin_effect import round_wire_resistance_ratio
+    out = calculate("skin-effect", {"material": "steel-low-carbon", "frequency": "50 Hz", "size": "d 10 mm"},
+                    shipped_catalogue())
+    rho = out["results"]["resistivity"]["value"]
+    low, high = mu_ends["steel-low-carbon"]
+    entry = out["results"]["ac_dc_ratio"]
+    assert entry["low"] == pytest.approx(round_wire_resistance_ratio(5e-3, rho, 50.0, low), rel=1e-12)
+    assert entry["high"] == pytest.approx(round_wire_resistance_ratio(5e-3, rho, 50.0, high), rel=1e-12)
+    assert entry["low"] < entry["value"] < entry["high"]
+
+
+def test_clad_steel_carries_its_core_range():
+    # copper-clad steel's core μr range moves its AC resistance at 100 kHz, where the current still reaches
+    # the core; the ends equal the two-layer solution with the core's μr at 100 and 2000
+    from conductor_atlas.core.layered_round import core_radius_for_cladding_share, layered_round_resistance_ratio
+    catalogue = shipped_catalogue()
+    out = calculate("skin-effect", {"material": "CCS-40", "frequency": "100 kHz", "size": "d 1 mm"}, catalogue)
+    m = catalogue["materials"]["copper-clad-steel-40"]
+    b = core_radius_for_cladding_share(0.5e-3, m["layer_share"])
+    rho_core = m["layer_core"]["rho_ref"]
+    rho_clad = out["results"]["skin_depth"]["value"] ** 2 * math.pi * 1e5 * 4e-7 * math.pi
+    ends = [layered_round_resistance_ratio(b, 0.5e-3, rho_core, mu, rho_clad, 1.0, 1e5) for mu in (100.0, 2000.0)]
+    entry = out["results"]["ac_dc_ratio"]
+    assert sorted([entry["low"], entry["high"]]) == pytest.approx(sorted(ends), rel=1e-9)
+
+
+def test_no_range_without_one():
+    out = calculate("skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "d 10 mm"}, shipped_catalogue())
+    assert all("low" not in entry for entry in out["results"].values())

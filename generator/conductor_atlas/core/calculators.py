@@ -11,7 +11,7 @@ outcome["errors"][field].
 """
 
 from conductor_atlas.core.outcome import add_error, new_outcome
-from conductor_atlas.core.ranges import add_material_range
+from conductor_atlas.core.ranges import add_material_range, add_permeability_range
 from conductor_atlas.core import calc_resistance
 from conductor_atlas.core import calc_resistivity
 from conductor_atlas.core import calc_skin_effect
@@ -57,4 +57,5 @@ def calculate(name, inputs, catalogue):
     outcome = module.calculate(inputs, catalogue)
     if not (name in OWN_RANGES):
         add_material_range(outcome, module.calculate, inputs, catalogue)
+    add_permeability_range(outcome, module.calculate, inputs, catalogue)
     return outcome

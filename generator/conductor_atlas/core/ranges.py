@@ -79,6 +79,80 @@ def ranged_records(outcome, catalogue):
     return found
 
 
+def permeability_holder(m):
+    """The record whose μr range counts for m: m itself, or a clad wire's core; None without a range."""
+    if m["mu_r_low"] > 0 and m["mu_r_high"] > 0:
+        return m
+    if m["layer_share"] > 0 and m["layer_core"]["mu_r_low"] > 0 and m["layer_core"]["mu_r_high"] > 0:
+        return m["layer_core"]
+    return None
+
+
+def _with_mu(m, mu):
+    # a copy of m with μr = mu, for m itself or for its core (a clad wire), and no μr range left
+    out = {}
+    for key in m.keys():
+        out[key] = m[key]
+    if m["mu_r_low"] > 0 and m["mu_r_high"] > 0:
+        out["mu_r"] = mu
+    else:
+        core = {}
+        for key in m["layer_core"].keys():
+            core[key] = m["layer_core"][key]
+        core["mu_r"] = mu
+        core["mu_r_low"] = 0.0
+        core["mu_r_high"] = 0.0
+        out["layer_core"] = core
+    out["mu_r_low"] = 0.0
+    out["mu_r_high"] = 0.0
+    out["rho_low_ratio"] = 0.0
+    out["rho_high_ratio"] = 0.0
+    return out
+
+
+def add_permeability_range(outcome, calculate, inputs, catalogue):
+    """Give the results that depend on μr its recorded range: the calculator run again with μr (of the
+    material, or of a clad wire's core) at each end; low/high beside the value, the range in its text."""
+    if has_errors(outcome) or len(outcome["material"]) == 0:
+        return
+    if not (outcome["material"] in catalogue["materials"]):
+        return
+    m = catalogue["materials"][outcome["material"]]
+    holder = permeability_holder(m)
+    if holder is None:
+        return
+    low = calculate(inputs, catalogue_with(catalogue, _with_mu(m, holder["mu_r_low"])))
+    high = calculate(inputs, catalogue_with(catalogue, _with_mu(m, holder["mu_r_high"])))
+    if has_errors(low) or has_errors(high):
+        return
+    moved = False
+    for key in outcome["results"].keys():
+        if not (key in low["results"] and key in high["results"]):
+            continue
+        entry = outcome["results"][key]
+        lo = entry
+        hi = entry
+        for end in [low["results"][key], high["results"][key]]:
+            if end["value"] < lo["value"]:
+                lo = end
+            if end["value"] > hi["value"]:
+                hi = end
+        if not (differs(lo["value"], entry["value"]) or differs(hi["value"], entry["value"])):
+            continue
+        moved = True
+        if not ("low" in entry.keys()) or lo["value"] < entry["low"]:
+            entry["low"] = lo["value"]
+        if not ("high" in entry.keys()) or hi["value"] > entry["high"]:
+            entry["high"] = hi["value"]
+        entry["text"] = (entry["text"] + " (μr " + format_number(holder["mu_r_low"], 4) + " – "
+                         + format_number(holder["mu_r_high"], 4) + ": " + lo["text"] + " – " + hi["text"] + ")")
+    if moved:
+        add_warning(outcome, "μr of " + holder["name"] + " is recorded as " + format_number(holder["mu_r"], 4)
+                    + " within " + format_number(holder["mu_r_low"], 4) + " – " + format_number(holder["mu_r_high"], 4)
+                    + " (it depends on the field at the surface, i.e. on the current, and saturates): each result "
+                      "that depends on it shows the answers at both ends of that range")
+
+
 def end_catalogues(catalogue, records):
     """The catalogue with every combination of the records' range ends (2 per record: 2, or 4 for a
     comparison of two ranged materials). Results are monotonic in each ρ, so their extremes lie at
