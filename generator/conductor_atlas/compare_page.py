@@ -9,7 +9,7 @@ from dataclasses import dataclass
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.material_models import local_temperature_coefficient
+from conductor_atlas.core.material_models import local_temperature_coefficient, resistivity_or_none
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.celsius import TWENTY_CELSIUS
 from conductor_atlas.derive import MaterialView
@@ -61,6 +61,15 @@ def local_alpha(record: dict) -> float | None:
     return None if warnings else alpha
 
 
+def surface_of(record: dict, rho: float) -> tuple[float, float]:
+    """(ρ at 20 °C, μr) of what a conductor's surface is made of: a clad wire's cladding, else itself."""
+    if record["layer_share"] > 0:
+        clad = record["layer_cladding"]
+        found = resistivity_or_none(clad, TWENTY_CELSIUS)
+        return (found["rho"] if found else clad["rho_ref"]), clad["mu_r"]
+    return rho, record["mu_r"]
+
+
 def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
     rows = []
     for v in sorted(views, key=lambda v: v.rho_20):
@@ -69,6 +78,7 @@ def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
         density = record["density"] or None
         mass_iacs = dc.iacs_percent(rho) * IACS_DENSITY / density if density else None
         mfp = record["mean_free_path"] or None
+        surface = surface_of(record, rho)
         cells = (
             cell(rho, RHO.shown_scale, 4),
             cell(dc.iacs_percent(rho), IACS.shown_scale, 3),
@@ -76,8 +86,8 @@ def compare_rows(views: list[MaterialView]) -> list[CompareRow]:
             cell(density, DENSITY.shown_scale, 4),
             cell(mass_iacs, 1.0, 3),
             cell(mfp, MFP.shown_scale, 3),
-            cell(skin.skin_depth(rho, 50.0, record["mu_r"]), 1e3, 3),
-            cell(skin.skin_depth(rho, 1e6, record["mu_r"]), 1e6, 3),
+            cell(skin.skin_depth(surface[0], 50.0, surface[1]), 1e3, 3),
+            cell(skin.skin_depth(surface[0], 1e6, surface[1]), 1e6, 3),
         )
         rows.append(CompareRow(v.material.id, v.material.name, CLASSES[v.material.klass], cells))
     return rows

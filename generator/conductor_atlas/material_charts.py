@@ -73,6 +73,8 @@ def temperature_chart(view: MaterialView) -> Chart | None:
 
 def skin_depth_chart(view: MaterialView) -> Chart | None:
     record = view.calc
+    if record["layer_share"] > 0:
+        record = record["layer_cladding"]  # a clad wire's surface: its cladding
     found = resistivity_or_none(record, TWENTY_CELSIUS)
     if found is None:
         return None

@@ -12,6 +12,7 @@ from conductor_atlas.core.ranges import has_range, scaled_record
 from conductor_atlas.core import size_effect as film
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.celsius import TWENTY_CELSIUS, ZERO_CELSIUS
+from conductor_atlas.core.layered_round import core_radius_for_cladding_share, layered_round_resistance_ratio
 from conductor_atlas.core.geometry import IEC60228_SIZES_MM2, awg_area, awg_name, diameter_from_area
 from conductor_atlas.core.material_models import (MODEL_LABELS, layers_label, matthiessen_label, resistivity_or_none,
                                                   within_model)
@@ -25,6 +26,8 @@ TABLE_C = [-100.0, -40.0, -20.0, 0.0, 20.0, 40.0, 60.0, 70.0, 80.0, 90.0, 105.0,
            300.0, 400.0, 500.0, 600.0, 700.0, 800.0, 1000.0]
 FREQUENCIES = [50.0, 60.0, 400.0, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11]
 AC_FREQUENCIES = [50.0, 60.0, 400.0, 1e3, 1e4, 1e5]
+# a clad wire is chosen for RF: its table goes on to the frequencies where the cladding carries the current
+CLAD_FREQUENCIES = [1e6, 1e7]
 AC_SIZES_MM2 = [1.5, 2.5, 10.0, 35.0, 95.0, 240.0, 630.0]
 AC_AWG = [12, 4, -3]
 AWG_SIZES = [-3, -2, -1, 0, 1, 2, 4, 6, 8, 10, 12, 14, 16, 18, 20, 22, 24, 26, 28, 30]
@@ -164,7 +167,14 @@ def sourced_points(m: Material, record: dict, fit) -> Table | None:
                  note=f"{m.table.locator}. {note}".strip())
 
 
+def surface_layer(record: dict) -> dict:
+    """The record whose ρ and μr a surface sees: a clad wire's cladding, else the material itself."""
+    return record["layer_cladding"] if record["layer_share"] > 0 else record
+
+
 def skin_depth_table(m: Material, record: dict) -> Table | None:
+    clad = record["layer_share"] > 0
+    record = surface_layer(record)
     found = quiet_rho(record, TWENTY_CELSIUS)
     if found is None:
         return None
@@ -186,6 +196,9 @@ def skin_depth_table(m: Material, record: dict) -> Table | None:
                      "frequencies, so treat these depths as an order of magnitude")
     if end_rhos:
         notes.append(RANGE_NOTE + " (δ ∝ √ρ)")
+    if clad:
+        notes.append(f"A clad wire: the skin depth and surface resistance are those of its cladding ({record['name']}), "
+                     "which carries the current once δ is smaller than the cladding is thick")
     range_columns = ((Column("skin_depth_low", "Skin depth, low end of the recorded range", "µm"),
                       Column("skin_depth_high", "Skin depth, high end of the recorded range", "µm")) if end_rhos else ())
     return Table(id="skin-depth", title="Skin depth and surface resistance vs frequency (20 °C)",
@@ -198,7 +211,39 @@ def skin_depth_table(m: Material, record: dict) -> Table | None:
                  rows=tuple(rows), note=". ".join(notes))
 
 
+def clad_ac_ratio_table(record: dict) -> Table | None:
+    """A clad wire's AC/DC ratios of round sizes by the exact two-layer solution (core.layered_round)."""
+    core, clad, share = record["layer_core"], record["layer_cladding"], record["layer_share"]
+    rho_core, rho_clad = quiet_rho(core, TWENTY_CELSIUS), quiet_rho(clad, TWENTY_CELSIUS)
+    if rho_core is None or rho_clad is None:
+        return None
+    sizes = [(size_row_id(a), f"{format_number(a, 4)} mm²", a * 1e-6) for a in AC_SIZES_MM2]
+    sizes += [(f"awg-{awg_name(n).replace('/', '-')}", f"{awg_name(n)} AWG", awg_area(n)) for n in AC_AWG]
+    frequencies = AC_FREQUENCIES + CLAD_FREQUENCIES
+    columns = [Column("size", "Size", "", numeric=False), Column("diameter", "Diameter", "mm")]
+    columns += [Column(frequency_row_id(f).replace("-", "_"), f"R_ac/R_dc at {frequency_text(f)}", "") for f in frequencies]
+    rows = []
+    for row_id, label, area in sizes:
+        d = diameter_from_area(area)
+        b = core_radius_for_cladding_share(d / 2.0, share)
+        ratios = [layered_round_resistance_ratio(b, d / 2.0, rho_core[0], core["mu_r"], rho_clad[0], clad["mu_r"], f)
+                  for f in frequencies]
+        rows.append(Row(row_id, (label, d * 1e3, *ratios),
+                        (label, format_number(d * 1e3, 4, True), *[format_number(r, 4, True) for r in ratios])))
+    return Table(id="ac-dc-ratio", title="AC/DC resistance ratio of round clad wire (20 °C)",
+                 model=f"Exact two-layer solution: a {core['name']} core (μr = {format_number(core['mu_r'], 3)}) and a "
+                       f"{clad['name']} cladding of {format_number(share * 100, 3)} % of the area, Bessel/Kelvin functions "
+                       "in each layer with E and H matched at the interface",
+                 validity="Isolated, straight, solid clad wire, linear core (μr depends on the field and saturates); "
+                          "no proximity effect from nearby conductors",
+                 sources=tuple(sorted(set(record["sources"]) | {record["layer_source"]})), columns=tuple(columns),
+                 rows=tuple(rows), note="R_dc is the two layers in parallel; at high frequency the ratio follows the "
+                                        "cladding alone")
+
+
 def ac_ratio_table(m: Material, record: dict) -> Table | None:
+    if record["layer_share"] > 0:
+        return clad_ac_ratio_table(record)
     found = quiet_rho(record, TWENTY_CELSIUS)
     if found is None:
         return None
