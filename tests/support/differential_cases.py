@@ -303,6 +303,8 @@ def filament_cases():
         cases.append((fi, "annulus_log_gmd", rings))
     cases.append((cl, "solve_complex", [[2.0, 1.0, 0.5, 3.0], [0.1, -1.0, 2.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
     cases.append((cl, "solve_complex", [[0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    cases.append((cl, "solve_complex_symmetric", [[2.0, 0.5, 0.5, 3.0], [1.0, -0.3, -0.3, 2.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    cases.append((cl, "solve_complex_symmetric", [[0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
     for args in ([0.0, 0.05, False, True, 9.3e-3, 1], [0.0, 0.005, True, True, 9.3e-3, 2], [0.0, 0.1, False, False, 1e-3, 1]):
         cases.append((fs, "graded_cells", args))
     rho = 1.7241e-8

@@ -30,7 +30,7 @@ References
 import math
 
 from conductor_atlas.core.constants import MU_0
-from conductor_atlas.core.complex_linear import solve_complex
+from conductor_atlas.core.complex_linear import solve_complex, solve_complex_symmetric
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.filament_inductance import annulus_log_gmd, rectangle_log_gmd
 
@@ -178,7 +178,7 @@ def _solve_filaments(fils, f, sym_x, sym_y):
     for i in range(n):
         br.append(1.0)
         bi.append(0.0)
-    return solve_complex(ar, ai, br, bi, n)
+    return solve_complex_symmetric(ar, ai, br, bi, n)
 # __pragma__ ('kwargs')
 
 
