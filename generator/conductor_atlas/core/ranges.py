@@ -140,9 +140,9 @@ def add_permeability_range(outcome, calculate, inputs, catalogue):
         if not (differs(lo["value"], entry["value"]) or differs(hi["value"], entry["value"])):
             continue
         moved = True
-        if not ("low" in entry.keys()) or lo["value"] < entry["low"]:
+        if not ("low" in entry) or lo["value"] < entry["low"]:
             entry["low"] = lo["value"]
-        if not ("high" in entry.keys()) or hi["value"] > entry["high"]:
+        if not ("high" in entry) or hi["value"] > entry["high"]:
             entry["high"] = hi["value"]
         entry["text"] = (entry["text"] + " (μr " + format_number(holder["mu_r_low"], 4) + " – "
                          + format_number(holder["mu_r_high"], 4) + ": " + lo["text"] + " – " + hi["text"] + ")")
