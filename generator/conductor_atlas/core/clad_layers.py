@@ -25,7 +25,7 @@ def is_clad(m):
 
 
 def layer_resistivity(outcome, layer, t):
-    """ρ [Ω·m] of one layer's record at t [K]: its "auto" model, or its reference value with a warning."""
+    """ρ [ohm*m] of one layer's record at t [K]: its "auto" model, or its reference value with a warning."""
     found = resistivity_or_none(layer, t)
     if found is None:
         add_warning(outcome, "no temperature model of " + layer["name"] + " reaches " + temperature_text(t)
