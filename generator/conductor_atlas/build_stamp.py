@@ -27,6 +27,7 @@ import fcntl
 import hashlib
 import json
 import os
+import stat
 import sys
 import time
 from pathlib import Path
@@ -101,8 +102,15 @@ def _stamp_folder(folder: Path, racy_after_ns: int | None = None) -> dict[str, l
                 if entry.is_dir():
                     pending.append((entry.path, rel + "/"))
                     continue
-                info = entry.stat()
+                try:
+                    info = entry.stat()
+                except OSError:  # a link loop or a dangling link: the loader reports it; never "unchanged"
+                    stamps[rel] = [-1, -1, "unreadable"]
+                    continue
                 stamp: list = [info.st_size, info.st_mtime_ns]
+                if not stat.S_ISREG(info.st_mode):  # a pipe or device: reading it could block
+                    stamps[rel] = stamp + ["not a regular file"]
+                    continue
                 if racy_after_ns is not None and info.st_mtime_ns > racy_after_ns:
                     stamp.append(hashlib.sha256(Path(entry.path).read_bytes()).hexdigest())
                 stamps[rel] = stamp
@@ -118,8 +126,12 @@ def _same_folder(folder: Path, recorded: dict) -> bool:
     for rel, stamp in recorded.items():
         if on_disk[rel][:2] != stamp[:2]:
             return False
-        if len(stamp) > 2 and hashlib.sha256((folder / rel).read_bytes()).hexdigest() != stamp[2]:
-            return False
+        if len(stamp) > 2:
+            if len(on_disk[rel]) > 2:  # not a regular file now: compare the markers, never read it
+                if on_disk[rel][2:] != stamp[2:]:
+                    return False
+            elif hashlib.sha256((folder / rel).read_bytes()).hexdigest() != stamp[2]:
+                return False
     return True
 
 
