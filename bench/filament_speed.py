@@ -80,7 +80,7 @@ def main() -> int:
     for case, (ms, solution), timing in zip(CASES, python, node):
         x4 = 4 * timing["median"]
         verdict = "ok" if x4 <= case[3] else "OVER"
-        print(f"{case[0]:34} {solution['ratio']:8.4f} {solution['filaments']:9d} {solution['level']:5d} {ms:10.0f} "
+        print(f"{case[0]:34} {solution['ratio']:8.4f} {solution['filaments']:9.0f} {solution['level']:5.0f} {ms:10.0f} "
               f"{timing['first']:10.1f} {timing['median']:9.1f} {x4:7.0f} {case[3]:4d} {verdict}")
     return 0
 
