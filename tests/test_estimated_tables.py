@@ -56,3 +56,19 @@ def test_extrapolation_still_leaves_a_gap():
     out = calculate("resistivity", {"material": "copper-annealed", "temperature": str(rt.rows[0].values[0] - 20) + " °C"},
                     shipped_catalogue())
     assert out["warnings"], "the first row should sit at the edge of the models' reach"
+
+
+def test_a_computed_carrier_density_lists_the_sources_it_was_computed_from():
+    """n = ρ_m N_A Z / M (Ashcroft & Mermin eq. 1.4) from density, molar mass and valence: a result that
+    uses it lists those three values' sources, not a tabulated n's. Copper with its tabulated n taken
+    out stands for an overlay material that records only the three (no shipped one does today)."""
+    import dataclasses
+
+    from conductor_atlas.derive import carrier_density, carrier_density_sources
+    copper = load_dataset(data_folders()).by_id("copper")
+    assert carrier_density_sources(copper) == [copper.get("electron_density").source]
+    props = {k: v for k, v in copper.properties.items() if k != "electron_density"}
+    untabulated = dataclasses.replace(copper, properties=props)
+    assert carrier_density(untabulated)[1] == "computed"
+    expected = list(dict.fromkeys(copper.get(k).source for k in ("density", "molar_mass", "valence")))
+    assert carrier_density_sources(untabulated) == expected

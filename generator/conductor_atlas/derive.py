@@ -120,6 +120,18 @@ def carrier_density(m: Material) -> tuple[float, str]:
     return 0.0, ""
 
 
+def carrier_density_sources(m: Material) -> list[str]:
+    """The source keys behind carrier_density: the tabulated value's, or those of density, molar mass
+    and valence when n is computed from them (each once); [] when there is no n."""
+    tabulated = m.get("electron_density")
+    if tabulated is not None:
+        return [tabulated.source]
+    parts = [m.get(k) for k in ("density", "molar_mass", "valence")]
+    if all(p is not None for p in parts):
+        return list(dict.fromkeys(p.source for p in parts if p.source))
+    return []
+
+
 def permeability_range(m: Material) -> tuple[float, float]:
     """(lowest, highest) relative permeability the record's min/max give; (0, 0) without a range."""
     value = m.get("relative_permeability")
@@ -287,7 +299,7 @@ def calc_record(m: Material, model: LinearModel | None, fit: BlochGruneisenFit |
         "alpha_source": m.get("temperature_coefficient").source if m.get("temperature_coefficient") else "",
         "density_source": m.get("density").source if m.get("density") else "",
         "mu_source": m.get("relative_permeability").source if m.get("relative_permeability") else "",
-        "electron_density_source": m.get("electron_density").source if m.get("electron_density") else "",
+        "electron_density_sources": carrier_density_sources(m),
         "mean_free_path_source": mfp_source,
         **layer_fields(m),
     }

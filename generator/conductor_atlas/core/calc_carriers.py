@@ -110,8 +110,7 @@ def calculate(inputs, catalogue):
     add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "electron_density", n, "1/m³", format_number(n, 4) + " m⁻³")
-    if len(m["electron_density_source"]) > 0:
-        add_sources(outcome, [m["electron_density_source"]])
+    add_sources(outcome, m["electron_density_sources"])
     add_result(outcome, "relaxation_time", tau, "s", format_si(tau, "s", 4))
     add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 4))
     add_result(outcome, "fermi_velocity", v_f, "m/s", format_number(v_f / 1000.0, 4) + " km/s")

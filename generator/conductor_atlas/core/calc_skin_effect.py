@@ -145,7 +145,9 @@ def mean_free_path_check(outcome, m, rho, t, delta):
     with calc_common.warn_if_anomalous's warning."""
     found = recorded_mean_free_path(m, rho, t)
     mfp = found[0]
-    source = m["mean_free_path_source"]
+    sources = []
+    if len(m["mean_free_path_source"]) > 0:
+        sources = [m["mean_free_path_source"]]
     how = "as recorded"
     if found[1] == "unscaled":
         how = "recorded, unscaled (no ρ model at its temperature)"
@@ -156,11 +158,10 @@ def mean_free_path_check(outcome, m, rho, t, delta):
     if not (mfp > 0) and m["electron_density"] > 0:
         mfp = fe.mean_free_path(rho, m["electron_density"])
         how = "free-electron ħk_F/(n e² ρ)"
-        source = m["electron_density_source"]
+        sources = m["electron_density_sources"]
     if not (mfp > 0):
         return
-    if len(source) > 0:
-        add_sources(outcome, [source])
+    add_sources(outcome, sources)
     ratio = mfp / delta
     add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 3) + ", " + how)
     add_result(outcome, "path_ratio", ratio, "", format_number(ratio, 3))

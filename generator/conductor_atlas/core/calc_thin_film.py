@@ -85,8 +85,7 @@ def bulk_mean_free_path(outcome, inputs, m, rho, t):
     if m["electron_density"] > 0:
         add_warning(outcome, "no mean free path is on record for " + m["name"] + "; using the free-electron value "
                              "ℓ = ħ k_F / (n e² ρ), which can be off by a factor of several for transition metals")
-        if len(m["electron_density_source"]) > 0:
-            add_sources(outcome, [m["electron_density_source"]])
+        add_sources(outcome, m["electron_density_sources"])
         return fe.mean_free_path(rho, m["electron_density"])
     add_error(outcome, "mean_free_path", "no mean free path is on record for " + m["name"]
               + "; enter the bulk mean free path (e.g. 39 nm for copper at 20 °C)")
