@@ -127,6 +127,32 @@ def test_a_bad_optional_size_keeps_the_skin_depth(catalogue):
     assert outcome["results"]["skin_depth"]["value"] == pytest.approx(9.346e-3, rel=1e-3)
 
 
+def test_a_bad_current_density_keeps_the_carrier_quantities(catalogue):
+    outcome = calculate("carriers", {"material": "Cu", "current_density": "abc"}, catalogue)
+    assert "current_density" in outcome["errors"] and "drift_velocity" not in outcome["results"]
+    # n of copper, one conduction electron per atom: 8.47e28 m⁻³ (Ashcroft & Mermin table 1.1);
+    # 1e-2 covers the tabulated figure's rounding
+    assert outcome["results"]["electron_density"]["value"] == pytest.approx(8.47e28, rel=1e-2)
+
+
+def test_a_bad_size_keeps_the_comparison_ratios(catalogue):
+    outcome = calculate("compare", {"material": "IACS", "other": "1350", "size": "abc"}, catalogue)
+    assert "size" in outcome["errors"] and "area_other" not in outcome["results"]
+    # σ2/σ1 = 61.0 %IACS for 1350 (ASTM B230 minimum, as recorded) / 100 %IACS; 1e-3: IACS is
+    # stored as IEC 60028's rounded 1.7241 µΩ·cm
+    assert outcome["results"]["conductivity_ratio"]["value"] == pytest.approx(0.61, rel=1e-3)
+
+
+def test_a_bad_current_keeps_the_range_of_the_resistance(catalogue):
+    """A ranged material (hard-drawn copper, ASTM B1 96.16-97.16 %IACS) with a bad optional current:
+    the resistance stays with its range, not silently without it."""
+    outcome = calculate("resistance", {"material": "copper-hard-drawn", "length": "100 m", "size": "2.5 mm2",
+                                       "current": "abc"}, catalogue)
+    assert "current" in outcome["errors"]
+    r = outcome["results"]["resistance"]
+    assert r["low"] < r["value"] <= r["high"] and "range" in r["text"]
+
+
 # --- 4. every grade at its temperature --------------------------------------------------------------
 @pytest.mark.parametrize("alloy, base", [("6101", "Al"), ("C17200", "Cu"), ("C51000", "Cu")])
 @pytest.mark.parametrize("temperature", ["-40 °C", "75 °C", "90 °C", "200 °C"])

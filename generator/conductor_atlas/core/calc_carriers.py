@@ -35,6 +35,9 @@ RESULT_LABELS = [
     ["thermal_conductivity_wf", "Electronic thermal conductivity (Wiedemann–Franz)"],
     ["resistivity", "Resistivity at temperature"], ["temperature", "Temperature"],
 ]
+# optional inputs -> the results that need them (n, τ, ℓ ... do not depend on the current)
+SIDE_FIELDS = {"current_density": ["current_density", "drift_velocity"], "current": ["current_density", "drift_velocity"],
+               "size": ["current_density", "drift_velocity"]}
 CAUTION = ("Free-electron estimates with the free-electron mass and σ = n e² τ / m: good to tens of percent for "
            "the alkali and noble metals, rough for transition metals whose Fermi surfaces are far from a sphere.")
 
@@ -86,8 +89,9 @@ def calculate(inputs, catalogue):
     μ = e τ / m; ν_p = sqrt(n e² / (ε0 m)) / 2π; κ_WF = L0 T / ρ (core.carriers).
     """
     outcome = new_outcome(NAME, inputs)
-    j = read_current_density(outcome, inputs)
     opening = material_at_temperature(outcome, inputs, catalogue, check_electron_density)
+    # read after the opening: a problem here is shown under its field and drops only the drift results
+    j = read_current_density(outcome, inputs)
     if opening is None:
         return outcome
     m = opening[0]

@@ -35,6 +35,9 @@ RESULT_LABELS = [
     ["mass_per_metre", "Mass per metre, reference"], ["mass_per_metre_other", "Mass per metre, other"],
     ["temperature", "Temperature"],
 ]
+# optional input -> the results that need it (the ratios do not depend on the size)
+SIDE_FIELDS = {"size": ["area", "area_other", "diameter_other", "next_metric_size", "next_awg", "mass_per_metre",
+                        "mass_per_metre_other"]}
 CAUTION = ("Equal resistance at equal length and temperature only: current rating, terminations, strength and "
            "creep differ between materials. Size real installations to the local electrical code and licensed "
            "practice.")
@@ -52,11 +55,12 @@ def calculate(inputs, catalogue):
     outcome = new_outcome(NAME, inputs)
     m1 = read_material(outcome, inputs, catalogue, "material")
     m2 = read_material(outcome, inputs, catalogue, "other")
+    t = read_temperature(outcome, inputs, "temperature")
+    rho1 = resistivity_when_ready(outcome, m1, t, inputs)
+    # read after the materials: a bad size is shown under its field and drops only the size results
     size = None
     if len(field_text(inputs, "size")) > 0:
         size = read_size(outcome, inputs, "size")
-    t = read_temperature(outcome, inputs, "temperature")
-    rho1 = resistivity_when_ready(outcome, m1, t, inputs)
     if rho1 is None:
         return outcome
     label1 = outcome["model"]

@@ -10,7 +10,7 @@ temperature (the data give it at one temperature only); the outcome says so.
 """
 
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import add_warning, has_errors
+from conductor_atlas.core.outcome import add_warning
 
 RELATIVE_EPSILON = 1e-12  # a result that moves less than this between the runs has no range
 
@@ -110,10 +110,24 @@ def _with_mu(m, mu):
     return out
 
 
+def usable(outcome):
+    """True when the outcome has results to give ranges to (an error under an optional field that
+    drops only its own results, SIDE_FIELDS, leaves the others standing and ranged)."""
+    return len(outcome["results"]) > 0 and len(outcome["material"]) > 0
+
+
+def new_problems(run, outcome):
+    """True when a run at a range end has a problem the outcome itself does not have."""
+    for key in run["errors"].keys():
+        if not (key in outcome["errors"]):
+            return True
+    return False
+
+
 def add_permeability_range(outcome, calculate, inputs, catalogue):
     """Give the results that depend on μr its recorded range: the calculator run again with μr (of the
     material, or of a clad wire's core) at each end; low/high beside the value, the range in its text."""
-    if has_errors(outcome) or len(outcome["material"]) == 0:
+    if not usable(outcome):
         return
     if not (outcome["material"] in catalogue["materials"]):
         return
@@ -123,7 +137,7 @@ def add_permeability_range(outcome, calculate, inputs, catalogue):
         return
     low = calculate(inputs, catalogue_with(catalogue, _with_mu(m, holder["mu_r_low"])))
     high = calculate(inputs, catalogue_with(catalogue, _with_mu(m, holder["mu_r_high"])))
-    if has_errors(low) or has_errors(high):
+    if new_problems(low, outcome) or new_problems(high, outcome):
         return
     moved = False
     for key in outcome["results"].keys():
@@ -171,7 +185,7 @@ def add_material_range(outcome, calculate, inputs, catalogue):
     """Give the outcome's results the low and high of the used materials' ρ ranges (see the module
     docstring). ``calculate(inputs, catalogue)`` is the calculator that made ``outcome``.
     """
-    if has_errors(outcome):
+    if not usable(outcome):
         return
     records = ranged_records(outcome, catalogue)
     if len(records) == 0:
@@ -179,7 +193,7 @@ def add_material_range(outcome, calculate, inputs, catalogue):
     runs = []
     for each in end_catalogues(catalogue, records):
         run = calculate(inputs, each)
-        if has_errors(run):
+        if new_problems(run, outcome):
             add_warning(outcome, "the recorded range of ρ could not be carried through: at one of its ends the "
                                  "calculation has no answer")
             return
