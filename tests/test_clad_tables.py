@@ -8,13 +8,12 @@ import pytest
 
 from conductor_atlas.build import data_folders
 from conductor_atlas.compare_page import compare_rows
+from conductor_atlas.core.celsius import TWENTY_CELSIUS as T20
 from conductor_atlas.core.layered_round import core_radius_for_cladding_share, layered_round_resistance_ratio
 from conductor_atlas.core.material_models import resistivity_at
 from conductor_atlas.core.skin_effect import round_wire_resistance_ratio, skin_depth
 from conductor_atlas.derive import derive_material
 from conductor_atlas.load import load_dataset
-
-T20 = 293.15
 
 
 @pytest.fixture(scope="module")

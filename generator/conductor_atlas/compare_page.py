@@ -9,10 +9,10 @@ from dataclasses import dataclass
 
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
-from conductor_atlas.core.material_models import local_temperature_coefficient, resistivity_or_none
+from conductor_atlas.core.material_models import local_temperature_coefficient
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.celsius import TWENTY_CELSIUS
-from conductor_atlas.derive import MaterialView
+from conductor_atlas.derive import MaterialView, rho_at_20
 from conductor_atlas.schema import CLASSES, PROPERTIES
 from conductor_atlas.derived_table import Column, Row, Table
 
@@ -65,8 +65,7 @@ def surface_of(record: dict, rho: float) -> tuple[float, float]:
     """(ρ at 20 °C, μr) of what a conductor's surface is made of: a clad wire's cladding, else itself."""
     if record["layer_share"] > 0:
         clad = record["layer_cladding"]
-        found = resistivity_or_none(clad, TWENTY_CELSIUS)
-        return (found["rho"] if found else clad["rho_ref"]), clad["mu_r"]
+        return rho_at_20(clad)[0], clad["mu_r"]
     return rho, record["mu_r"]
 
 

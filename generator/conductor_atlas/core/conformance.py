@@ -6,7 +6,7 @@ and handed to the calculators as catalogue["limits"]); this module only does the
 floats in and out, the Transcrypt subset, CoreError for impossible inputs.
 """
 
-from conductor_atlas.core.celsius import ZERO_CELSIUS
+from conductor_atlas.core.celsius import TWENTY_CELSIUS, ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 
 # IEC 60228:2004 Annex B: the temperature correction factor to 20 °C, k_t = (β + 20)/(β + t) with
@@ -14,7 +14,7 @@ from conductor_atlas.core.errors import CoreError
 # α20 = 1/254.5 ≈ 0.00393 /K and 1/248 ≈ 0.00403 /K).
 IEC60228_BETA_COPPER = 234.5
 IEC60228_BETA_ALUMINIUM = 228.0
-REFERENCE_TEMPERATURE = ZERO_CELSIUS + 20.0  # [K] the temperature conductor limits are given at
+REFERENCE_TEMPERATURE = TWENTY_CELSIUS  # [K] the temperature conductor limits are given at
 
 
 def iec60228_correction_factor(temperature, beta):

@@ -2,11 +2,12 @@
 R = ρL/A, voltage drop, I²R loss, %IACS.
 """
 
+from conductor_atlas.core.celsius import TWENTY_CELSIUS
 from conductor_atlas.core.errors import CoreError
 
 # IEC 60028:1925: standard annealed copper, 1/58 Ω·mm²/m at 20 °C, defines 100 %IACS.
 IACS_RESISTIVITY = 1.0 / 58.0 * 1e-6  # [ohm*m] = 1.72414e-8
-IACS_REFERENCE_TEMPERATURE = 293.15  # [K]
+IACS_REFERENCE_TEMPERATURE = TWENTY_CELSIUS  # [K]
 
 
 def resistivity_linear(temperature, rho_ref, alpha_ref, t_ref):

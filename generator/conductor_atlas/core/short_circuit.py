@@ -15,7 +15,7 @@ mechanical forces decide a real installation.
 import math
 
 from conductor_atlas.core.celsius import ZERO_CELSIUS
-from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.errors import CoreError, check_positive
 
 # IEC 60949:1988, Table I (from memory of the standard): K [A*s^0.5/mm^2] and β [K] per conductor
 # material, for θ in °C in (2). Converted to SI here: K [A*s^0.5/m^2] = K [A*s^0.5/mm^2] · 1e6.
@@ -36,8 +36,7 @@ def check_squarable(x, field, what):
     ...
     conductor_atlas.core.errors.CoreError: the current is too small or too large to compute with
     """
-    if not (x - x == 0) or not (x > 0):
-        raise CoreError(what + " must be a finite number above 0", field)
+    check_positive(x, field, what)
     square = x * x
     if not (square > 0) or not (square - square == 0):
         raise CoreError(what + " is too small or too large to compute with", field)

@@ -14,7 +14,7 @@ Pure Python in the Transcrypt subset; SI floats in and out; CoreError for imposs
 
 import math
 
-from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.errors import CoreError, check_positive
 from conductor_atlas.core.quadrature import GL_NODES, GL_WEIGHTS, gauss_legendre
 
 _HALF_PI = 0.5 * math.pi
@@ -41,9 +41,7 @@ _exp = math.exp
 
 
 def _check(kappa, p):
-    if not (kappa - kappa == 0) or kappa <= 0.0:
-        raise CoreError("thickness over mean free path must be a finite number above 0",
-                        "kappa")
+    check_positive(kappa, "kappa", "thickness over mean free path")
     if not (p >= 0.0 and p < 1.0):
         raise CoreError("specularity must be at least 0 and below 1", "p")
 
@@ -214,10 +212,8 @@ def mayadas_shatzkes_alpha(mean_free_path, grain_size, R):
     1. Mayadas, A. F., Shatzkes, M., Phys. Rev. B 1, 1382 (1970),
        doi:10.1103/PhysRevB.1.1382, eq. 5.
     """
-    if not (mean_free_path > 0.0) or not (mean_free_path - mean_free_path == 0):
-        raise CoreError("mean free path must be a finite number above 0", "mean_free_path")
-    if not (grain_size > 0.0) or not (grain_size - grain_size == 0):
-        raise CoreError("grain size must be a finite number above 0", "grain_size")
+    check_positive(mean_free_path, "mean_free_path", "mean free path")
+    check_positive(grain_size, "grain_size", "grain size")
     if not (R >= 0.0 and R < 1.0):
         raise CoreError("reflection coefficient must be at least 0 and below 1", "R")
     return mean_free_path / grain_size * R / (1.0 - R)
