@@ -430,3 +430,49 @@ def test_material_page_names_the_source_of_each_designation(built_site):
                 f'href="../../references/index.html#src-{source}"') in page
     # an alias without a source (a trade word) carries no link
     assert '<span class="alias">IACS</span>,' in page
+
+
+# --- frequencies where a metal's conductivity is no longer its DC value ---------------------------
+def drude_limit_hz(material_id, catalogue):
+    """f where omega tau = 1, tau = m_e / (n e^2 rho) with scipy.constants (the Drude model: Ashcroft &
+    Mermin eq. 1.29), n and rho at 20 °C taken from the calculator's own answers."""
+    from scipy import constants as sc
+    rho = calculate("resistivity", {"material": material_id, "temperature": "20 °C"}, catalogue)
+    n = find_material(catalogue, material_id)["electron_density"]
+    tau = sc.m_e / (n * sc.e ** 2 * rho["results"]["resistivity"]["value"])
+    return 1.0 / (2.0 * sc.pi * tau)
+
+
+def test_copper_far_above_its_drude_limit_is_refused_with_the_limit(catalogue):
+    # Found: 1e300 Hz gave a skin depth of 6.6e-152 m and an AC/DC ratio of 6.6e148 with only the
+    # mean-free-path warning. Copper's tau at 273 K is 2.7e-14 s (Ashcroft & Mermin Table 1.3, from
+    # memory), so its limit 1/(2 pi tau) lies near 6 THz: 5 to 8 THz allows for 273 vs 293 K.
+    limit = drude_limit_hz("Cu", catalogue)
+    assert 5e12 < limit < 8e12
+    for f in ["1e300 Hz", "100 THz", f"{limit * 1.02:.6g} Hz"]:
+        outcome = calculate("skin-effect", {"material": "Cu", "frequency": f}, catalogue)
+        assert outcome["results"] == {}
+        message = outcome["errors"]["frequency"]
+        assert "ωτ" in message and "type a frequency below 6.4 THz" in message, message
+    below = calculate("skin-effect", {"material": "Cu", "frequency": f"{limit * 0.98:.6g} Hz"}, catalogue)
+    assert below["errors"] == {} and below["results"]["skin_depth"]["value"] > 0
+    assert any("ωτ" in w for w in below["warnings"])
+
+
+def test_a_grade_without_an_electron_density_stops_at_one_terahertz(catalogue):
+    # IACS copper carries no electron density on record, so the fixed 1 THz line applies.
+    refused = calculate("skin-effect", {"material": "IACS", "frequency": "1.5 THz"}, catalogue)
+    assert refused["results"] == {} and "type a frequency up to 1 THz" in refused["errors"]["frequency"]
+    answered = calculate("skin-effect", {"material": "IACS", "frequency": "1 THz"}, catalogue)
+    assert answered["errors"] == {}
+    # δ = sqrt(rho / (pi f mu0)) with rho = 1/58 µΩ·m (IEC 60028), mu0 from scipy.constants
+    from scipy import constants as sc
+    expected = (1.7241e-8 / (sc.pi * 1e12 * sc.mu_0)) ** 0.5
+    assert answered["results"]["skin_depth"]["value"] == pytest.approx(expected, rel=1e-4)
+
+
+def test_resistance_keeps_its_dc_answer_when_the_frequency_is_refused(catalogue):
+    outcome = calculate("resistance", {"material": "IACS", "length": "1 m", "size": "1 mm2",
+                                       "frequency": "10 THz"}, catalogue)
+    assert "frequency" in outcome["errors"]
+    assert "resistance" in outcome["results"] and "skin_depth" not in outcome["results"]

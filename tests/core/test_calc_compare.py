@@ -10,7 +10,7 @@ import math
 
 import pytest
 
-from conductor_atlas.core.calc_compare import calculate as calculate_compare
+from conductor_atlas.core.calc_compare import SIDE_FIELDS, calculate as calculate_compare
 from tests.support.outcomes import result_value as value
 
 RHO_CU = 1.7241e-8
@@ -87,4 +87,9 @@ def test_bad_input_names_the_field(catalogue, fields, field, words):
     out = calculate_compare(inputs, catalogue)
     assert field in out["errors"], out["errors"]
     assert words in out["errors"][field]
-    assert out["results"] == {}
+    if field in SIDE_FIELDS:
+        # a bad size drops only the size answers: the ratios of the two materials stay
+        assert not set(out["results"]) & set(SIDE_FIELDS[field]), out["results"]
+        assert "conductivity_ratio" in out["results"], out["results"]
+    else:
+        assert out["results"] == {}

@@ -16,7 +16,7 @@ PINT_NAME = {
     "k": "K", "degc": "degC", "c": "degC", "degf": "degF", "f": "degF",
     "a": "A", "ma": "mA", "ka": "kA",
     "s": "s", "ms": "ms", "min": "min",
-    "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
+    "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz", "thz": "THz",
     "v": "V", "mv": "mV", "kv": "kV",
     "ohm": "ohm", "mohm": "milliohm", "uohm": "microohm", "kohm": "kiloohm",
     "ohm*m": "ohm*m", "nohm*m": "nanoohm*m", "uohm*cm": "microohm*cm", "uohm*m": "microohm*m",

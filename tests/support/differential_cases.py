@@ -172,7 +172,8 @@ def new_calculator_cases(catalogue):
             add("skin_effect", "", {"material": material, "frequency": f, "size": size, "temperature": t})
     # the mean free path: on record (as recorded, scaled), free-electron (Na, K), none (Ti); ℓ/δ either side of 0.3
     for material in ("Cu", "Ag", "Al", "Na", "K", "titanium", "cobalt"):
-        for f, t in (("10 GHz", "295 K"), ("1 GHz", "20 K"), ("100 GHz", ""), ("50 Hz", "4.2 K")):
+        for f, t in (("10 GHz", "295 K"), ("1 GHz", "20 K"), ("100 GHz", ""), ("50 Hz", "4.2 K"),
+                     ("1 THz", ""), ("7 THz", ""), ("1.5 THz", "77 K")):
             add("skin_effect", "", {"material": material, "frequency": f, "temperature": t})
     for material in ("Cu", "Ag", "Au", "Al", "Na", "K", "Fe", "W", "IACS", "film-copper", ""):
         for extra in ({}, {"temperature": "77 K"}, {"current_density": "4 A/mm2"}, {"current": "10 A", "size": "1 mm2"},

@@ -4,6 +4,7 @@ the mean free path on record; the fusing-current warning."""
 import math
 
 from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.carriers import relaxation_time
 from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import add_error, add_sources, add_warning, has_errors
@@ -134,3 +135,47 @@ def warn_if_anomalous(outcome, mfp, delta):
                 + format_number(mfp / delta, 3) + " δ: the classical skin depth assumes ℓ much shorter than δ. "
                 "Where ℓ is comparable to δ or longer (the anomalous skin effect: low temperature, high "
                 "frequency) the real surface resistance is higher than shown and stops falling with ρ")
+
+
+# The skin depth and AC resistance take the conductivity at its DC value. In the Drude picture the
+# conductivity at angular frequency w is sigma0 / (1 - i w tau) (Ashcroft & Mermin, Solid State
+# Physics, eq. 1.29), so the DC value holds while w tau << 1. Refusing above w tau = 1 and cautioning
+# above w tau = 0.1 (where |sigma| is 0.5 % below sigma0) are our own lines, not published figures.
+DRUDE_REFUSE_OMEGA_TAU = 1.0
+DRUDE_CAUTION_OMEGA_TAU = 0.1
+# Without an electron density there is no tau: 1 THz (the far infrared) is our own line. There
+# silver, whose tau is the longest of the metals at 273 K (4.0e-14 s; copper 2.7e-14 s), reaches
+# w tau = 0.25 (Ashcroft & Mermin Table 1.3, from memory); alloys, with shorter tau, stay below that.
+UNKNOWN_TAU_LIMIT_HZ = 1e12
+
+
+def frequency_beyond_dc_conductivity(outcome, m, rho, f, field):
+    """True (and an error on field) when f [Hz] is too high for the DC conductivity 1/rho [ohm*m] of m.
+
+    omega tau with tau = m_e / (n e^2 rho) (carriers.relaxation_time; n = m["electron_density"]):
+    refused above DRUDE_REFUSE_OMEGA_TAU, a warning above DRUDE_CAUTION_OMEGA_TAU; with no n on record,
+    refused above UNKNOWN_TAU_LIMIT_HZ.
+    """
+    n = m["electron_density"]
+    if n > 0 and rho > 0:
+        tau = relaxation_time(rho, n)
+        omega_tau = 2.0 * math.pi * f * tau
+        f_limit = DRUDE_REFUSE_OMEGA_TAU / (2.0 * math.pi * tau)
+        if omega_tau > DRUDE_REFUSE_OMEGA_TAU:
+            add_error(outcome, field, "too high for " + m["name"] + ": its electrons' relaxation time "
+                      "(Drude, τ = " + format_si(tau, "s", 3) + ") gives ωτ = " + format_number(omega_tau, 3)
+                      + ", and the skin depth here holds only where ωτ ≪ 1; type a frequency below "
+                      + format_si(f_limit, "Hz", 2))
+            return True
+        if omega_tau > DRUDE_CAUTION_OMEGA_TAU:
+            add_warning(outcome, "at this frequency ωτ = " + format_number(omega_tau, 3) + " (Drude τ = "
+                        + format_si(tau, "s", 3) + "): the conductivity of " + m["name"]
+                        + " is no longer its DC value, so read δ and the AC resistance as rough")
+        return False
+    if f > UNKNOWN_TAU_LIMIT_HZ:
+        add_error(outcome, field, "too high: above " + format_si(UNKNOWN_TAU_LIMIT_HZ, "Hz", 2)
+                  + " (the far infrared) a metal's conductivity is no longer its DC value, and "
+                  + m["name"] + " has no electron density on record to say where it stops; type a "
+                  "frequency up to " + format_si(UNKNOWN_TAU_LIMIT_HZ, "Hz", 2))
+        return True
+    return False

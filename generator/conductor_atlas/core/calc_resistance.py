@@ -9,7 +9,7 @@ from conductor_atlas.core.numfmt import format_number, format_si, temperature_te
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_positive
-from conductor_atlas.core.calc_common import (material_at_temperature, recorded_mean_free_path, warn_if_anomalous,
+from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, material_at_temperature, recorded_mean_free_path, warn_if_anomalous,
                                               warn_if_fusing)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 from conductor_atlas.core.clad_layers import clad_layers_at
@@ -114,7 +114,7 @@ def calculate(inputs, catalogue):
         j = dc.current_density(current, area)
         add_result(outcome, "current_density", j, "A/m²", format_number(j / 1e6, 4) + " A/mm²")
         warn_if_fusing(outcome, current, area)
-    if f is not None and f > 0:
+    if f is not None and f > 0 and not frequency_beyond_dc_conductivity(outcome, m, rho, f, "frequency"):
         if m["mu_r"] > 1.5:
             add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(m["mu_r"], 3)
                         + "; in iron, steel and nickel it depends strongly on field strength and frequency")

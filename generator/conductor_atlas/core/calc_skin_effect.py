@@ -8,7 +8,8 @@ from conductor_atlas.core.numfmt import format_number, format_si, temperature_te
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
-from conductor_atlas.core.calc_common import material_at_temperature, recorded_mean_free_path, warn_if_anomalous
+from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, material_at_temperature,
+                                              recorded_mean_free_path, warn_if_anomalous)
 from conductor_atlas.core.clad_layers import CLAD_BAR_MESSAGE, clad_layers_at
 from conductor_atlas.core.ac_layout import ARRANGEMENT_HINT, ac_ratio_for, parse_arrangement
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
@@ -95,6 +96,8 @@ def calculate(inputs, catalogue):
         if size is not None and size["shape"] == "bar":
             add_error(outcome, "size", CLAD_BAR_MESSAGE)
             size = None
+    if frequency_beyond_dc_conductivity(outcome, m, rho, f, "frequency"):
+        return outcome
     if mu_r > 1.5:
         add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(mu_r, 3)
                     + "; in iron, steel and nickel it depends strongly on field strength, frequency and "

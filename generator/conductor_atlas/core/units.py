@@ -83,6 +83,7 @@ UNITS = {
     "khz": ["frequency", 1e3, 0.0],
     "mhz": ["frequency", 1e6, 0.0],
     "ghz": ["frequency", 1e9, 0.0],
+    "thz": ["frequency", 1e12, 0.0],
     # voltage
     "v": ["voltage", 1.0, 0.0],
     "mv": ["voltage", 0.001, 0.0],
