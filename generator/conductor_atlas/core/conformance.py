@@ -27,7 +27,14 @@ def iec60228_correction_factor(temperature, beta):
 
     Valid where the linear R(t) holds (copper and aluminium, about −50 to +200 °C).
     Source: IEC 60228:2004, Annex B (formula and constants from memory).
-    Example: copper at 25 °C: 254.5 / 259.5 = 0.980732.
+
+    Examples
+    --------
+    Copper measured at 25 degC: 254.5 / 259.5 = 0.98073, printed as 0.980 in IEC 60228 Annex B's
+    table of factors (from memory):
+
+    >>> round(iec60228_correction_factor(298.15, 234.5), 5)
+    0.98073
     """
     t = temperature - ZERO_CELSIUS
     if not (beta + t > 0):
@@ -46,6 +53,14 @@ def correction_factor(rho_20, rho_t):
     Assumes the sample's length and area do not change with temperature (thermal expansion,
     about 17e-6 /K for copper, moves R by under 0.02 % per 10 K and is left out, as the
     standards' correction factors leave it out).
+
+    Examples
+    --------
+    Copper by its linear model (IEC 60028: 1.7241e-8 ohm*m, 0.00393 /K at 20 degC) at 25 degC,
+    rho = 1.7241e-8 x 1.01965: the same 0.9807 as IEC 60228 Annex B's factor for copper:
+
+    >>> round(correction_factor(1.7241e-8, 1.7241e-8 * (1.0 + 0.00393 * 5.0)), 4)
+    0.9807
     """
     if not (rho_20 > 0 and rho_t > 0):
         raise CoreError("resistivities must be above zero", "temperature")
@@ -53,14 +68,31 @@ def correction_factor(rho_20, rho_t):
 
 
 def resistance_per_length(resistance, sample_length):
-    """Resistance per unit length R' = R / L, [ohm/m].  resistance [ohm], sample_length [m]."""
+    """Resistance per unit length R' = R / L, [ohm/m].  resistance [ohm], sample_length [m].
+
+    Examples
+    --------
+    0.736 ohm over a 100 m sample: 7.36 ohm/km, under the 7.41 ohm/km that IEC 60228 Table 1 allows
+    a 2.5 mm^2 class 1 plain copper conductor (from memory):
+
+    >>> round(resistance_per_length(0.736, 100.0) * 1e3, 2)
+    7.36
+    """
     if not (sample_length > 0):
         raise CoreError("the sample length must be above zero", "length")
     return resistance / sample_length
 
 
 def relative_deviation(value, reference):
-    """(value − reference) / reference, [-]: +0.02 is 2 % above the reference."""
+    """(value − reference) / reference, [-]: +0.02 is 2 % above the reference.
+
+    Examples
+    --------
+    7.36 ohm/km against 7.41 ohm/km: 0.67 % below:
+
+    >>> round(relative_deviation(7.36, 7.41) * 100.0, 2)
+    -0.67
+    """
     if not (reference > 0):
         raise CoreError("the reference must be above zero", "")
     return (value - reference) / reference
@@ -70,6 +102,13 @@ def margin_to_limit(value, limit):
     """How far below a maximum a value lies, as a fraction of the maximum, [-].
 
     margin = (limit − value) / limit: +0.05 passes with 5 % to spare, −0.02 fails by 2 %.
+
+    Examples
+    --------
+    7.36 ohm/km under a maximum of 7.41 ohm/km passes with 0.67 % to spare:
+
+    >>> round(margin_to_limit(7.36, 7.41) * 100.0, 2)
+    0.67
     """
     if not (limit > 0):
         raise CoreError("the limit must be above zero", "")
@@ -80,6 +119,11 @@ def nominal_row(areas, area):
     """Index of the row whose nominal area equals ``area`` [m^2] (within 1e-6 relative), or -1.
 
     areas : list of float  Nominal areas of a standard's table, increasing, [m^2]
+
+    Examples
+    --------
+    >>> nominal_row([1.5e-6, 2.5e-6, 4e-6], 2.5e-6), nominal_row([1.5e-6, 2.5e-6, 4e-6], 3e-6)
+    (1, -1)
     """
     for i in range(len(areas)):
         if abs(areas[i] - area) <= 1e-6 * areas[i]:
@@ -88,7 +132,13 @@ def nominal_row(areas, area):
 
 
 def neighbour_rows(areas, area):
-    """The nominal areas [m^2] just below and above ``area`` (-1.0 where there is none): [below, above]."""
+    """The nominal areas [m^2] just below and above ``area`` (-1.0 where there is none): [below, above].
+
+    Examples
+    --------
+    >>> neighbour_rows([1.5e-6, 2.5e-6, 4e-6], 3e-6)
+    [2.5e-06, 4e-06]
+    """
     below = -1.0
     above = -1.0
     for a in areas:

@@ -161,6 +161,14 @@ def fuchs_sondheimer_ratio(kappa, p=0.0):
     1. Fuchs, K., Proc. Camb. Phil. Soc. 34, 100 (1938), doi:10.1017/S0305004100019952.
     2. Sondheimer, E. H., Adv. Phys. 1, 1 (1952), doi:10.1080/00018735200101151, eq. 9 and
        the limits eq. 10-11.
+
+    Examples
+    --------
+    A film as thick as the mean free path, fully diffuse surfaces: scipy.integrate.quad on the
+    printed integral gives 1.4622948844691 (checked while writing this example):
+
+    >>> round(fuchs_sondheimer_ratio(1.0), 10)
+    1.4622948845
     """
     _check(kappa, p)
     inner = _fs_integral(kappa, p)
@@ -185,6 +193,14 @@ def fuchs_sondheimer_thick_film_ratio(kappa, p=0.0):
     References
     ----------
     1. Sondheimer 1952, Adv. Phys. 1, 1, eq. 11.
+
+    Examples
+    --------
+    kappa = 10, p = 0: 1 + 3/80 = 1.0375, within 0.14 % of the exact 1.03896 (scipy.integrate.quad
+    on Sondheimer's integral, checked while writing this example):
+
+    >>> fuchs_sondheimer_thick_film_ratio(10.0)
+    1.0375
     """
     _check(kappa, p)
     return 1.0 + 3.0 * (1.0 - p) / (8.0 * kappa)
@@ -211,6 +227,14 @@ def mayadas_shatzkes_alpha(mean_free_path, grain_size, R):
     ----------
     1. Mayadas, A. F., Shatzkes, M., Phys. Rev. B 1, 1382 (1970),
        doi:10.1103/PhysRevB.1.1382, eq. 5.
+
+    Examples
+    --------
+    Copper's 39 nm mean free path (Gall 2016, Table I), 40 nm grains, R = 0.3: by hand
+    (39/40)(0.3/0.7) = 0.41786:
+
+    >>> round(mayadas_shatzkes_alpha(39e-9, 40e-9, 0.3), 5)
+    0.41786
     """
     check_positive(mean_free_path, "mean_free_path", "mean free path")
     check_positive(grain_size, "grain_size", "grain size")
@@ -261,6 +285,14 @@ def mayadas_shatzkes_ratio(alpha):
     ----------
     1. Mayadas, A. F., Shatzkes, M., Phys. Rev. B 1, 1382 (1970),
        doi:10.1103/PhysRevB.1.1382, eq. 8 and the limits eq. 9.
+
+    Examples
+    --------
+    alpha = 1: by hand 1 / (3 (1/3 - 1/2 + 1 - ln 2)) = 2.37779; alpha = 0.01 near the small-alpha
+    limit 1 + 1.5 alpha = 1.015:
+
+    >>> round(mayadas_shatzkes_ratio(1.0), 5), round(mayadas_shatzkes_ratio(0.01), 4)
+    (2.37779, 1.0149)
     """
     if not (alpha >= 0.0) or not (alpha - alpha == 0):
         raise CoreError("alpha must be a finite number >= 0", "alpha")
@@ -341,6 +373,14 @@ def film_resistivity_ratio(kappa, p, alpha):
     ----------
     1. Mayadas, A. F., Shatzkes, M., Phys. Rev. B 1, 1382 (1970),
        doi:10.1103/PhysRevB.1.1382, eq. 10.
+
+    Examples
+    --------
+    kappa = 1, p = 0, alpha = 0.5: nested scipy.integrate.quad on the printed form gives
+    2.12067230439447 (checked while writing this example):
+
+    >>> round(film_resistivity_ratio(1.0, 0.0, 0.5), 10)
+    2.1206723044
     """
     _check(kappa, p)
     if not (alpha >= 0.0) or not (alpha - alpha == 0):
