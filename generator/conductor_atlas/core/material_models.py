@@ -142,14 +142,34 @@ def model_choice_message(m, model):
 
 
 def cvd_ratio(m, t):
-    """R(T)/R(T_ref) of the Callendar–Van Dusen equation with the material's coefficients."""
+    """R(T)/R(T_ref) of the Callendar–Van Dusen equation with the material's coefficients.
+
+    Examples
+    --------
+    IEC 60751's coefficients with T_ref = 0 degC: R(100 degC) / R0 = 1.385055, a Pt100's 138.51 ohm in
+    IEC 60751 Table 1 (from memory):
+
+    >>> pt = {"cvd_a": 3.9083e-3, "cvd_b": -5.775e-7, "cvd_c": -4.183e-12, "t_ref": 273.15}
+    >>> round(cvd_ratio(pt, 373.15), 6)
+    1.385055
+    """
     r_t = tm.callendar_van_dusen_resistance(t, 1.0, m["cvd_a"], m["cvd_b"], m["cvd_c"])
     r_ref = tm.callendar_van_dusen_resistance(m["t_ref"], 1.0, m["cvd_a"], m["cvd_b"], m["cvd_c"])
     return r_t / r_ref
 
 
 def choose_model(m, t):
-    """The model "auto" uses at temperature t [K]."""
+    """The model "auto" uses at temperature t [K].
+
+    Examples
+    --------
+    A record with only the linear model (IEC 60028 copper; a partial record, enough for this choice):
+
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> choose_model(copper, 363.15)
+    'linear'
+    """
     if has_cvd(m) and in_cvd_range(t):
         return "callendar-van-dusen"
     if has_linear(m) and in_linear_span(m, t):
@@ -174,7 +194,15 @@ def choose_model(m, t):
 def resistivity_or_none(m, t):
     """The "auto" model's answer at t [K] (resistivity_at's record: "rho" [ohm*m], "model", "label",
     "warnings"), or None where no model reaches t: for tables, charts and estimates that leave a gap
-    or fall back instead of showing a message."""
+    or fall back instead of showing a message.
+
+    Examples
+    --------
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> round(resistivity_or_none(copper, 363.15)["rho"] * 1e8, 4)
+    2.1984
+    """
     try:
         return resistivity_at(m, t, "auto")
     except CoreError:
@@ -185,7 +213,15 @@ def within_model(found):
     """True when an answer of resistivity_at lies inside its model: no warnings, or only the standing
     note that a Matthiessen's-rule or parallel-layer value is an estimate (those models raise outside
     their spans). Tables
-    and charts show such rows, naming the model; any other warning (extrapolation) leaves a gap."""
+    and charts show such rows, naming the model; any other warning (extrapolation) leaves a gap.
+
+    Examples
+    --------
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> within_model(resistivity_at(copper, 363.15, "auto")), within_model(resistivity_at(copper, 573.15, "linear"))
+    (True, False)
+    """
     if found is None:
         return False
     if len(found["warnings"]) == 0:
@@ -198,6 +234,17 @@ def resistivity_at(m, t, model):
 
     Raises CoreError (field "model" or "temperature") when the asked model is not on record or
     the temperature is impossible.
+
+    Examples
+    --------
+    IEC 60028 copper (1.7241e-8 ohm*m, 0.00393 /K at 20 degC) at 90 degC: by hand
+    1.7241e-8 (1 + 0.00393 x 70) = 2.1984e-8 ohm*m:
+
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> found = resistivity_at(copper, 363.15, "auto")
+    >>> round(found["rho"] * 1e8, 4), found["model"], found["warnings"]
+    (2.1984, 'linear', [])
     """
     if not (t > 0):
         raise CoreError("must be above absolute zero (−273.15 °C)", "temperature")
@@ -283,6 +330,17 @@ def local_temperature_coefficient(m, t, model):
     the model "auto" picks at t (so the difference never straddles two models). None when that
     model has no temperature dependence ("reference": only a value at one temperature is on
     record) or cannot be evaluated at t ± 0.5 K. Returns [alpha, warnings of the three evaluations].
+
+    Examples
+    --------
+    The linear model's alpha at 90 degC is alpha_20 / (1 + alpha_20 x 70) = 0.00393 / 1.2751 =
+    0.0030821 /K (by hand):
+
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> alpha, warnings = local_temperature_coefficient(copper, 363.15, "auto")
+    >>> round(alpha, 7), warnings
+    (0.0030821, [])
     """
     key = model
     if key == "auto" or len(key) == 0:
