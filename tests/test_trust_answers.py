@@ -476,3 +476,24 @@ def test_resistance_keeps_its_dc_answer_when_the_frequency_is_refused(catalogue)
                                        "frequency": "10 THz"}, catalogue)
     assert "frequency" in outcome["errors"]
     assert "resistance" in outcome["results"] and "skin_depth" not in outcome["results"]
+
+
+# --- sizes typed without a unit word ------------------------------------------------------------------
+@pytest.mark.parametrize("typed, gauge, area_mm2", [
+    # ASTM B258 nominal diameters: 4/0 = 460 mil, 2/0 = 364.8 mil, 12 = 80.8 mil (from memory);
+    # A = π d²/4 to the table's four figures
+    ("4/0", "4/0 AWG", 107.2), ("#12", "12 AWG", 3.308), ("# 2/0", "2/0 AWG", 67.43),
+])
+def test_gauge_sign_and_n_slash_0_are_read_as_awg_and_said(catalogue, typed, gauge, area_mm2):
+    # Found: "4/0" was refused as "unknown unit “/0”" and "#12" as "expected a number first".
+    outcome = calculate("resistance", {"material": "IACS", "length": "1 m", "size": typed}, catalogue)
+    assert outcome["errors"] == {}
+    area = outcome["results"]["area"]
+    assert area["value"] * 1e6 == pytest.approx(area_mm2, rel=5e-4)
+    assert area["text"].endswith("(" + gauge + ")")
+
+
+def test_a_bare_whole_number_size_offers_both_readings(catalogue):
+    outcome = calculate("resistance", {"material": "IACS", "length": "1 m", "size": "12"}, catalogue)
+    assert outcome["errors"]["size"] == "“12” needs a unit: write 12 mm² for an area or 12 AWG for a gauge " \
+                                         "(d 12 mm for a diameter)"

@@ -33,6 +33,7 @@ ZEROS = re.compile(r"^0+$")
 DIGITS = re.compile(r"^[0-9]+$")
 AWG_FIRST = re.compile(r"^(?:awg|ga)\s*#?\s*([0-9/]+)$", re.IGNORECASE)
 AWG_LAST = re.compile(r"^#?\s*([0-9/]+)\s*(?:awg|ga)$", re.IGNORECASE)
+BARE_GAUGE = re.compile(r"#\s*([0-9/]+)|(4/0|3/0|2/0|1/0)")  # used with fullmatch
 FORMER_DIAMETER = re.compile(r"^(?:d|dia|diameter|ø|⌀|Ø)\s*=?\s*(.+)$", re.IGNORECASE)
 BAR = re.compile(r"^([0-9.,eE+-]+)\s*[x×*]\s*([0-9.,eE+-]+)\s*(.*)$")
 NON_ASCII = re.compile(r"[^\x00-\x7f]")
@@ -140,8 +141,10 @@ def regex_size_from_text(text, field):
     """size_from_text as it read with the former patterns."""
     compact = typed_text.normalise_text(text).strip()
     awg = AWG_FIRST.match(compact) or AWG_LAST.match(compact)
+    if awg is None:
+        awg = BARE_GAUGE.fullmatch(compact)  # "#12", "# 4/0", a bare "4/0" (the gauge sign; N/0 is only AWG)
     if awg is not None:
-        n = regex_awg_number(awg.group(1))
+        n = regex_awg_number(awg.group(1) or awg.group(2)) if awg.re is BARE_GAUGE else regex_awg_number(awg.group(1))
         d = geometry.awg_diameter(n)
         return geometry.size_record("round", geometry.awg_area(n), geometry.awg_name(n) + " AWG", d, 0.0, 0.0)
     diameter = DIAMETER.match(compact)
@@ -161,6 +164,9 @@ def regex_size_from_text(text, field):
         if not (w > 0 and t > 0):
             raise CoreError("bar width and thickness must be greater than zero", field)
         return geometry.size_record("bar", geometry.usable_area(w * t, field), compact, 0.0, max(w, t), min(w, t))
+    if re.fullmatch(r"[0-9]+", compact):
+        raise CoreError("“" + compact + "” needs a unit: write " + compact + " mm² for an area or " + compact
+                        + " AWG for a gauge (d " + compact + " mm for a diameter)", field)
     area = units.parse_quantity(compact, "area", field)
     if not (area > 0):
         raise CoreError("cross-section must be greater than zero", field)

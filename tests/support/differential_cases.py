@@ -72,7 +72,8 @@ def scanning_cases():
 
 def geometry_cases():
     cases = []
-    for text in ["35 mm2", "12 AWG", "AWG 12", "4/0 AWG", "0000 AWG", "1/0 awg", "56 AWG", "57 AWG", "d 2.5 mm",
+    for text in ["35 mm2", "#12", "# 4/0", "4/0", "5/0", "12", "2.5",
+                 "12 AWG", "AWG 12", "4/0 AWG", "0000 AWG", "1/0 awg", "56 AWG", "57 AWG", "d 2.5 mm",
                  "ø 1,6 mm", "40 x 5 mm", "5x40 mm", "250 kcmil", "", "abc", "3 m", "-3 mm2", "40 x 5"]:
         cases.append(("conductor_atlas.core.geometry", "parse_size", [text, "size"]))
     for n in range(-3, 57):

@@ -8,6 +8,7 @@ from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           new_outcome)
+from conductor_atlas.core.geometry import area_text
 from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_positive
 from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, material_at_temperature, recorded_mean_free_path, warn_if_anomalous,
                                               warn_if_fusing)
@@ -96,7 +97,7 @@ def calculate(inputs, catalogue):
     area = size["area"]
     r = dc.resistance(rho, length_m, area)
     add_result(outcome, "temperature", t, "K", temperature_text(t))
-    add_result(outcome, "area", area, "m²", format_number(area * 1e6, 4) + " mm²")
+    add_result(outcome, "area", area, "m²", area_text(size, area))
     add_result(outcome, "resistivity", rho, "Ω·m", format_number(rho * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "conductivity", 1.0 / rho, "S/m", format_number(1e-6 / rho, 4) + " MS/m")
     add_result(outcome, "resistance", r, "Ω", format_si(r, "Ω", 4))

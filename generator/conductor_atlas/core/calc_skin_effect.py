@@ -7,6 +7,7 @@ from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           new_outcome)
+from conductor_atlas.core.geometry import area_text
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
 from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, material_at_temperature,
                                               recorded_mean_free_path, warn_if_anomalous)
@@ -128,7 +129,10 @@ def calculate(inputs, catalogue):
         if arrangement[0] == "bars":
             area = area * arrangement[1]  # the group: n bars in parallel
         r = dc.resistance(opening[2], 1.0, area)
-        add_result(outcome, "area", area, "m²", format_number(area * 1e6, 4) + " mm²")
+        shown = area_text(size, area)
+        if arrangement[0] == "bars":
+            shown = format_number(area * 1e6, 4) + " mm² (" + str(arrangement[1]) + " bars of " + size["label"] + ")"
+        add_result(outcome, "area", area, "m²", shown)
         add_result(outcome, "resistance", r, "Ω/m", format_si(r, "Ω", 4) + " per metre")
         add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
         add_result(outcome, "resistance_ac", r * ratio, "Ω/m", format_si(r * ratio, "Ω", 4) + " per metre")

@@ -3,7 +3,8 @@ rectangular bar, and the text forms people type for a size.
 
 Size text accepted by ``parse_size``:
     "35 mm2", "35 mm²", "250 kcmil"    an area
-    "12 AWG", "AWG 12", "4/0 AWG"      an AWG gauge (solid round wire, ASTM B258 nominal diameter)
+    "12 AWG", "AWG 12", "4/0 AWG"      an AWG gauge (solid round wire, ASTM B258 nominal diameter);
+    "#12", "4/0"                       also AWG: the gauge sign, and N/0, which no other size uses
     "d 2.5 mm", "ø2.5 mm", "dia 2.5 mm"  a round wire by diameter
     "40 x 5 mm", "40x5 mm"             a rectangular bar, width x thickness (one unit for both)
 
@@ -14,6 +15,7 @@ the regular expression it replaced gave; tests/core/test_text_scanning.py checks
 import math
 
 from conductor_atlas.core.errors import CoreError
+from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.typed_text import normalise_text, space_end
 from conductor_atlas.core.units import parse_quantity, recall_field, remember_field
 
@@ -95,6 +97,26 @@ def awg_gauge_text(text):
     for word in AWG_WORDS:
         if word_at(text, k, word) and k + len(word) == n:
             return text[i:j]
+    return None
+
+
+def bare_gauge_text(text):
+    """The gauge of an AWG size typed without the word: "#12", "# 4/0" (the gauge sign) or a bare
+    "4/0", "3/0", "2/0", "1/0" (no other size is written N/0); None for other text, "12" included
+    (12 mm² or 12 AWG: the caller asks for a unit)."""
+    n = len(text)
+    i = 0
+    if n > 0 and text[0] == "#":
+        i = space_end(text, 1)
+    j = run_end(text, i, GAUGE_CHARACTERS)
+    if j == i or j != n:
+        return None
+    gauge = text[i:j]
+    if i > 0:
+        return gauge
+    for name in AWG_NAMES:
+        if gauge == name:
+            return gauge
     return None
 
 
@@ -207,6 +229,15 @@ def size_record(shape, area, label, diameter, width, thickness):
     }
 
 
+def area_text(size, area):
+    """The cross-section area [m^2] as a person reads it, in mm², followed by the size as it was read
+    when it was not typed as an area: "3.308 mm² (12 AWG)", "1000 mm² (100 x 10 mm)", "35 mm²"."""
+    text = format_number(area * 1e6, 4) + " mm²"
+    if size["shape"] != "area":
+        text = text + " (" + size["label"] + ")"
+    return text
+
+
 def usable_area(area, field):
     """``area`` [m^2] when it is finite and above zero; a CoreError naming ``field`` otherwise.
 
@@ -250,6 +281,8 @@ def size_from_text(text, field):
     raw = normalise_text(text)
     compact = raw.strip()
     gauge = awg_gauge_text(compact)
+    if gauge is None:
+        gauge = bare_gauge_text(compact)
     if gauge is not None:
         n = awg_number(gauge)
         d = awg_diameter(n)
@@ -275,6 +308,10 @@ def size_from_text(text, field):
             wide = t
             thin = w
         return size_record("bar", usable_area(w * t, field), compact, 0.0, wide, thin)
+    if len(compact) > 0 and run_end(compact, 0, "0123456789") == len(compact):
+        # a bare whole number: a gauge to some, square millimetres to others
+        raise CoreError("“" + compact + "” needs a unit: write " + compact + " mm² for an area or " + compact
+                        + " AWG for a gauge (d " + compact + " mm for a diameter)", field)
     area = parse_quantity(compact, "area", field)
     if not (area > 0):
         raise CoreError("cross-section must be greater than zero", field)
