@@ -390,9 +390,9 @@ RHO = ("resistivity", "conductivity_iacs", "temperature_coefficient")
     # R = ρL/A with mass: ρ(T) and density, nothing else
     ("resistance", {"material": "IACS"}, lambda: property_sources("copper-annealed", *RHO, "density")),
     ("resistivity", {"material": "Cu"}, lambda: property_sources("copper", *RHO, table=True)),
-    # the resistance method with k typed, or with the standards' k for copper: no material value is used
+    # the resistance method with k typed: no source; with the standards' k for copper: those standards
     ("temperature-rise", {"material": "", "k": "234.5"}, lambda: set()),
-    ("temperature-rise", {"material": "Cu"}, lambda: set()),
+    ("temperature-rise", {"material": "Cu"}, lambda: {"ieee118", "iec60034-1"}),
     # k = 1/α − t_ref: only the coefficient
     ("temperature-rise", {"material": "Ni"}, lambda: property_sources("nickel", "temperature_coefficient")),
     # the size effect needs ρ(T) and the bulk mean free path (its source was missing)

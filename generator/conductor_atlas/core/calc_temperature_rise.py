@@ -100,10 +100,12 @@ def material_k(outcome, m, catalogue):
     if is_copper(m, catalogue):
         add_warning(outcome, "k = 234.5 for copper, as IEEE Std 118 and IEEE Std 112 use it; IEC 60034-1 rounds it "
                              "to 235 (from memory); enter k to use another value")
+        add_sources(outcome, ["ieee118", "iec60034-1"])
         return practice.K_COPPER
     if is_ec_aluminium(m, catalogue):
         add_warning(outcome, "k = 225 for EC aluminium, as IEEE Std 118, IEEE Std 112 and IEC 60034-1 use it (from "
                              "memory); enter k to use another value")
+        add_sources(outcome, ["ieee118", "iec60034-1"])
         return practice.K_ALUMINIUM
     if not (m["alpha"] > 0):
         add_error(outcome, "material", "no positive temperature coefficient is on record for " + m["name"]
