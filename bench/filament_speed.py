@@ -3,7 +3,7 @@
     .venv/bin/python bench/filament_speed.py [--repeat N]
 
 Runs the AC-resistance cases the skin-effect calculator solves (a single bar, a bar group, a
-go-and-return pair, a clad round wire) through the core in CPython and in node, the same code the
+go-and-return pair of bars or of round wires, a clad round wire) through the core in CPython and in node, the same code the
 page runs, and prints a table: filament count, level reached, CPython ms and node ms (first run
 and median). The browser targets (single bar <= 100 ms, three-bar group <= 300 ms at x4 CPU
 throttling) are compared with 4 x the node median, printed beside; a throttled page runs about
@@ -22,6 +22,7 @@ import time
 from pathlib import Path
 
 from conductor_atlas.core import filament_solver as fs
+from conductor_atlas.core import round_pair as rp
 from conductor_atlas.transpile import transpile_core
 
 RHO_CU = 1.7241e-8  # IEC 60028 annealed copper at 20 °C, ohm m
@@ -36,10 +37,17 @@ CASES = [
     ["3 x 100x10 mm gap 10 mm 50 Hz", "bar_group_solution", [0.1, 0.01, 3, 0.01, RHO_CU, 50.0], 300],
     ["pair 100x10 mm at 30 mm 50 Hz", "bar_pair_solution", [0.1, 0.01, 0.03, RHO_CU, 50.0], 100],
     ["CCA 2 mm, 1 MHz (rings)", "round_layers_solution", [[[0.000949, RHO_AL], [0.001, RHO_CU]], 1e6], 100],
+    # round go-and-return pairs (core/round_pair.py, harmonics instead of filaments): the slowest are
+    # near-touching wires at many skin depths (128 harmonics)
+    ["round pair d 20 mm at 30 mm 50 Hz", "round_pair_solution", [0.01, 0.03, RHO_CU, 50.0], 100],
+    ["round pair d 20 mm at 22 mm 1 kHz", "round_pair_solution", [0.01, 0.022, RHO_CU, 1e3], 100],
+    ["round pair d 20 mm at 21 mm 1 MHz", "round_pair_solution", [0.01, 0.021, RHO_CU, 1e6], 100],
 ]
 
 NODE_RUNNER = r"""
-import * as fs from './conductor_atlas.core.filament_solver.js';
+import * as fs0 from './conductor_atlas.core.filament_solver.js';
+import * as rp from './conductor_atlas.core.round_pair.js';
+const fs = {...fs0, ...rp};
 import {readFileSync} from 'fs';
 const cases = JSON.parse(readFileSync('cases.json', 'utf8'));
 const out = [];
@@ -61,7 +69,7 @@ def main() -> int:
     python = []
     for case in CASES:
         start = time.perf_counter()
-        solution = getattr(fs, case[1])(*case[2])
+        solution = getattr(rp if case[1] == "round_pair_solution" else fs, case[1])(*case[2])
         python.append([1000 * (time.perf_counter() - start), solution])
     with tempfile.TemporaryDirectory() as folder:
         work = Path(folder)
@@ -78,6 +86,8 @@ def main() -> int:
     print(f"{'case':34} {'ratio':>8} {'filaments':>9} {'level':>5} {'CPython ms':>10} {'node first':>10} "
           f"{'node med':>9} {'x4 ms':>7} {'target':>6}")
     for case, (ms, solution), timing in zip(CASES, python, node):
+        if "harmonics" in solution:  # a round pair: the harmonic count in the filament column, no level
+            solution = {**solution, "filaments": solution["harmonics"], "level": 0}
         x4 = 4 * timing["median"]
         verdict = "ok" if x4 <= case[3] else "OVER"
         print(f"{case[0]:34} {solution['ratio']:8.4f} {solution['filaments']:9.0f} {solution['level']:5.0f} {ms:10.0f} "

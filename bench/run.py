@@ -75,7 +75,8 @@ async ({rounds}) => {
   return {samples};
 }
 """
-# The skin-effect calculator's bar sizes run the filament solver (core/filament_solver.py): the time
+# The skin-effect calculator's bar sizes run the filament solver (core/filament_solver.py), a round
+# pair the multipole solution (core/round_pair.py): the time
 # from typing to the AC result, and how long the page's input handler holds the main thread meanwhile.
 BAR_CASES = [
     {"label": "single bar 100 x 10 mm, 50 Hz", "fields": {"size": "100 x 10 mm", "arrangement": "single",
@@ -83,6 +84,9 @@ BAR_CASES = [
     {"label": "3 bars 100 x 10 mm, gap 10 mm, 50 Hz", "fields": {"size": "100 x 10 mm",
                                                                 "arrangement": "3 bars, gap 10 mm", "frequency": "50 Hz"},
      "edit": "frequency", "other": "60 Hz"},
+    # a go-and-return pair of round wires: the exact multipole solution (core/round_pair.py)
+    {"label": "round pair d 20 mm at 22 mm, 1 kHz", "fields": {"size": "d 20 mm", "arrangement": "pair, 22 mm",
+                                                              "frequency": "1 kHz"}, "edit": "frequency", "other": "2 kHz"},
 ]
 PARTS = ("build", "cli", "scale", "weight", "calculators", "bar-solver", "search", "paint")
 

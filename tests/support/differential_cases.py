@@ -316,6 +316,18 @@ def filament_cases():
     cases.append((fs, "bar_pair_solution", [0.02, 0.003, 0.01, rho, 60.0]))
     cases.append((fs, "round_layers_solution", [[[9.49e-4, 2.8264e-8], [1e-3, rho]], 1e6]))
     cases.append((fs, "round_layers_solution", [[[5e-3, rho]], 50.0]))
+    rp = "conductor_atlas.core.round_pair"
+    # a round go-and-return pair: 50 Hz to 1 MHz, far and near (D = 2.2 a), a wire of 1 mm at 1 GHz
+    for args in ([0.01, 0.03, rho, 50.0], [0.01, 0.022, rho, 1e3], [0.01, 0.022, rho, 1e6], [5e-4, 2e-3, rho, 1e9],
+                 [0.01, 0.02, rho, 50.0], [0.01, 1.0, rho, 50.0]):
+        cases.append((rp, "round_pair_solution", args))
+    for arrangement, size, material in (("pair, 30 mm", "d 20 mm", "IACS"), ("pair, 2.2 mm", "d 2 mm", "Cu"),
+                                        ("pair, 30 mm", "d 20 mm", "steel-low-carbon"), ("pair, 15 mm", "d 20 mm", "Al"),
+                                        ("3 bars, gap 5 mm", "d 20 mm", "Cu"), ("pair, 30 mm", "300 mm2", "Cu"),
+                                        ("pair, 3 mm", "d 2 mm", "CCS-40")):
+        cases.append(("conductor_atlas.core.calc_skin_effect", "calculate",
+                      [{"material": material, "frequency": "1 kHz", "size": size, "arrangement": arrangement},
+                       shipped_catalogue()]))
     lr = "conductor_atlas.core.layered_round"
     for x in (1e-3, 0.7, 5.0, 16.0, 40.0, 2500.0):
         cases.append((lr, "kelvin_k_scaled", [x]))

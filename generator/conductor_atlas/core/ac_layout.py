@@ -2,14 +2,15 @@
 
 Round wire (or an area taken as round): the exact Kelvin-function solution (core.skin_effect).
 Non-magnetic bars, bar groups and go-and-return bar pairs: the filament solver
-(core.filament_solver). Magnetic bars: the shell approximation, flagged as a lower estimate (the
+(core.filament_solver). A go-and-return pair of non-magnetic round wires: the exact multipole
+solution (core.round_pair), with the proximity factor over the isolated wire. Magnetic bars: the shell approximation, flagged as a lower estimate (the
 filament method takes the field as in free space). Each answer adds the result "ac_method"
 (value: the filament count, 0 for a closed form; text: the method in words). Clad wire (a core and a
 cladding on record, core.clad_layers): the exact two-layer solution for round wire; bars refused.
 
 Arrangement text (field "arrangement"): "" or "single"; "N bars, gap G" (N = 2..8 bars per
 phase side by side, wide faces facing, G the clear gap); "pair, S" or "go-and-return S" (a
-go-and-return pair of bars, wide faces facing at centre distance S).
+go-and-return pair at centre distance S: two bars with wide faces facing, or two round wires).
 """
 
 from conductor_atlas.core.clad_layers import clad_round_ratio
@@ -18,10 +19,11 @@ from conductor_atlas.core import filament_solver as filaments
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.outcome import add_result, add_warning
+from conductor_atlas.core.round_pair import round_pair_solution
 from conductor_atlas.core.units import parse_quantity
 
 ARRANGEMENT_HINT = ("single; 3 bars, gap 10 mm (bars per phase, wide faces facing); "
-                    "pair, 30 mm (go-and-return bars at a centre distance)")
+                    "pair, 30 mm (go-and-return bars or round wires at a centre distance)")
 _DIGITS = "0123456789"
 
 
@@ -82,6 +84,27 @@ def _note_solution(outcome, solution, what):
                     + " %): the conductor is many skin depths across; read the AC/DC ratio to about that")
 
 
+def _round_pair_ratio(outcome, radius, spacing, rho, f, mu_r):
+    # a go-and-return pair of solid round wires: the exact multipole solution (core.round_pair)
+    if mu_r > 1.5:
+        raise CoreError("go-and-return pairs of magnetic wire are not computed (the pair's solution needs μr = 1); "
+                        "type single for one wire alone", "arrangement")
+    try:
+        solution = round_pair_solution(radius, spacing, rho, f)
+    except CoreError as problem:
+        raise CoreError(problem.message, "arrangement")
+    add_result(outcome, "ac_method", 0.0, "", "exact multipole solution (cylindrical harmonics, "
+               + str(solution["harmonics"]) + " harmonics; go-and-return pair of round wires, per conductor)")
+    add_result(outcome, "proximity_factor", solution["ratio"] / solution["isolated"], "",
+               format_number(solution["ratio"] / solution["isolated"], 4)
+               + " (the same wire alone: AC/DC " + format_number(solution["isolated"], 5, True) + ")")
+    if not solution["converged"]:
+        add_warning(outcome, "the pair's harmonic series did not settle within " + str(solution["harmonics"])
+                    + " harmonics (the wires nearly touch): read the AC/DC ratio to about "
+                    + format_number(100.0 * solution["change"], 2) + " %")
+    return solution["ratio"]
+
+
 def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
     """R_ac / R_dc of one conductor (single, pair) or of the group (bars per phase), with its method.
 
@@ -96,12 +119,14 @@ def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
                             "arrangement")
         return clad_round_ratio(outcome, size, layers, f)
     if size["shape"] != "bar":
-        if kind != "single":
-            raise CoreError("bars per phase and go-and-return pairs are computed for bars (w x t); "
-                            "for round wire only a single conductor", "arrangement")
+        if kind == "bars":
+            raise CoreError("bars per phase are computed for bars (w x t); for round wire a single conductor "
+                            "or a go-and-return pair (pair, 30 mm)", "arrangement")
         if size["shape"] == "area":
             add_warning(outcome, "a cross-section given as an area is treated as one solid round wire of that area; "
                                  "stranded and compacted conductors differ (IEC 60287-1-1 k_s)")
+        if kind == "pair":
+            return _round_pair_ratio(outcome, size["diameter"] / 2.0, arrangement[1], rho, f, mu_r)
         add_result(outcome, "ac_method", 0.0, "", "exact Kelvin-function solution (isolated round wire)")
         return skin.round_wire_resistance_ratio(size["diameter"] / 2.0, rho, f, mu_r)
     width = size["width"]

@@ -32,7 +32,7 @@ FIELD_INFO = {
 RESULT_LABELS = [
     ["skin_depth", "Skin depth δ"], ["surface_resistance", "Surface resistance (per square)"],
     ["ac_dc_ratio", "AC/DC resistance ratio"], ["ac_method", "AC method"], ["bar_share", "Current share per bar"],
-    ["resistance", "DC resistance per metre (Ω/m)"],
+    ["proximity_factor", "Proximity factor (pair over one wire alone)"], ["resistance", "DC resistance per metre (Ω/m)"],
     ["resistance_ac", "AC resistance per metre (Ω/m)"], ["depth_ratio", "Radius or half-thickness over δ"],
     ["area", "Cross-section"], ["resistivity", "Resistivity at temperature"], ["temperature", "Temperature"],
     ["mean_free_path", "Electron mean free path ℓ (estimate)"],
@@ -40,7 +40,8 @@ RESULT_LABELS = [
 ]
 # optional input -> the results that need it: a problem in that field is shown under it and drops only
 # these results (skin depth and surface resistance do not depend on the size)
-AC_RESULTS = ["area", "resistance", "ac_dc_ratio", "ac_method", "bar_share", "resistance_ac", "depth_ratio"]
+AC_RESULTS = ["area", "resistance", "ac_dc_ratio", "ac_method", "bar_share", "proximity_factor", "resistance_ac",
+              "depth_ratio"]
 SIDE_FIELDS = {"size": AC_RESULTS, "arrangement": AC_RESULTS}
 CAUTION = ("An isolated straight conductor: proximity to other conductors, stranding and magnetic armour raise the "
            "AC resistance further. A physics estimate, not a cable rating.")
@@ -60,8 +61,9 @@ def calculate(inputs, catalogue):
     (core.ac_layout: single, "3 bars, gap 10 mm", "pair, 30 mm"); temperature (default 20 °C);
     model. δ = sqrt(ρ / (π f μ0 μr)); R_s = ρ / δ (per square, for a conductor much thicker than
     δ); with a size: R_dc per metre = ρ / A (ρ / (n A) for n bars per phase), R_ac/R_dc by the exact
-    Kelvin solution for round wire (or an area taken as round) and the filament solver for bars,
-    bar groups and go-and-return pairs (core.ac_layout), R_ac per metre = R_dc · ratio. A clad wire
+    Kelvin solution for round wire (or an area taken as round), the filament solver for bars,
+    bar groups and go-and-return bar pairs, the exact multipole solution for a go-and-return pair
+    of round wires (core.ac_layout), R_ac per metre = R_dc · ratio. A clad wire
     (core.clad_layers): δ and R_s of its cladding, the ratio by the exact two-layer solution (round only).
     """
     outcome = new_outcome(NAME, inputs)
@@ -80,7 +82,7 @@ def calculate(inputs, catalogue):
         add_error(outcome, "arrangement", problem.message)
         size = None  # no AC/DC ratio for an arrangement that was not understood
     if arrangement[0] != "single" and len(field_text(inputs, "size")) == 0:
-        add_error(outcome, "size", "give the bar size (w x t) for this arrangement, e.g. 100 x 10 mm")
+        add_error(outcome, "size", "give the size for this arrangement, e.g. 100 x 10 mm (bars) or d 20 mm (a round pair)")
     if opening is None:
         return outcome
     m = opening[0]
