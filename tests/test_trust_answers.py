@@ -497,3 +497,21 @@ def test_a_bare_whole_number_size_offers_both_readings(catalogue):
     outcome = calculate("resistance", {"material": "IACS", "length": "1 m", "size": "12"}, catalogue)
     assert outcome["errors"]["size"] == "“12” needs a unit: write 12 mm² for an area or 12 AWG for a gauge " \
                                          "(d 12 mm for a diameter)"
+
+
+# --- unknown names: suggestions that share the typed words come first -------------------------------------
+@pytest.mark.parametrize("typed, first_ids", [
+    # Found: "steel" suggested Al, Be and BeCu; "tinned" suggested tin, Ti; "CCS" suggested Co, Cr, Cu.
+    ("steel", {"steel-low-carbon", "stainless-304", "copper-clad-steel-30", "copper-clad-steel-40"}),
+    ("tinned", {"copper-tinned"}),
+    ("CCS", {"copper-clad-steel-30", "copper-clad-steel-40"}),
+    ("copper clad steel", {"copper-clad-steel-30", "copper-clad-steel-40"}),
+])
+def test_unknown_names_suggest_materials_that_share_the_typed_words_first(catalogue, typed, first_ids):
+    with pytest.raises(CoreError) as caught:
+        find_material(catalogue, typed)
+    suggested = caught.value.message.split("; nearest: ")[1]
+    names = [part.split(" (")[0] for part in suggested.split("), ")]
+    ids = [find_material(catalogue, name)["id"] for name in names]
+    assert set(ids[:len(first_ids)]) == first_ids, ids
+    assert len(ids) == len(set(ids)) <= 5  # one name per material

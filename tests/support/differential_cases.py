@@ -154,6 +154,8 @@ def calculator_cases():
     for text in ("1", "13", "135", "1485.001", "cooper", "alumin", "c1720", "zzzzzzzzzzzzzzzz", "  ni ", "ÅÄ"):
         for count in (0, 1, 5, 12):
             cases.append(("conductor_atlas.core.lookup", "nearest_names", [catalogue, text, count]))
+    for text in ("steel", "tinned", "CCS", "copper clad steel", "c", "zirc", "-", "", "brass 70", "Ni Cr"):
+        cases.append(("conductor_atlas.core.lookup", "names_with_words", [catalogue, text, 5]))
     cases.extend(new_calculator_cases(catalogue))
     return cases
 

@@ -81,6 +81,87 @@ def nearest_names(catalogue, text, count):
     return names
 
 
+# Characters that part the words of a name key for names_with_words ("copper-clad steel 30")
+WORD_SEPARATORS = " -_/().,%+:;&*'\"#"
+
+
+# name key -> its words, for the ids and aliases names_with_words reads on every keystroke (speed only)
+KEY_WORDS = {}
+
+
+def key_words(key):
+    """The words of a name key, split at WORD_SEPARATORS: "copper-clad steel 30" -> copper, clad, steel, 30."""
+    if key in KEY_WORDS:
+        return KEY_WORDS[key]
+    words = []
+    current = ""
+    for ch in key:
+        if WORD_SEPARATORS.find(ch) >= 0:
+            if len(current) > 0:
+                words.append(current)
+            current = ""
+        else:
+            current = current + ch
+    if len(current) > 0:
+        words.append(current)
+    if len(KEY_WORDS) < 5000:
+        KEY_WORDS[key] = words
+    return words
+
+
+def starts_words_of(wanted_words, key):
+    """True when every word of wanted_words begins some word of the name key ``key``."""
+    words = key_words(key)
+    for want in wanted_words:
+        hit = False
+        for word in words:
+            if word.startswith(want):
+                hit = True
+        if not hit:
+            return False
+    return True
+
+
+def comes_before(a, b):
+    """Shorter first, then by text: the order names_with_words lists its names in."""
+    if len(a) != len(b):
+        return len(a) < len(b)
+    return a < b
+
+
+def names_with_words(catalogue, text, count):
+    """Up to ``count`` names of materials in which every word of ``text`` begins a word of an id, alias
+    or name ("steel" finds low-carbon and stainless steel and copper-clad steel; "tinned", tinned
+    copper; "CCS", the clad steels), one per material, shortest first; [] when text has no words.
+    A material matched only by its long name is listed by its id."""
+    wanted_words = key_words(name_key(text))
+    if len(wanted_words) == 0:
+        return []
+    best = {}
+    for material_id in catalogue["materials"].keys():
+        if starts_words_of(wanted_words, material_id):
+            best[material_id] = material_id
+    display = catalogue["display_aliases"]
+    materials = catalogue["materials"]
+    for key in catalogue["aliases"].keys():
+        if not starts_words_of(wanted_words, key):
+            continue
+        material_id = catalogue["aliases"][key]
+        shown = display[key]
+        if key == name_key(materials[material_id]["name"]):
+            shown = material_id
+        if not (material_id in best) or comes_before(shown, best[material_id]):
+            best[material_id] = shown
+    names = []
+    for material_id in best.keys():
+        shown = best[material_id]
+        at = len(names)
+        while at > 0 and comes_before(shown, names[at - 1]):
+            at -= 1
+        names.insert(at, shown)
+    return names[0:count]
+
+
 # The plain words a practitioner types for conductor metal mean the conductor grade that is bought
 # and measured, not the high-purity element (common practice (no source)); the chemical symbol keeps
 # meaning the element. word -> [grade id, the element's id, the element's symbol]
@@ -186,10 +267,17 @@ def find_material(catalogue, text, field="material"):
     if len(loose) > 0:
         return materials[loose]
     described = []
+    listed = {}
+    candidates = names_with_words(catalogue, text, 5)
     for name in nearest_names(catalogue, text, 5):
+        candidates.append(name)  # (a list + list would join as text in the transpiled core)
+    for name in candidates:
         key = name_key(name)
         found = trade_word_grade(catalogue, key)
         if len(found) == 0:
             found = exact_match(catalogue, key)
+        if found in listed or len(described) >= 5:
+            continue  # one name per material
+        listed[found] = True
         described.append(name + " (" + materials[found]["name"] + ")")
     raise CoreError("unknown material “" + str(text).strip() + "”; nearest: " + ", ".join(described), field)
