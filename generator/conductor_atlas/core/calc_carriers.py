@@ -121,7 +121,7 @@ def calculate(inputs, catalogue):
     add_result(outcome, "fermi_energy", e_f, "J", format_number(e_f / ELECTRON_VOLT, 4) + " eV")
     add_result(outcome, "fermi_wavenumber", k_f, "1/m", format_number(k_f * 1e-10, 4) + " Å⁻¹")
     add_result(outcome, "mobility", mu, "m²/(V·s)", format_number(mu * 1e4, 4) + " cm²/(V·s)")
-    add_result(outcome, "rho_lambda", rho_l, "Ω·m²", format_number(rho_l * 1e16, 4) + " ×10⁻¹⁶ Ω·m²")
+    add_result(outcome, "rho_lambda", rho_l, "Ω·m²", format_number(rho_l * 1e16, 4) + "×10⁻¹⁶ Ω·m²")
     if j is not None:
         v_d = fe.drift_velocity(j, n)
         add_result(outcome, "current_density", j, "A/m²", format_number(j / 1e6, 4) + " A/mm²")
