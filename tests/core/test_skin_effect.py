@@ -1,4 +1,4 @@
-"""Reference checks for conductor_atlas.core.skin_effect.
+"""Reference checks for conductor_atlas.core.skin_effect and core.kelvin_functions.
 
 References: scipy.special (ber, bei, berp, beip; and jve, the exponentially scaled Bessel
 function of complex argument, AMOS zbesj), scipy.constants; IEC 60287-1-1:2006 clause 2.1.2.
@@ -19,6 +19,7 @@ import pytest
 import scipy.constants as sc
 from scipy import special
 
+from conductor_atlas.core import kelvin_functions as kf
 from conductor_atlas.core import skin_effect as se
 from conductor_atlas.core.errors import CoreError
 from tests.support.approx import approx
@@ -82,7 +83,7 @@ def test_kelvin_scaled_against_scipy_jve(x):
     # 1e-11 of the envelope (the scaled envelope is 1/sqrt(2 pi x)); core measured at
     # 1.1e-12, jve at 1e-15. Absolute on the envelope scale because the functions have
     # zeros, where any relative measure is meaningless.
-    got = se.kelvin_scaled(x)
+    got = kf.kelvin_scaled(x)
     ref = _scaled_reference(x)
     scale = 1.0 / math.sqrt(2.0 * math.pi * x) if x > 1.0 else 1.0  # envelope, scaled
     for i in range(4):
@@ -93,7 +94,7 @@ def test_kelvin_scaled_against_scipy_jve(x):
 def test_kelvin_functions_against_scipy_ber_bei(x):
     # scipy.special.ber/bei/berp/beip. 1e-10 of max(|f|, envelope) as the brief asks, except
     # 10 <= x < 13, where scipy's own error reaches 9.3e-10 (module docstring): 2e-9 there.
-    got = se.kelvin_functions(x)
+    got = kf.kelvin_functions(x)
     ref = [special.ber(x), special.bei(x), special.berp(x), special.beip(x)]
     tol = 2e-9 if 10.0 <= x < 13.0 else 1e-10
     for i in range(4):
@@ -103,21 +104,21 @@ def test_kelvin_functions_against_scipy_ber_bei(x):
 def test_single_kelvin_functions():
     # A&S Table 9.12 (from memory): ber 1 = 0.98438 178, bei 1 = 0.24956 604;
     # scipy agrees with those digits; 1e-14 against scipy below x = 10.
-    assert se.ber(1.0) == approx(0.98438178, abs=5e-9)
-    assert se.bei(1.0) == approx(0.24956604, abs=5e-9)
-    assert se.ber_prime(2.5) == approx(special.berp(2.5), rel=1e-14)
-    assert se.bei_prime(2.5) == approx(special.beip(2.5), rel=1e-14)
+    assert kf.ber(1.0) == approx(0.98438178, abs=5e-9)
+    assert kf.bei(1.0) == approx(0.24956604, abs=5e-9)
+    assert kf.ber_prime(2.5) == approx(special.berp(2.5), rel=1e-14)
+    assert kf.bei_prime(2.5) == approx(special.beip(2.5), rel=1e-14)
 
 
 def test_kelvin_overflow_is_signed_infinity():
     # exp(x/sqrt 2) exceeds the double range above x ~ 1004; the unscaled functions then
     # come back as infinities with the sign of the scaled value (scipy: inf as well).
-    got = se.kelvin_functions(5000.0)
+    got = kf.kelvin_functions(5000.0)
     ref = _scaled_reference(5000.0)
     for i in range(4):
         assert math.isinf(got[i]) and (got[i] > 0) == (ref[i] > 0)
     # just below overflow the core stays finite where scipy already gives inf
-    assert math.isfinite(se.ber(1003.5)) and abs(se.ber(1003.5)) > 1e305
+    assert math.isfinite(kf.ber(1003.5)) and abs(kf.ber(1003.5)) > 1e305
 
 
 # ------------------------------------------------------------------ round wire ratio

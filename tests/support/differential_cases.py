@@ -425,6 +425,7 @@ def model_cases():
         cases.append((tm, "callendar_van_dusen_temperature", [r, 100.0, 3.9083e-3, -5.775e-7, -4.183e-12]))
     for x in (0.0, 1e-3, 0.5, 2.0, 8.0, 16.4, 16.6, 40.0, 300.0, 2000.0, 1e4):
         cases.append((sk, "kelvin_resistance_ratio", [x]))
+        cases.append(("conductor_atlas.core.kelvin_functions", "kelvin_scaled", [x]))
     for f in (50.0, 1e3, 1e6, 1e9, 0.0, -5.0):
         cases.append((sk, "skin_depth", [1.7241e-8, f, 1.0]))
         cases.append((sk, "rectangular_bar_resistance_ratio", [0.04, 0.005, 1.7241e-8, f, 1.0]))

@@ -27,11 +27,12 @@ import math
 
 from conductor_atlas.core.errors import CoreError, check_positive
 from conductor_atlas.core import skin_effect as skin
+from conductor_atlas.core.kelvin_functions import kelvin_scaled
 
 _SQRT2 = math.sqrt(2.0)
 _INV_SQRT2 = 1.0 / math.sqrt(2.0)
 # Above this x the core's I1/I0 comes from its asymptotic expansion (kelvin_scaled is measured to
-# 1.1e-12 of its envelope up to here, core.skin_effect)
+# 1.1e-12 of its envelope up to here, core.kelvin_functions)
 _LARGE_X = 1e4
 
 
@@ -127,7 +128,7 @@ def kelvin_k_scaled(x):
 
 def _i_ratio_scaled(x):
     # [I0~, I1~] at z = x e^(i pi/4), scaled by exp(-x/sqrt 2); I1 = e^(-i pi/4) (ber' + i bei')
-    v = skin.kelvin_scaled(x)
+    v = kelvin_scaled(x)
     return [[v[0], v[1]], _mul(_ROT, [v[2], v[3]])]
 
 
