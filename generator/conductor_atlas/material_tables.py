@@ -20,6 +20,7 @@ from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_plain
 from conductor_atlas.model import Material
 from conductor_atlas.derived_table import Column, Row, Table, temperature_row_id
+from conductor_atlas.bar_table import bar_ratio_table
 
 CRYO_K = [4.2, 10.0, 20.0, 40.0, 77.0, 100.0, 150.0, 200.0]
 TABLE_C = [-100.0, -40.0, -20.0, 0.0, 20.0, 40.0, 60.0, 70.0, 80.0, 90.0, 105.0, 120.0, 150.0, 200.0, 250.0,
@@ -387,7 +388,7 @@ def thin_film_table(m: Material, record: dict) -> Table | None:
 
 def material_tables(m: Material, record: dict, model, fit) -> list[Table]:
     tables = [resistivity_temperature(m, record), sourced_points(m, record, fit), skin_depth_table(m, record),
-              ac_ratio_table(m, record)]
+              ac_ratio_table(m, record), bar_ratio_table(m, record, quiet_rho)]
     if m.klass != "thin-film":
         tables += resistance_tables(m, record)
     tables += [carrier_table(m, record), thin_film_table(m, record)]
