@@ -30,7 +30,7 @@ from pathlib import Path
 from conductor_atlas.core import filament_solver
 from conductor_atlas.core.celsius import TWENTY_CELSIUS
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.numfmt import format_number
+from conductor_atlas.core.numfmt import format_fixed, format_number
 from conductor_atlas.derived_table import Column, Row, Table
 
 CORE_DIR = Path(filament_solver.__file__).parent
@@ -134,7 +134,7 @@ def bar_ratio_table(m, record: dict, rho_at) -> Table | None:
                 texts.append(format_number(s[0], 4, True))
             else:
                 texts.append("≈" + format_number(s[0], 4, True))
-                unsettled.append(f"{label} at {frequency_label(f)} ({format_number(100.0 * s[3], 2)} %)")
+                unsettled.append(f"{label} at {frequency_label(f)} ({format_fixed(100.0 * s[3], 3)} %)")
         rows.append(Row(row_id, (label, w * 1e3, t * 1e3, *ratios, *counts),
                         (label, format_number(w * 1e3, 4), format_number(t * 1e3, 4), *texts,
                          *[format_number(c, 4) for c in counts])))
@@ -148,7 +148,7 @@ def bar_ratio_table(m, record: dict, rho_at) -> Table | None:
                      "same bar shows the ratio at both ends of it")
     return Table(
         id="bar-ac-dc-ratio", title="AC/DC resistance ratio of single flat bars (20 °C)",
-        model=("2-D filament solver (core.filament_solver): each bar cut into rectangular filaments of uniform "
+        model=("2-D filament solver: each bar cut into rectangular filaments of uniform "
                "current, graded toward the surfaces, with exact partial inductances (Grover's geometric mean "
                "distances), refined until the ratio settles to 0.1 % (Richardson extrapolation between two "
                f"levels); ρ(20 °C) = {format_number(rho * 1e8, 5)} µΩ·cm, μr = 1; R_dc = ρ/(w·t)"),

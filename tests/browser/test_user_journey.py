@@ -103,6 +103,23 @@ def test_compare_link_opens_two_materials_with_their_chart(tablet_page, served_s
     assert page.errors == []
 
 
+def test_compare_link_with_a_bar_gives_the_equal_resistance_bar(tablet_page, served_site, catalogue):
+    """A bar size on the compare page: the other material's width at the same thickness, the core's value,
+    and the DC-only caution. IEC 60028 / IEC 60889: 100 mm / 0.610 = 163.9 mm of 1350 for 100 x 10 mm copper."""
+    page = tablet_page
+    inputs = {"material": "IACS", "other": "1350", "size": "100 x 10 mm"}
+    page.goto(f"{served_site}/compare/index.html?" + "&".join(f"{k}={quote(v)}" for k, v in inputs.items()))
+    page.wait_for_selector("html.calc-ready")
+    expected = calculate("compare", {**inputs, "temperature": "20 °C"}, catalogue)
+    shown = float(page.get_attribute("[data-result=bar_width_other]", "data-value"))
+    assert shown == pytest.approx(expected["results"]["bar_width_other"]["value"], rel=1e-12, abs=0)
+    assert shown == pytest.approx(0.1 / 0.610, rel=2e-4)
+    assert "163.9 mm" in page.text_content("[data-result=bar_width_other]")
+    assert "DC only" in page.text_content("body")
+    assert page.get_attribute("[data-result=diameter_other]", "data-value") is not None
+    assert page.errors == []
+
+
 def test_row_link_copies_the_address(browser, served_site):
     context = browser.new_context(permissions=["clipboard-read", "clipboard-write"])
     page = context.new_page()

@@ -11,6 +11,7 @@ import math
 import pytest
 
 from conductor_atlas.core.calc_compare import SIDE_FIELDS, calculate as calculate_compare
+from conductor_atlas.core.calculators import calculate
 from tests.support.outcomes import result_value as value
 
 RHO_CU = 1.7241e-8
@@ -93,3 +94,47 @@ def test_bad_input_names_the_field(catalogue, fields, field, words):
         assert "conductivity_ratio" in out["results"], out["results"]
     else:
         assert out["results"] == {}
+
+
+def test_bar_gets_an_equal_resistance_bar_of_the_same_thickness(catalogue):
+    """100 x 10 mm annealed copper against 1350 aluminium at 20 °C: R' = ρ/(w t) equal at equal t gives
+    w2 = w1 ρ2/ρ1 = 100 mm / 0.610 = 163.9 mm (IEC 60028 100 %IACS, IEC 60889 61.0 %IACS: the records carry
+    0.028264 Ω·mm²/m, 1.6e-5 from 1.7241/0.61, so 1e-4), beside the round size, with the DC-only caution."""
+    out = calculate_compare({"material": "IACS", "other": "1350", "size": "100 x 10 mm"}, catalogue)
+    rho_al = catalogue["materials"]["aluminium-1350"]["rho_ref"]
+    assert value(out, "bar_width_other") == pytest.approx(0.1 * rho_al / RHO_CU, rel=1e-15, abs=0)
+    assert value(out, "bar_width_other") == pytest.approx(0.1 / 0.610, rel=1e-4, abs=0)
+    assert out["results"]["bar_width_other"]["text"] == "163.9 mm"
+    # the bar's resistance per metre equals the reference's: ρ2/(w2 t) = ρ1/(w1 t)
+    assert rho_al / (value(out, "bar_width_other") * 0.01) == pytest.approx(RHO_CU / (0.1 * 0.01), rel=1e-14)
+    assert "diameter_other" in out["results"]
+    assert any("DC only" in w and "skin-effect" in w for w in out["warnings"])
+
+
+def test_bar_width_at_temperature_and_with_a_range(catalogue):
+    """At 90 °C each material's own coefficient (IEC 60028 copper 0.00393 /K, 1350 0.00403 /K), the
+    width scales as the area does; 6101 carries its recorded %IACS range (55.0-59.5 %IACS, ASTM B317)
+    into the width's low and high ends."""
+    out = calculate_compare({"material": "IACS", "other": "1350", "size": "40 x 5 mm", "temperature": "90 °C"},
+                            catalogue)
+    assert value(out, "bar_width_other") == pytest.approx(0.04 * value(out, "area_ratio"), rel=1e-15, abs=0)
+    # core.ranges runs the calculator at both ends of the range (calculators.calculate)
+    ranged = calculate("compare", {"material": "IACS", "other": "6101", "size": "40 x 5 mm"}, catalogue)
+    width = ranged["results"]["bar_width_other"]
+    # %IACS converts with 100 %IACS = 1/58 MS/m (IEC 60028), the copper record is 1.7241 µΩ·cm
+    rho_6101 = [1.0 / (58e6 * 0.595), 1.0 / (58e6 * 0.550)]  # 59.5 and 55.0 %IACS (the record's value)
+    assert width["low"] == pytest.approx(0.04 * rho_6101[0] / RHO_CU, rel=1e-12)
+    assert width["high"] == pytest.approx(0.04 * rho_6101[1] / RHO_CU, rel=1e-12)
+    assert width["text"] == "72.73 mm (range 67.23 mm – 72.73 mm)"
+
+
+def test_round_size_gives_no_bar_width(catalogue):
+    out = calculate_compare({"material": "IACS", "other": "1350", "size": "35 mm2"}, catalogue)
+    assert "bar_width_other" not in out["results"]
+    assert not any("DC only" in w for w in out["warnings"])
+
+
+def test_bad_bar_drops_only_the_size_answers(catalogue):
+    out = calculate_compare({"material": "IACS", "other": "1350", "size": "0 x 10 mm"}, catalogue)
+    assert "size" in out["errors"]
+    assert "bar_width_other" not in out["results"] and "conductivity_ratio" in out["results"]

@@ -200,9 +200,9 @@ def new_calculator_cases(catalogue):
             add("temperature_rise", "", {"material": material, "k": k, "resistance_cold": r1, "temperature_cold": t1,
                                          "resistance_hot": r2, "coolant": coolant})
     for pair in (("IACS", "1350"), ("Cu", "Ag"), ("IACS", "cca-10"), ("1350", "IACS"), ("IACS", "IACS"),
-                 ("IACS", "chromium-zirconium-copper"), ("IACS", "xx"), ("", "")):
+                 ("IACS", "chromium-zirconium-copper"), ("IACS", "6101"), ("IACS", "xx"), ("", "")):
         for size, t in (("", ""), ("35 mm2", "90 °C"), ("4/0 AWG", ""), ("2000 mm2", ""), ("d 2 mm", "77 K"),
-                        ("abc", "")):
+                        ("abc", ""), ("100 x 10 mm", ""), ("40 x 5 mm", "90 °C"), ("0 x 10 mm", "")):
             add("compare", "", {"material": pair[0], "other": pair[1], "size": size, "temperature": t})
     for material in ("IACS", "1350", "Cu", "xx"):
         for extra in ({}, {"max_drop": "6.9 V", "supply": ""}, {"conductors": "3-phase", "supply": "400 V"},

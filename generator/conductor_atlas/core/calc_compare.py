@@ -18,7 +18,8 @@ FIELD_INFO = {
     "material": ["Reference material", "id, alias or symbol, e.g. IACS, Cu"],
     "other": ["Other material", "id, alias or symbol, e.g. 1350, CCA-10, 6201"],
     "size": ["Size of the reference conductor (optional)", "e.g. 35 mm², 4/0 AWG, d 2 mm, 40 x 5 mm: adds the "
-                                                           "other material's equal-resistance size"],
+                                                           "other material's equal-resistance size (for a bar also "
+                                                           "its width at the same thickness)"],
     "temperature": ["Temperature of both", "e.g. 20 °C, 90 degC"],
     "model": MODEL_FIELD_INFO,
 }
@@ -30,14 +31,15 @@ RESULT_LABELS = [
     ["resistivity", "Resistivity of the reference"], ["resistivity_other", "Resistivity of the other"],
     ["area", "Reference cross-section"], ["area_other", "Equal-resistance cross-section of the other"],
     ["diameter_other", "Equal-resistance diameter of the other (round)"],
+    ["bar_width_other", "Equal-resistance bar of the other: its width at the same thickness (DC)"],
     ["next_metric_size", "Next metric size of the other (IEC 60228)"],
     ["next_awg", "Next AWG size of the other (ASTM B258, solid)"],
     ["mass_per_metre", "Mass per metre, reference"], ["mass_per_metre_other", "Mass per metre, other"],
     ["temperature", "Temperature"],
 ]
 # optional input -> the results that need it (the ratios do not depend on the size)
-SIDE_FIELDS = {"size": ["area", "area_other", "diameter_other", "next_metric_size", "next_awg", "mass_per_metre",
-                        "mass_per_metre_other"]}
+SIDE_FIELDS = {"size": ["area", "area_other", "diameter_other", "bar_width_other", "next_metric_size", "next_awg",
+                        "mass_per_metre", "mass_per_metre_other"]}
 CAUTION = ("Equal resistance at equal length and temperature only: current rating, terminations, strength and "
            "creep differ between materials. Size real installations to the local electrical code and licensed "
            "practice.")
@@ -50,7 +52,9 @@ def calculate(inputs, catalogue):
     temperature (both, default 20 °C); model (for both).
     A2/A1 = ρ2/ρ1; d2/d1 = sqrt(ρ2/ρ1); m2/m1 = (ρ2 δ2)/(ρ1 δ1) (core.practice); conductivity
     per mass (σ/δ) other over reference = 1 / (m2/m1). With a size: A2 = A1 · ρ2/ρ1 and the next
-    IEC 60228 and AWG sizes at or above it (core.geometry).
+    IEC 60228 and AWG sizes at or above it (core.geometry). A bar (w x t): also the other material's
+    bar of the same thickness and the same DC resistance per length, w2 = w1 · ρ2/ρ1 (equal-resistance
+    width; at AC the two bars' AC/DC ratios differ, which the skin-effect calculator gives per bar).
     """
     outcome = new_outcome(NAME, inputs)
     m1 = read_material(outcome, inputs, catalogue, "material")
@@ -97,6 +101,8 @@ def calculate(inputs, catalogue):
         add_result(outcome, "area_other", a2, "m²", format_number(a2 * 1e6, 4) + " mm²")
         d2 = diameter_from_area(a2)
         add_result(outcome, "diameter_other", d2, "m", format_number(d2 * 1000.0, 4) + " mm")
+        if size["shape"] == "bar":
+            add_bar_width(outcome, size, area_ratio)
         metric = next_metric_size(a2)
         if metric > 0:
             add_result(outcome, "next_metric_size", metric / 1e6, "m²", format_number(metric, 4) + " mm²")
@@ -118,3 +124,13 @@ def calculate(inputs, catalogue):
                              "standard's maximum resistance, so check the chosen size against that table")
     check_finite_results(outcome, "size")
     return outcome
+
+
+def add_bar_width(outcome, size, area_ratio):
+    """The other material's bar of the reference bar's thickness at equal DC resistance per length:
+    R' = ρ/(w t) is equal when w2 = w1 · ρ2/ρ1 [m] (t unchanged)."""
+    w2 = size["width"] * area_ratio
+    add_result(outcome, "bar_width_other", w2, "m", format_number(w2 * 1000.0, 4) + " mm")
+    add_warning(outcome, "the equal-resistance bar matches at DC only: at AC a bar's resistance rises by its own "
+                         "AC/DC ratio, which differs between the two bars (their widths and resistivities differ); "
+                         "the skin-effect calculator gives it for each bar at your frequency")
