@@ -114,3 +114,14 @@ def test_unsettled_cells_are_marked(views):
             assert row.texts[3 + k].startswith("≈") == (change >= filament_solver.TOLERANCE)
             if change >= filament_solver.TOLERANCE:
                 assert f"{row.texts[0]} at {bar_table.frequency_label(f)}" in table.note
+
+
+@pytest.mark.parametrize("mid, words", [("copper", "conductor grades and copper alloys only"),
+                                        ("steel-low-carbon", "needs μr = 1"),
+                                        ("copper-clad-steel-40", "clad bar is not computed")])
+def test_pages_without_the_table_say_why(views, mid, words):
+    """The round-wire AC/DC table of a material without the bar table says why and where to go."""
+    round_ac = next(t for t in views[mid].tables if t.id == "ac-dc-ratio")
+    assert words in round_ac.note
+    annealed = next(t for t in views["copper-annealed"].tables if t.id == "ac-dc-ratio")
+    assert "flat bars" not in annealed.note.lower()

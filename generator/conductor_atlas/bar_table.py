@@ -106,6 +106,20 @@ BAR_TABLE_SCOPE = ("Only conductor grades and copper alloys (the materials bars 
                    "bar is not computed, and for any other bar use the skin-effect calculator with the size")
 
 
+def no_bar_table_reason(m, record: dict) -> str:
+    """Why a material gets no bar table, for the note of its round-wire AC/DC table ("" when it gets one)."""
+    if gets_bar_table(m, record):
+        return ""
+    if record["layer_share"] > 0 or len(record["cl_t"]) > 0:
+        return "No table of flat bars: a clad bar is not computed (the skin-effect calculator refuses it)"
+    if record["mu_r"] > 1.5:
+        return ("No table of flat bars: the filament solver needs μr = 1; the skin-effect calculator gives a magnetic "
+                "bar's shell approximation, flagged as a lower estimate")
+    return ("Flat bars: the table of single-bar AC/DC ratios is given for conductor grades and copper alloys only (the "
+            "materials bars are made of); for a bar of this material use the skin-effect calculator with its size, "
+            "e.g. 100 x 10 mm")
+
+
 def bar_ratio_table(m, record: dict, rho_at) -> Table | None:
     """The table of single-bar AC/DC ratios at 20 °C, or None when the material does not get one.
 

@@ -4,6 +4,7 @@ validity and sources. Row ids come from the row's defining value, so links survi
 
 from __future__ import annotations
 
+import dataclasses
 import functools
 
 from conductor_atlas.core import carriers as fe
@@ -20,7 +21,7 @@ from conductor_atlas.core.temperature_models import bloch_gruneisen_resistivity
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_plain
 from conductor_atlas.model import Material
 from conductor_atlas.derived_table import Column, Row, Table, temperature_row_id
-from conductor_atlas.bar_table import bar_ratio_table
+from conductor_atlas.bar_table import bar_ratio_table, no_bar_table_reason
 
 CRYO_K = [4.2, 10.0, 20.0, 40.0, 77.0, 100.0, 150.0, 200.0]
 TABLE_C = [-100.0, -40.0, -20.0, 0.0, 20.0, 40.0, 60.0, 70.0, 80.0, 90.0, 105.0, 120.0, 150.0, 200.0, 250.0,
@@ -387,8 +388,12 @@ def thin_film_table(m: Material, record: dict) -> Table | None:
 
 
 def material_tables(m: Material, record: dict, model, fit) -> list[Table]:
+    round_ac = ac_ratio_table(m, record)
+    reason = no_bar_table_reason(m, record)
+    if round_ac is not None and reason:
+        round_ac = dataclasses.replace(round_ac, note=". ".join(n for n in (round_ac.note, reason) if n))
     tables = [resistivity_temperature(m, record), sourced_points(m, record, fit), skin_depth_table(m, record),
-              ac_ratio_table(m, record), bar_ratio_table(m, record, quiet_rho)]
+              round_ac, bar_ratio_table(m, record, quiet_rho)]
     if m.klass != "thin-film":
         tables += resistance_tables(m, record)
     tables += [carrier_table(m, record), thin_film_table(m, record)]
