@@ -515,3 +515,16 @@ def test_unknown_names_suggest_materials_that_share_the_typed_words_first(catalo
     ids = [find_material(catalogue, name)["id"] for name in names]
     assert set(ids[:len(first_ids)]) == first_ids, ids
     assert len(ids) == len(set(ids)) <= 5  # one name per material
+
+
+def test_a_bar_too_many_skin_depths_across_keeps_the_skin_depth(catalogue):
+    # Found: a 100 x 0.035 mm copper strip at 1 GHz was refused as a whole with "see the surface
+    # resistance", which was then not shown. δ = sqrt(ρ/(π f μ0)) with ρ = 1/58 µΩ·m (IEC 60028) and
+    # μ0 from scipy.constants: 2.09 µm.
+    from scipy import constants as sc
+    outcome = calculate("skin-effect", {"material": "IACS", "frequency": "1 GHz", "size": "100 x 0.035 mm"},
+                        catalogue)
+    assert "skin depths across" in outcome["errors"]["size"]
+    assert outcome["results"]["skin_depth"]["value"] == pytest.approx((1.7241e-8 / (sc.pi * 1e9 * sc.mu_0)) ** 0.5,
+                                                                      rel=1e-4)
+    assert "surface_resistance" in outcome["results"] and "ac_dc_ratio" not in outcome["results"]

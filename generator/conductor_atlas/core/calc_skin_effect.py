@@ -110,16 +110,21 @@ def calculate(inputs, catalogue):
         if not (delta > 0):
             raise CoreError("frequency is too high to compute a skin depth", "frequency")
         rs = skin.surface_resistance(rho, f, mu_r)
-        ratio = 0.0
-        if size is not None:
-            ratio = ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers)
     except CoreError as problem:
-        field = problem.field
-        if field != "arrangement":
-            field = "frequency"
-        add_error(outcome, field, problem.message)
+        add_error(outcome, "frequency", problem.message)
         outcome["results"] = {}
         return outcome
+    ratio = 0.0
+    if size is not None:
+        try:
+            ratio = ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers)
+        except CoreError as problem:
+            # a size or layout the AC/DC method cannot take at this frequency: δ and R_s still stand
+            field = problem.field
+            if field != "arrangement":
+                field = "size"
+            add_error(outcome, field, problem.message)
+            size = None
     add_result(outcome, "temperature", t, "K", temperature_text(t))
     add_result(outcome, "resistivity", opening[2], "Ω·m", format_number(opening[2] * 1e8, 5) + " µΩ·cm")
     add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4) + where)
