@@ -291,6 +291,12 @@ def new_calculator_cases(catalogue):
     return cases
 
 
+def fs_mesh_example():
+    """A quarter of a 20 x 3 mm bar cut 3 x 2 (graded), as core.filament_solver._filaments builds it."""
+    from conductor_atlas.core.filament_solver import _filaments
+    return _filaments([[0.0, 0.01, 0.0, 0.0015, False, True, False, True, 0, 1.7241e-8]], 9.3e-3, 1.0)
+
+
 def filament_cases():
     """The filament solver and its geometric mean distances (small, fast layouts)."""
     fi = "conductor_atlas.core.filament_inductance"
@@ -303,6 +309,9 @@ def filament_cases():
     for placement in ([0.0, 0.0, 1e-3, 1e-3, 0.0, 0.0, 1e-3, 1e-3], [0.0, 0.0, 2e-3, 5e-4, 1.5e-3, 2e-4, 1e-3, 1e-3]):
         cases.append((fi, "rectangle_log_gmd_exact", placement))  # near: where the closed form is used
     cases.append((fi, "rectangle_log_gmd_far", [0.0, 0.0, 1e-3, 1e-3, 0.05, -0.02, 1e-3, 2e-3]))
+    cases.append((fi, "far_field_correction", [0.05, -0.02, 1e-3, 1e-3, 1e-3, 2e-3]))
+    for uv in ([0.0, 0.0], [1e-3, 0.0], [0.0, 2e-3], [1e-3, 2e-3], [0.3, 1e-5]):
+        cases.append((fi, "corner_term", uv))
     for rings in ([0.0, 1e-3, 0.0, 1e-3], [0.0, 1e-3, 1e-3, 2e-3], [1e-3, 2e-3, 0.0, 1e-3], [1e-3, 1.1e-3, 1e-3, 1.1e-3]):
         cases.append((fi, "annulus_log_gmd", rings))
     cases.append((cl, "solve_complex", [[2.0, 1.0, 0.5, 3.0], [0.1, -1.0, 2.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
@@ -312,6 +321,11 @@ def filament_cases():
     for args in ([0.0, 0.05, False, True, 9.3e-3, 1], [0.0, 0.005, True, True, 9.3e-3, 2], [0.0, 0.1, False, False, 1e-3, 1]):
         cases.append((fs, "graded_cells", args))
     rho = 1.7241e-8
+    cases.append((fs, "graded_edges", [0.0, 0.05, False, True, 9.3e-3, 2]))
+    # the solver's matrix of a small quarter mesh (edges and filaments as _filaments builds them)
+    quarter = fs_mesh_example()
+    cases.append((fs, "filament_log_gmds", [quarter, 1.0, 1.0]))
+    cases.append((fs, "filament_log_gmds", [quarter, 1.0, -1.0]))
     cases.append((fs, "bar_group_solution", [0.04, 0.005, 1, 0.0, rho, 50.0]))
     cases.append((fs, "bar_group_solution", [0.02, 0.003, 3, 0.005, rho, 50.0]))
     cases.append((fs, "bar_group_solution", [0.02, 0.003, 0, 0.005, rho, 50.0]))

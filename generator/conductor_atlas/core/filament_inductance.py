@@ -48,6 +48,12 @@ def _corner(x, y):
     return g
 
 
+def corner_term(u, v):
+    """G(u, v) [m^4 ln m] of rectangle_log_gmd_exact's closed form, for u, v >= 0 [m] (the filament
+    solver tabulates these per pair of cell edges)."""
+    return _corner(u, v)
+
+
 def _double_sum_pairs(xa1, xa2, xb1, xb2):
     # the four differences of the edges with the signs of the double integral over both intervals
     return [[abs(xa2 - xb1), 1.0], [abs(xa1 - xb1), -1.0], [abs(xa2 - xb2), -1.0], [abs(xa1 - xb2), 1.0]]
@@ -117,6 +123,15 @@ def rectangle_log_gmd_far(xa, ya, wa, ha, xb, yb, wb, hb):
     """
     dx = xb - xa
     dy = yb - ya
+    return 0.5 * _log(dx * dx + dy * dy) + far_field_correction(dx, dy, wa, ha, wb, hb)
+
+
+def far_field_correction(dx, dy, wa, ha, wb, hb):
+    """ln g - ln D of rectangle_log_gmd_far [-]: its terms beyond the centre distance D.
+
+    dx, dy: centre offset [m]; wa, ha, wb, hb: the rectangles' sides [m]. (The filament solver
+    adds the ln D of several mirror images as the log of one product.)
+    """
     dx2 = dx * dx
     dy2 = dy * dy
     d2 = dx2 + dy2
@@ -126,7 +141,7 @@ def rectangle_log_gmd_far(xa, ya, wa, ha, xb, yb, wb, hb):
     m4y = (ha * ha * ha * ha + hb * hb * hb * hb) / 80.0 + ha * ha * hb * hb / 24.0
     fxx = (dy2 - dx2) / (d2 * d2)
     fxxxx = -6.0 * (dx2 * dx2 - 6.0 * dx2 * dy2 + dy2 * dy2) / (d2 * d2 * d2 * d2)
-    return 0.5 * _log(d2) + 0.5 * fxx * (m2x - m2y) + fxxxx * (m4x - 6.0 * m2x * m2y + m4y) / 24.0
+    return 0.5 * fxx * (m2x - m2y) + fxxxx * (m4x - 6.0 * m2x * m2y + m4y) / 24.0
 
 
 def rectangle_log_gmd(xa, ya, wa, ha, xb, yb, wb, hb):
