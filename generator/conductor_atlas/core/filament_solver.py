@@ -97,6 +97,8 @@ def _stretched(lo, span, fine_at_lo, delta, level):
             u = (math.exp(beta * s) - 1.0) / (stretch - 1.0)
         else:
             u = s
+        if k == n:
+            u = 1.0  # the far end exactly (exp(beta) - 1 over stretch - 1 is 1 only to a last bit)
         if fine_at_lo:
             edges.append(lo + span * u)
         else:
