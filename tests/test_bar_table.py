@@ -49,13 +49,15 @@ def test_stored_solution_equals_a_fresh_solve(width, thickness):
     assert stored == [fresh["ratio"], fresh["filaments"], fresh["level"], fresh["change"], bool(fresh["converged"])]
 
 
-def test_a_stale_store_is_not_used(monkeypatch):
-    """With another solver digest the stored file is ignored and the cell is solved in the build."""
+def test_a_stale_store_is_not_used(monkeypatch, capsys):
+    """With another solver digest the stored file is ignored, the build says so on stderr with the command
+    that stores them again, and the cell is solved in the build."""
     monkeypatch.setattr(bar_table, "solver_digest", lambda: "changed")
     bar_table.stored_solutions.cache_clear()
     bar_table.bar_solution.cache_clear()
     try:
         assert bar_table.stored_solutions() == {}
+        assert "python -m conductor_atlas.bar_table --write" in capsys.readouterr().err
         solved = bar_table.bar_solution(0.02, 0.005, 1.7241e-8, 50.0)
         assert solved[0] == filament_solver.bar_group_solution(0.02, 0.005, 1, 0.0, 1.7241e-8, 50.0)["ratio"]
     finally:

@@ -67,6 +67,10 @@ def stored_solutions() -> dict:
     except (OSError, ValueError):
         return {}
     if not isinstance(stored, dict) or stored.get("solver_digest") != solver_digest():
+        # said once per process, so a build that turns slow says why (about 6 CPU minutes for the shipped set)
+        print(f"conductor-atlas: note: {STORE.name} was made by another version of the filament solver, so the "
+              "flat-bar tables are solved in this build (minutes); store them again with: python -m "
+              "conductor_atlas.bar_table --write", file=sys.stderr)
         return {}
     return stored.get("solutions", {})
 
