@@ -5,7 +5,7 @@ from conductor_atlas.core import short_circuit as sc
 from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import next_metric_size
-from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at
+from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at, resistivity_value
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           has_errors, new_outcome)
@@ -65,7 +65,7 @@ def resistivities(m, points, model):
     """ρ [ohm*m] of m at each temperature of ``points`` by ``model`` (warnings are read separately)."""
     out = []
     for t in points:
-        out.append(resistivity_at(m, t, model)["rho"])
+        out.append(resistivity_value(m, t, model))
     return out
 
 
@@ -92,7 +92,7 @@ def final_temperature(m, model, t_i, target, cv, cap):
             lo = theta
         else:
             hi = theta
-        slope = cv / resistivity_at(m, theta, model)["rho"]
+        slope = cv / resistivity_value(m, theta, model)
         step = gap / slope
         guess = theta - step
         if not (guess > lo and guess < hi):

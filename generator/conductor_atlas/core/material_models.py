@@ -229,8 +229,120 @@ def within_model(found):
     return (found["model"] == "matthiessen" or found["model"] == "layers") and len(found["warnings"]) == 1
 
 
+def model_key(m, t, model):
+    """The model key ``model`` stands for at temperature t [K]: "auto" (or empty) is choose_model's pick."""
+    if model == "auto" or len(model) == 0:
+        return choose_model(m, t)
+    return model
+
+
+def resistivity_value(m, t, model):
+    """ρ [ohm*m] of material record ``m`` at temperature t [K] with ``model`` (or "auto"): the "rho" of
+    resistivity_at without its label and warnings, for loops that need only the number (an integral
+    over temperature). Raises the same CoreError as resistivity_at.
+
+    Examples
+    --------
+    The same number as resistivity_at (IEC 60028 copper at 90 degC, 2.1984e-8 ohm*m by hand), here
+    outside the linear model's span too, where resistivity_at adds a warning:
+
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> round(resistivity_value(copper, 363.15, "auto") * 1e8, 4)
+    2.1984
+    >>> resistivity_value(copper, 573.15, "linear") == resistivity_at(copper, 573.15, "linear")["rho"]
+    True
+    """
+    if not (t > 0):
+        raise CoreError("must be above absolute zero (−273.15 °C)", "temperature")
+    return model_rho(m, t, model_key(m, t, model), model)
+
+
+def model_rho(m, t, key, model):
+    """ρ [ohm*m] of m at t [K] by model ``key`` (resolved, not "auto"); ``model`` is the name typed, for
+    the message when no model has that name. Raises CoreError (field "model" or "temperature") when the
+    model is not on record for m or does not reach t."""
+    if key == "linear":
+        if not has_linear(m):
+            raise CoreError("no temperature coefficient is on record for " + m["name"], "model")
+        return dc.resistivity_linear(t, m["rho_ref"], m["alpha"], m["t_ref"])
+    if key == "table":
+        if not has_table(m):
+            raise CoreError("no sourced ρ(T) table is on record for " + m["name"], "model")
+        rho = tm.interpolate_table(t, m["table_t"], m["table_rho"])
+        if not (rho > 0):
+            raise CoreError("the table cannot be extrapolated this far (it gives no positive resistivity)", "temperature")
+        return rho
+    if key == "bloch-gruneisen":
+        if not has_bg(m):
+            raise CoreError("no Bloch–Grüneisen fit is available for " + m["name"], "model")
+        return tm.bloch_gruneisen_resistivity(t, m["bg_rho0"], m["bg_a"], m["bg_theta"])
+    if key == "callendar-van-dusen":
+        if not has_cvd(m):
+            raise CoreError("no Callendar–Van Dusen coefficients are on record for " + m["name"], "model")
+        return m["rho_ref"] * cvd_ratio(m, t)
+    if key == "matthiessen":
+        if not has_matthiessen(m):
+            raise CoreError("no base metal is on record for " + m["name"] + ", so Matthiessen's rule cannot be applied",
+                            "model")
+        if not in_matthiessen_span(m, t):
+            raise CoreError("the estimate for " + m["name"] + " by Matthiessen's rule spans only "
+                            + temperature_text(m["mt_t"][0]) + " to " + temperature_text(m["mt_t"][len(m["mt_t"]) - 1])
+                            + " (the base metal's sourced table)", "temperature")
+        return m["rho_ref"] + tm.interpolate_table(t, m["mt_t"], m["mt_drho"])
+    if key == "layers":
+        if not has_layers(m):
+            raise CoreError(m["name"] + " is not a clad wire with its layers on record", "model")
+        if not in_layers_span(m, t):
+            raise CoreError("the parallel-layer model of " + m["name"] + " spans only " + temperature_text(m["cl_t"][0])
+                            + " to " + temperature_text(m["cl_t"][len(m["cl_t"]) - 1])
+                            + " (where both layers' own models hold)", "temperature")
+        return tm.interpolate_table(t, m["cl_t"], m["cl_rho"])
+    if key == "reference":
+        if abs(t - m["t_ref"]) > 0.5:
+            raise CoreError("no temperature model is on record for " + m["name"] + "; only "
+                            + temperature_text(m["t_ref"]) + " can be computed", "temperature")
+        return m["rho_ref"]
+    raise CoreError(model_choice_message(m, model), "model")
+
+
+def model_warnings(m, t, key):
+    """What the answer of model ``key`` at t [K] must say beside its value: outside a model's span, an
+    interpolated or extrapolated table, an estimate (Matthiessen's rule, layers in parallel)."""
+    warnings = []
+    if key == "linear":
+        if not in_linear_span(m, t):
+            warnings.append("temperature " + temperature_text(t) + " is outside the span where the linear model holds for "
+                            + m["name"] + " (" + temperature_text(m["valid_from"]) + " to "
+                            + temperature_text(m["valid_to"]) + ")")
+    elif key == "table":
+        for w in tm.table_warnings(t, m["table_t"]):
+            warnings.append("ρ(T) table of " + m["name"] + ": " + w)
+    elif key == "bloch-gruneisen":
+        if not in_bg_range(m, t):
+            warnings.append("temperature " + temperature_text(t) + " is outside the range the Bloch–Grüneisen fit of "
+                            + m["name"] + " was fitted over (" + temperature_text(m["bg_t_min"]) + " to "
+                            + temperature_text(m["bg_t_max"]) + ")")
+    elif key == "callendar-van-dusen":
+        for w in tm.cvd_warnings(t):
+            warnings.append(w)
+    elif key == "matthiessen":
+        warnings.append("ρ of " + m["name"] + " at " + temperature_text(t) + " is an estimate: its value at "
+                        + temperature_text(m["t_ref"]) + " plus the change of " + m["mt_base"]
+                        + " (Matthiessen's rule; alloying adds a nearly constant part to ρ). Check against the "
+                        "supplier's data where it matters")
+    elif key == "layers":
+        if abs(t - m["t_ref"]) > 0.5:
+            warnings.append("ρ of " + m["name"] + " at " + temperature_text(t) + " is an estimate: "
+                            + m["cl_names"][0] + " and a core of " + m["cl_names"][1]
+                            + " conducting in parallel, with the area fraction that gives the grade's value at "
+                            + temperature_text(m["t_ref"]) + "; the layers of a real wire may be other grades than these")
+    return warnings
+
+
 def resistivity_at(m, t, model):
-    """Resistivity of material record ``m`` at temperature t [K] with ``model`` (or "auto").
+    """Resistivity of material record ``m`` at temperature t [K] with ``model`` (or "auto"):
+    {"rho": [ohm*m], "model": key, "label": text, "warnings": [...]}.
 
     Raises CoreError (field "model" or "temperature") when the asked model is not on record or
     the temperature is impossible.
@@ -248,76 +360,14 @@ def resistivity_at(m, t, model):
     """
     if not (t > 0):
         raise CoreError("must be above absolute zero (−273.15 °C)", "temperature")
-    key = model
-    if key == "auto" or len(key) == 0:
-        key = choose_model(m, t)
-    warnings = []
-    if key == "linear":
-        if not has_linear(m):
-            raise CoreError("no temperature coefficient is on record for " + m["name"], "model")
-        if not in_linear_span(m, t):
-            warnings.append("temperature " + temperature_text(t) + " is outside the span where the linear model holds for "
-                            + m["name"] + " (" + temperature_text(m["valid_from"]) + " to "
-                            + temperature_text(m["valid_to"]) + ")")
-        rho = dc.resistivity_linear(t, m["rho_ref"], m["alpha"], m["t_ref"])
-    elif key == "table":
-        if not has_table(m):
-            raise CoreError("no sourced ρ(T) table is on record for " + m["name"], "model")
-        rho = tm.interpolate_table(t, m["table_t"], m["table_rho"])
-        for w in tm.table_warnings(t, m["table_t"]):
-            warnings.append("ρ(T) table of " + m["name"] + ": " + w)
-        if not (rho > 0):
-            raise CoreError("the table cannot be extrapolated this far (it gives no positive resistivity)", "temperature")
-    elif key == "bloch-gruneisen":
-        if not has_bg(m):
-            raise CoreError("no Bloch–Grüneisen fit is available for " + m["name"], "model")
-        rho = tm.bloch_gruneisen_resistivity(t, m["bg_rho0"], m["bg_a"], m["bg_theta"])
-        if not in_bg_range(m, t):
-            warnings.append("temperature " + temperature_text(t) + " is outside the range the Bloch–Grüneisen fit of "
-                            + m["name"] + " was fitted over (" + temperature_text(m["bg_t_min"]) + " to "
-                            + temperature_text(m["bg_t_max"]) + ")")
-    elif key == "callendar-van-dusen":
-        if not has_cvd(m):
-            raise CoreError("no Callendar–Van Dusen coefficients are on record for " + m["name"], "model")
-        for w in tm.cvd_warnings(t):
-            warnings.append(w)
-        rho = m["rho_ref"] * cvd_ratio(m, t)
-    elif key == "matthiessen":
-        if not has_matthiessen(m):
-            raise CoreError("no base metal is on record for " + m["name"] + ", so Matthiessen's rule cannot be applied",
-                            "model")
-        if not in_matthiessen_span(m, t):
-            raise CoreError("the estimate for " + m["name"] + " by Matthiessen's rule spans only "
-                            + temperature_text(m["mt_t"][0]) + " to " + temperature_text(m["mt_t"][len(m["mt_t"]) - 1])
-                            + " (the base metal's sourced table)", "temperature")
-        rho = m["rho_ref"] + tm.interpolate_table(t, m["mt_t"], m["mt_drho"])
-        warnings.append("ρ of " + m["name"] + " at " + temperature_text(t) + " is an estimate: its value at "
-                        + temperature_text(m["t_ref"]) + " plus the change of " + m["mt_base"]
-                        + " (Matthiessen's rule; alloying adds a nearly constant part to ρ). Check against the "
-                        "supplier's data where it matters")
-        return {"rho": rho, "model": key, "label": matthiessen_label(m), "warnings": warnings}
+    key = model_key(m, t, model)
+    rho = model_rho(m, t, key, model)
+    label = MODEL_LABELS[key]
+    if key == "matthiessen":
+        label = matthiessen_label(m)
     elif key == "layers":
-        if not has_layers(m):
-            raise CoreError(m["name"] + " is not a clad wire with its layers on record", "model")
-        if not in_layers_span(m, t):
-            raise CoreError("the parallel-layer model of " + m["name"] + " spans only " + temperature_text(m["cl_t"][0])
-                            + " to " + temperature_text(m["cl_t"][len(m["cl_t"]) - 1])
-                            + " (where both layers' own models hold)", "temperature")
-        rho = tm.interpolate_table(t, m["cl_t"], m["cl_rho"])
-        if abs(t - m["t_ref"]) > 0.5:
-            warnings.append("ρ of " + m["name"] + " at " + temperature_text(t) + " is an estimate: "
-                            + m["cl_names"][0] + " and a core of " + m["cl_names"][1]
-                            + " conducting in parallel, with the area fraction that gives the grade's value at "
-                            + temperature_text(m["t_ref"]) + "; the layers of a real wire may be other grades than these")
-        return {"rho": rho, "model": key, "label": layers_label(m), "warnings": warnings}
-    elif key == "reference":
-        if abs(t - m["t_ref"]) > 0.5:
-            raise CoreError("no temperature model is on record for " + m["name"] + "; only "
-                            + temperature_text(m["t_ref"]) + " can be computed", "temperature")
-        rho = m["rho_ref"]
-    else:
-        raise CoreError(model_choice_message(m, model), "model")
-    return {"rho": rho, "model": key, "label": MODEL_LABELS[key], "warnings": warnings}
+        label = layers_label(m)
+    return {"rho": rho, "model": key, "label": label, "warnings": model_warnings(m, t, key)}
 
 
 COEFFICIENT_STEP = 0.5  # [K] half-width of the central difference for the local coefficient
@@ -342,9 +392,7 @@ def local_temperature_coefficient(m, t, model):
     >>> round(alpha, 7), warnings
     (0.0030821, [])
     """
-    key = model
-    if key == "auto" or len(key) == 0:
-        key = choose_model(m, t)
+    key = model_key(m, t, model)
     if key == "reference" or not (t > COEFFICIENT_STEP):
         return [None, []]
     try:

@@ -253,11 +253,8 @@ def search(index, query, limit):
         query_text = " ".join(query_words)
         filtered = len(filters) > 0
         # for the score bound: the exact bonus needs a key as long as the compacted query, the title
-        # bonus a title whose first word starts with the first query word
+        # bonus a title whose first word starts with the first query word (checked per entry bounded)
         size_bit = key_size_bit(len(query_compact)) if len(query_compact) > 0 else 0
-        starts = []
-        for word in index["vocabulary"]:
-            starts.append(word.startswith(query_words[0]))
         full = False
         for c in range(count):
             if words > 1 and words_matched(gains, words, c) != wanted:
@@ -276,7 +273,7 @@ def search(index, query, limit):
                 base = word_score(gains, words, c)
                 total += 1
                 # most entries of a large index cannot reach the shown ones: skip their full score
-                if full and score_bound(index, position, base, size_bit, starts, kind_bonus) < top[limit - 1][1]:
+                if full and score_bound(index, position, base, size_bit, query_words[0], kind_bonus) < top[limit - 1][1]:
                     continue
                 record = entries[position]
                 sort_value = score_entry(index, record, base, marks, query_words, query_text, query_compact,

@@ -212,11 +212,11 @@ def score_entry(index, record, base, marks, query_words, query_text, query_compa
     return score
 
 
-def score_bound(index, position, base, size_bit, starts, kind_bonus):
+def score_bound(index, position, base, size_bit, first_word, kind_bonus):
     """A cheap upper bound of ``score_entry`` from the index's flat per-entry lists: each bonus
     that is possible at all, added in full. ``size_bit``: key_size_bit of the compacted query (0:
-    no exact bonus); ``starts``: per vocabulary word, whether it starts with the first query word
-    (empty: no title bonus).
+    no exact bonus); ``first_word``: the first query word (the title bonus needs a title whose
+    first word starts with it; checked for this entry only, not for the whole vocabulary).
 
     The same additions in the same order, each at least as large, so rounding keeps it an upper bound.
     """
@@ -224,7 +224,7 @@ def score_bound(index, position, base, size_bit, starts, kind_bonus):
     if size_bit != 0 and (index["key_sizes"][position] & size_bit) != 0:
         bound += 100.0
     first = index["title_first"][position]
-    if first >= 0 and len(starts) > 0 and starts[first]:
+    if first >= 0 and index["vocabulary"][first].startswith(first_word):
         bound += 20.0
     bound += 3.0
     bound += 1.0
