@@ -51,11 +51,12 @@ function setValue(input, text) {
 // The model field offers every model; those the material in use has no data for are marked not
 // available, with the reason (the catalogue record's "models" lists the ones it has).
 function showModels(view, catalogue, outcome) {
-  const select = view.form.querySelector('select[name=model]');
-  if (!select || !outcome.material || select.dataset.modelsFor === outcome.material) return;
+  const select = view.modelSelect;
+  if (!select || !outcome.material || view.modelsFor === outcome.material) return;
   const record = catalogue.materials[outcome.material];
   if (!record || !record.models) return;
   select.dataset.modelsFor = outcome.material;
+  view.modelsFor = outcome.material;
   for (const option of select.options) {
     if (!option.dataset.needs) continue;
     const has = record.models.includes(option.value);
@@ -92,6 +93,8 @@ function viewOf(form) {
     modelNode: section.querySelector('[data-model]'), materialNode: section.querySelector('[data-material]'), used: null,
     sourcesNode: section.querySelector('[data-sources]'),
     busyNode: section.querySelector('[data-busy]'), slow: false, ran: false, solveTimer: 0, solved: null,
+    // the model list, found once; modelsFor: the material its options were last marked for
+    modelSelect: form.querySelector('select[name=model]'), modelsFor: null,
   };
 }
 

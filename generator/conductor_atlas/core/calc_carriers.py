@@ -42,6 +42,7 @@ CAUTION = ("Free-electron estimates with the free-electron mass and σ = n e² �
            "the alkali and noble metals, rough for transition metals whose Fermi surfaces are far from a sphere.")
 
 
+# __pragma__ ('nokwargs')
 def read_current_density(outcome, inputs):
     """J [A/m^2] from the current density field, or from current / area; None when neither is given."""
     has_j = len(field_text(inputs, "current_density")) > 0
@@ -145,3 +146,4 @@ def calculate(inputs, catalogue):
                              "measured thermal conductivity of pure metals differ from L0 T / ρ")
     check_finite_results(outcome, "temperature")
     return outcome
+# __pragma__ ('kwargs')

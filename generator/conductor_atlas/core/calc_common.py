@@ -11,6 +11,7 @@ from conductor_atlas.core.outcome import add_error, add_sources, add_warning, ha
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_temperature
 
 
+# __pragma__ ('nokwargs')
 def material_resistivity(outcome, m, t, inputs):
     """ρ of m at t [K] by the model asked in inputs["model"] ("auto" by default), or None."""
     model = field_text(inputs, "model").lower()  # a tablet capitalises the first letter: "Linear"
@@ -57,6 +58,7 @@ def warn_if_molten(outcome, m, t):
         add_warning(outcome, temperature_text(t) + " is above the melting point of " + m["name"] + " ("
                     + temperature_text(m["melting_point"]) + "): there is no solid conductor at this temperature, "
                     "and the number shown is only the model carried past its end")
+# __pragma__ ('kwargs')
 
 
 def material_at_temperature(outcome, inputs, catalogue, check=None):
@@ -76,6 +78,7 @@ def material_at_temperature(outcome, inputs, catalogue, check=None):
     return [m, t, rho]
 
 
+# __pragma__ ('nokwargs')
 def resistivity_when_ready(outcome, m, t, inputs):
     """None when any field of the outcome has a problem; otherwise records m as the outcome's material
     and returns ρ [ohm*m] of m at t [K] by the model asked in the "model" field (material_resistivity:
@@ -179,3 +182,4 @@ def frequency_beyond_dc_conductivity(outcome, m, rho, f, field):
                   "frequency up to " + format_si(UNKNOWN_TAU_LIMIT_HZ, "Hz", 2))
         return True
     return False
+# __pragma__ ('kwargs')

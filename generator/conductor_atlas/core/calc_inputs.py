@@ -11,6 +11,7 @@ from conductor_atlas.core.typed_text import point_reading_note, portable_text
 from conductor_atlas.core.units import parse_quantity
 
 
+# __pragma__ ('nokwargs')
 def field_text(inputs, field):
     """The text typed in ``field``, or "" when the field is absent or empty."""
     if field in inputs:
@@ -19,6 +20,7 @@ def field_text(inputs, field):
             return ""
         return portable_text(str(value))
     return ""
+# __pragma__ ('kwargs')
 
 
 def read_quantity(outcome, inputs, field, kind, required, default_text=""):
@@ -42,10 +44,21 @@ def read_quantity(outcome, inputs, field, kind, required, default_text=""):
     return value
 
 
+# The last text note_point_reading read for each field and the note it gave: [text, note]. As
+# units.LAST_PARSED: on a keystroke in one field the other fields' texts are the same as before, so
+# their notes are not worked out again; one entry per field, so it never grows with use.
+LAST_NOTE = {}
+
+
+# __pragma__ ('nokwargs')
 def note_point_reading(outcome, text, field):
     """Say so when ``text`` was read with a decimal point before three digits ("1.500 m" is 1.5 m,
     1500 m to a reader of the thousands-point convention): typed_text.point_reading_note."""
-    note = point_reading_note(text, field)
+    if field in LAST_NOTE and LAST_NOTE[field][0] == text:
+        note = LAST_NOTE[field][1]
+    else:
+        note = point_reading_note(text, field)
+        LAST_NOTE[field] = [text, note]
     if len(note) > 0:
         add_warning(outcome, note)
 
@@ -99,3 +112,4 @@ def read_material(outcome, inputs, catalogue, field):
         return None
     add_material_used(outcome, m, trade_word_note(catalogue, text))
     return m
+# __pragma__ ('kwargs')

@@ -48,6 +48,7 @@ TRUSTED_SPAN = 10.0  # [K]
 ALPHA_SPREAD = 0.03  # [-]
 
 
+# __pragma__ ('nokwargs')
 def read_class(outcome, inputs):
     """The IEC 60228 class ("1", "2", "5", "6"), "" when empty, None when wrong (errors set)."""
     text = field_text(inputs, "conductor_class").strip()
@@ -288,3 +289,4 @@ def warn_about_sample(outcome, m, size, sample, t, klass):
         add_warning(outcome, "a stranded conductor's nominal area is a label: class " + klass + " conductors carry "
                              "less metal than the label, so the comparison with ρ20 / A is indicative; the standard's "
                              "maximum decides")
+# __pragma__ ('kwargs')

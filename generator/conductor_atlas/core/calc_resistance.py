@@ -53,6 +53,7 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
            "licensed practice.")
 
 
+# __pragma__ ('nokwargs')
 def ac_ratio(outcome, size, rho, f, mu_r, layers):
     """R_ac/R_dc of one isolated conductor of the size's shape, with its method (core.ac_layout; layers:
     core.clad_layers.clad_layers_at's list for a clad wire, else None)."""
@@ -141,3 +142,4 @@ def calculate(inputs, catalogue):
             add_result(outcome, "power_loss_ac", p_ac, "W", format_si(p_ac, "W", 4))
     check_finite_results(outcome, "length", CAUSES)
     return outcome
+# __pragma__ ('kwargs')

@@ -23,6 +23,7 @@ RESULT_LABELS = [
 ]
 CAUTION = "Values follow the named model and its sources; outside a model's range the result carries a warning."
 
+# __pragma__ ('nokwargs')
 def calculate(inputs, catalogue):
     """Resistivity of a material at a temperature by the model that fits there.
 
@@ -47,4 +48,5 @@ def calculate(inputs, catalogue):
         add_result(outcome, "temperature_coefficient", alpha, "1/K", format_number(alpha, 4) + " /K")
     check_finite_results(outcome, "temperature")
     return outcome
+# __pragma__ ('kwargs')
 

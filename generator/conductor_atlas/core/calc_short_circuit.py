@@ -52,6 +52,7 @@ SEARCH_SPAN = 1500.0  # [K]
 AGREEMENT = 0.02  # the integrated answer and IEC 60949's formula are expected to agree within 2 %
 
 
+# __pragma__ ('nokwargs')
 def iec_constants(m, catalogue):
     """[K [A*s^0.5/m^2], β [K], "copper" / "aluminium"] of IEC 60949 for the material, or None."""
     if is_copper(m, catalogue):
@@ -283,3 +284,4 @@ def limit_name(m):
     if m["melting_point"] > 0:
         return "its melting point"
     return "the search's upper bound"
+# __pragma__ ('kwargs')

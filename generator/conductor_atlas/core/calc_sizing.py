@@ -53,6 +53,7 @@ TWO_WIRE = ["2", "2-wire", "2 wire", "two-wire", "dc", "single-phase", "single p
 ONE_WIRE = ["1", "1-wire", "total"]
 
 
+# __pragma__ ('nokwargs')
 def read_conductors(outcome, inputs):
     """The circuit of the "conductors" field, or None with errors["conductors"] set.
 
@@ -213,3 +214,4 @@ def calculate(inputs, catalogue):
     if len(outcome["results"].keys()) == 0:
         outcome["warnings"] = []
     return outcome
+# __pragma__ ('kwargs')

@@ -47,6 +47,7 @@ CAUTION = ("An isolated straight conductor: proximity to other conductors, stran
            "AC resistance further. A physics estimate, not a cable rating.")
 
 
+# __pragma__ ('nokwargs')
 def half_thickness(size):
     """The depth the current must reach from the surface: the radius, or half a bar's thickness [m]."""
     if size["shape"] == "bar":
@@ -180,3 +181,4 @@ def mean_free_path_check(outcome, m, rho, t, delta):
     add_result(outcome, "mean_free_path", mfp, "m", format_si(mfp, "m", 3) + ", " + how)
     add_result(outcome, "path_ratio", ratio, "", format_number(ratio, 3))
     warn_if_anomalous(outcome, mfp, delta)
+# __pragma__ ('kwargs')

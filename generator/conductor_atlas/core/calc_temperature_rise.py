@@ -41,6 +41,7 @@ LINEAR_FROM = ZERO_CELSIUS - 50.0
 LINEAR_TO = ZERO_CELSIUS + 200.0
 
 
+# __pragma__ ('nokwargs')
 def read_k(outcome, inputs):
     """k [K] typed in the "k" field, or None when empty (or wrong: then errors["k"] is set).
 
@@ -200,3 +201,4 @@ def calculate(inputs, catalogue):
         add_warning(outcome, "R2 is below R1: the winding was colder at the second measurement")
     check_finite_results(outcome, "resistance_hot")
     return outcome
+# __pragma__ ('kwargs')

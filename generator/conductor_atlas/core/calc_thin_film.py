@@ -51,6 +51,7 @@ THICKNESS_MIN = 1e-10  # [m] below this the thickness is refused
 ONE_LAYER = 2.0e-10  # [m] about one atomic layer: copper's (111) spacing a/√3 = 0.209 nm (a = 0.3615 nm, Kittel ch. 1)
 
 
+# __pragma__ ('nokwargs')
 def read_fraction(outcome, inputs, field, what, default_text):
     """A ratio 0 <= x < 1 from ``field`` ("0.3" or "30 %"); None when empty and no default."""
     value = read_quantity(outcome, inputs, field, "ratio", False, default_text)
@@ -185,3 +186,4 @@ def calculate(inputs, catalogue):
     add_result(outcome, "sheet_resistance", rho_f / d, "Ω", format_si(rho_f / d, "Ω", 4) + " per square")
     check_finite_results(outcome, "thickness")
     return outcome
+# __pragma__ ('kwargs')

@@ -37,6 +37,7 @@ for _module in CALCULATOR_MODULES:
     CALCULATORS[_module.NAME] = _module
 
 
+# __pragma__ ('nokwargs')
 def calculator_names():
     """The registered names in alphabetical order."""
     names = []
@@ -59,3 +60,4 @@ def calculate(name, inputs, catalogue):
         add_material_range(outcome, module.calculate, inputs, catalogue)
     add_permeability_range(outcome, module.calculate, inputs, catalogue)
     return outcome
+# __pragma__ ('kwargs')

@@ -27,6 +27,7 @@ from conductor_atlas.core.errors import check_positive
 LORENZ_SOMMERFELD = math.pi * math.pi / 3.0 * (BOLTZMANN / ELEMENTARY_CHARGE) ** 2
 
 
+# __pragma__ ('nokwargs')
 def electron_density(density, molar_mass, valence):
     """Conduction-electron density of a free-electron metal.
 
@@ -93,6 +94,7 @@ def wigner_seitz_radius(n):
     """
     check_positive(n, "n", "electron density")
     return (3.0 / (4.0 * math.pi * n)) ** (1.0 / 3.0)
+# __pragma__ ('kwargs')
 
 
 def relaxation_time(rho, n, m=ELECTRON_MASS):
@@ -131,6 +133,7 @@ def relaxation_time(rho, n, m=ELECTRON_MASS):
     return m / (n * ELEMENTARY_CHARGE * ELEMENTARY_CHARGE * rho)
 
 
+# __pragma__ ('nokwargs')
 def fermi_wavenumber(n):
     """Fermi wavenumber of a free-electron gas, k_F = (3 pi^2 n)^(1/3), [1/m].
 
@@ -152,6 +155,7 @@ def fermi_wavenumber(n):
     """
     check_positive(n, "n", "electron density")
     return (3.0 * math.pi * math.pi * n) ** (1.0 / 3.0)
+# __pragma__ ('kwargs')
 
 
 def fermi_energy(n, m=ELECTRON_MASS):
@@ -270,6 +274,7 @@ def mean_free_path(rho, n, m=ELECTRON_MASS):
     return fermi_velocity(n, m) * relaxation_time(rho, n, m)
 
 
+# __pragma__ ('nokwargs')
 def rho_lambda_product(n):
     """Product of resistivity and mean free path, independent of temperature and impurities.
 
@@ -303,6 +308,7 @@ def rho_lambda_product(n):
     """
     k = fermi_wavenumber(n)
     return HBAR * k / (n * ELEMENTARY_CHARGE * ELEMENTARY_CHARGE)
+# __pragma__ ('kwargs')
 
 
 def mobility(tau, m=ELECTRON_MASS):
@@ -332,6 +338,7 @@ def mobility(tau, m=ELECTRON_MASS):
     return ELEMENTARY_CHARGE * tau / m
 
 
+# __pragma__ ('nokwargs')
 def drift_velocity(J, n):
     """Mean drift velocity of the electrons at current density J.
 
@@ -362,6 +369,7 @@ def drift_velocity(J, n):
     """
     check_positive(n, "n", "electron density")
     return J / (n * ELEMENTARY_CHARGE)
+# __pragma__ ('kwargs')
 
 
 def plasma_frequency(n, m=ELECTRON_MASS):

@@ -19,6 +19,7 @@ CLAD_BAR_MESSAGE = ("the AC/DC ratio of a clad wire is computed for round wire o
                     "not modelled here, and the averaged resistivity would be wrong at high frequency")
 
 
+# __pragma__ ('nokwargs')
 def is_clad(m):
     """True when material record m is a clad wire with a core and a cladding on record.
 
@@ -119,3 +120,4 @@ def clad_round_ratio(outcome, size, layers, f):
                     + " (" + layers[5] + "); it depends on the field and saturates, which moves the AC resistance "
                       "wherever the current still reaches the core")
     return ratio
+# __pragma__ ('kwargs')

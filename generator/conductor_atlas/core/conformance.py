@@ -17,6 +17,7 @@ IEC60228_BETA_ALUMINIUM = 228.0
 REFERENCE_TEMPERATURE = TWENTY_CELSIUS  # [K] the temperature conductor limits are given at
 
 
+# __pragma__ ('nokwargs')
 def iec60228_correction_factor(temperature, beta):
     """IEC 60228 Annex B temperature correction factor to 20 °C.
 
@@ -147,3 +148,4 @@ def neighbour_rows(areas, area):
         elif above < 0:
             above = a
     return [below, above]
+# __pragma__ ('kwargs')

@@ -44,6 +44,7 @@ LETTER_FORMS = {"a": "aA", "w": "wW", "g": "gG", "d": "dD", "i": "iIİı", "m": 
                 "r": "rR", "ø": "øØ", "⌀": "⌀"}
 
 
+# __pragma__ ('nokwargs')
 def all_in(text, characters):
     """True when ``text`` is not empty and each of its characters is one of ``characters``."""
     if len(text) == 0:
@@ -249,6 +250,7 @@ def usable_area(area, field):
     if not (area > 0):
         raise CoreError("the cross-section is too small to compute with (it rounds to zero)", field)
     return area
+# __pragma__ ('kwargs')
 
 
 # The last text parse_size read for each field and what it gave, kept by units.remember_field
@@ -276,6 +278,7 @@ def parse_size(text, field="size"):
     return size
 
 
+# __pragma__ ('nokwargs')
 def size_from_text(text, field):
     """parse_size without the memo (``text`` is a non-empty str)."""
     raw = normalise_text(text)
@@ -341,3 +344,4 @@ def next_awg(area):
             return n
         n -= 1
     return -99
+# __pragma__ ('kwargs')

@@ -26,6 +26,7 @@ _INV_SQRT2 = 1.0 / math.sqrt(2.0)
 KELVIN_SWITCH = 16.5
 
 
+# __pragma__ ('nokwargs')
 def _kelvin_series(x):
     # A&S 9.9.10, 9.9.11 and their term-by-term derivatives
     q = 0.25 * x * x  # (x/2)^2
@@ -253,3 +254,4 @@ def bei_prime(x):
     0.9982688465
     """
     return kelvin_functions(x)[3]
+# __pragma__ ('kwargs')

@@ -15,6 +15,7 @@ from conductor_atlas.core.text_match import name_key
 NO_LIMIT = 1000000
 
 
+# __pragma__ ('nokwargs')
 def add_at_distance(found, distance, name, needed):
     """Record ``name`` at ``distance`` in ``found`` = {"buckets": [names by distance], "best": {name:
     smallest distance}, "counts": [distinct names by best distance], "limit": int}.
@@ -246,6 +247,7 @@ def loose_match(catalogue, wanted):
     if ordered in catalogue["word_keys"]:
         return catalogue["word_keys"][ordered]
     return ""
+# __pragma__ ('kwargs')
 
 
 def find_material(catalogue, text, field="material"):

@@ -36,6 +36,10 @@ MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen, 
                     "(any case; the models of the chosen material are listed when another is typed)"]
 
 
+# Functions from here to the next "kwargs" pragma run for every temperature of an integral (the
+# short-circuit heat balance evaluates ρ at 65 points per integral): Transcrypt gives them no
+# keyword-argument prologue. Call them with positional arguments only (tests/core/test_subset.py).
+# __pragma__ ('nokwargs')
 def has_linear(m):
     return m["alpha"] != 0
 
@@ -95,6 +99,9 @@ def in_bg_range(m, t):
 
 def in_cvd_range(t):
     return t >= 73.15 and t <= 1123.15
+
+
+# __pragma__ ('kwargs')
 
 
 def available_models(m):
@@ -158,6 +165,8 @@ def cvd_ratio(m, t):
     return r_t / r_ref
 
 
+# (positional arguments only, as above)
+# __pragma__ ('nokwargs')
 def choose_model(m, t):
     """The model "auto" uses at temperature t [K].
 
@@ -189,6 +198,9 @@ def choose_model(m, t):
     if has_matthiessen(m):
         return "matthiessen"
     return "reference"
+
+
+# __pragma__ ('kwargs')
 
 
 def resistivity_or_none(m, t):
@@ -229,6 +241,8 @@ def within_model(found):
     return (found["model"] == "matthiessen" or found["model"] == "layers") and len(found["warnings"]) == 1
 
 
+# (positional arguments only, as above)
+# __pragma__ ('nokwargs')
 def model_key(m, t, model):
     """The model key ``model`` stands for at temperature t [K]: "auto" (or empty) is choose_model's pick."""
     if model == "auto" or len(model) == 0:
@@ -306,6 +320,9 @@ def model_rho(m, t, key, model):
     raise CoreError(model_choice_message(m, model), "model")
 
 
+# __pragma__ ('kwargs')
+
+
 def model_warnings(m, t, key):
     """What the answer of model ``key`` at t [K] must say beside its value: outside a model's span, an
     interpolated or extrapolated table, an estimate (Matthiessen's rule, layers in parallel)."""
@@ -367,7 +384,23 @@ def resistivity_at(m, t, model):
         label = matthiessen_label(m)
     elif key == "layers":
         label = layers_label(m)
-    return {"rho": rho, "model": key, "label": label, "warnings": model_warnings(m, t, key)}
+    return model_answer(rho, key, label, model_warnings(m, t, key))
+
+
+# resistivity_at's answer is read by key only (by the core, the pages and JSON): in JS a plain object
+# (the jsiter region), not a Transcrypt dict, whose eighteen hidden methods cost more to attach than
+# the rest of a linear model's answer (see core.outcome). Never call keys()/items() on it in the core.
+# __pragma__ ('jsiter')
+def model_answer(rho, key, label, warnings):
+    """{"rho": [ohm*m], "model": key, "label": text, "warnings": [str]}: resistivity_at's answer.
+
+    Examples
+    --------
+    >>> model_answer(1.7241e-8, "linear", "linear temperature-coefficient model", [])["model"]
+    'linear'
+    """
+    return {"rho": rho, "model": key, "label": label, "warnings": warnings}
+# __pragma__ ('nojsiter')
 
 
 COEFFICIENT_STEP = 0.5  # [K] half-width of the central difference for the local coefficient

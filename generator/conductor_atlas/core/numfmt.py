@@ -21,6 +21,7 @@ SI_PREFIXES = [
 ]
 
 
+# __pragma__ ('nokwargs')
 def is_finite(x):
     """True when x is a real, finite number (JS has no math.isfinite under Transcrypt)."""
     return x - x == 0
@@ -156,6 +157,7 @@ def superscript(n):
         else:
             out = out + SUPERSCRIPT_DIGITS["0123456789".find(ch)]
     return out
+# __pragma__ ('kwargs')
 
 
 def format_number(x, sig=4, keep_zeros=False):
@@ -206,6 +208,7 @@ def format_plain(x, sig=6):
     return prefix + trim_fraction(place_point(digits, 1)) + "e" + str(point - 1)
 
 
+# __pragma__ ('nokwargs')
 def format_fixed(x, decimals):
     """Format x with a fixed number of decimals (e.g. temperatures in a table)."""
     if not is_finite(x):
@@ -222,6 +225,7 @@ def format_fixed(x, decimals):
     if x < 0 and n != 0:
         return "−" + text
     return text
+# __pragma__ ('kwargs')
 
 
 def format_si(x, unit, sig=4):
@@ -243,6 +247,8 @@ def format_si(x, unit, sig=4):
     return format_number(scaled, sig) + " " + chosen[1] + unit
 
 
+# __pragma__ ('nokwargs')
 def temperature_text(t):
     """A temperature in K as text a person reads: "90.0 °C (363.15 K)"."""
     return format_fixed(t - ZERO_CELSIUS, 1) + " °C (" + format_fixed(t, 2) + " K)"
+# __pragma__ ('kwargs')

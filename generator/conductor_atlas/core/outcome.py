@@ -18,6 +18,7 @@ the fields are in core.calc_inputs).
 # thin-film update). In CPython they are ordinary dicts. Never call keys()/items() on them in the
 # core: "results" and "errors", which the core walks with keys(), stay Transcrypt dicts.
 # __pragma__ ('jsiter')
+# __pragma__ ('nokwargs')
 def keyed_record():
     """An empty record filled and read by key only ({} in CPython, a plain object in JS)."""
     return {}
@@ -84,6 +85,7 @@ def add_sources(outcome, keys):
 
 def has_errors(outcome):
     return len(outcome["errors"].keys()) > 0
+# __pragma__ ('kwargs')
 
 
 def check_finite_results(outcome, field, causes=None):

@@ -19,6 +19,7 @@ K_COPPER = 234.5
 K_ALUMINIUM = 225.0
 
 
+# __pragma__ ('nokwargs')
 def inferred_zero_from_alpha(alpha, T_ref):
     """Resistance-method constant k from a material's temperature coefficient.
 
@@ -51,6 +52,7 @@ def inferred_zero_from_alpha(alpha, T_ref):
     check_positive(alpha, "alpha", "temperature coefficient")
     check_positive(T_ref, "T_ref", "reference temperature")
     return 1.0 / alpha - (T_ref - ZERO_CELSIUS)
+# __pragma__ ('kwargs')
 
 
 def resistance_method_temperature(R1, T1, R2, k=K_COPPER):
@@ -142,6 +144,7 @@ def temperature_rise(R1, T1, R2, T_coolant, k=K_COPPER):
     return resistance_method_temperature(R1, T1, R2, k) - T_coolant
 
 
+# __pragma__ ('nokwargs')
 def equal_resistance_area_ratio(rho1, rho2):
     """Cross-section ratio A2 / A1 for equal resistance at equal length: A2/A1 = rho2/rho1.
 
@@ -230,6 +233,7 @@ def equal_resistance_mass_ratio(rho1, density1, rho2, density2):
     check_positive(density1, "density1", "density")
     check_positive(density2, "density2", "density")
     return equal_resistance_area_ratio(rho1, rho2) * density2 / density1
+# __pragma__ ('kwargs')
 
 
 def voltage_drop_min_area(rho, current, route_length, max_drop, wires=2.0):

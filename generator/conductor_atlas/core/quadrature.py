@@ -9,6 +9,7 @@ import math
 from conductor_atlas.core.errors import CoreError
 
 
+# __pragma__ ('nokwargs')
 def legendre_with_slope(n, x):
     """[P_n(x), P_n'(x)] for |x| < 1 by the three-term recurrence (n + 1) P_{n+1} = (2n + 1) x P_n - n P_{n-1}
     and P_n' = n (x P_n - P_{n-1}) / (x^2 - 1) (Abramowitz & Stegun eqs. 22.7.10 and 22.8.5).
@@ -78,6 +79,7 @@ def gauss_legendre(n):
         nodes.append(-x)
         weights.append(2.0 / ((1.0 - x * x) * dp * dp))
     return [nodes, weights]
+# __pragma__ ('kwargs')
 
 
 # the 20-point rule on [-1, 1]

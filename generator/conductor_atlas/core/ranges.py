@@ -18,6 +18,7 @@ from conductor_atlas.core.outcome import add_warning
 RELATIVE_EPSILON = 1e-12  # a result that moves less than this between the runs has no range
 
 
+# __pragma__ ('nokwargs')
 def has_range(m):
     """True when the material record carries a recorded ρ range."""
     return m["rho_low_ratio"] > 0 and m["rho_high_ratio"] > 0
@@ -253,3 +254,4 @@ def add_material_range(outcome, calculate, inputs, catalogue):
                         + " to " + format_number(m["rho_high_ratio"], 4) + " × the nominal value): each result "
                         "that depends on it shows low – high, computed at the range's ends, which are taken to keep "
                         "their relative width at every temperature")
+# __pragma__ ('kwargs')

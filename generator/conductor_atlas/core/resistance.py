@@ -10,6 +10,7 @@ IACS_RESISTIVITY = 1.0 / 58.0 * 1e-6  # [ohm*m] = 1.72414e-8
 IACS_REFERENCE_TEMPERATURE = TWENTY_CELSIUS  # [K]
 
 
+# __pragma__ ('nokwargs')
 def resistivity_linear(temperature, rho_ref, alpha_ref, t_ref):
     """Resistivity from the linear temperature model around a reference temperature.
 
@@ -106,3 +107,4 @@ def resistivity_from_iacs(percent):
     2.8265
     """
     return IACS_RESISTIVITY * 100.0 / percent
+# __pragma__ ('kwargs')

@@ -108,14 +108,17 @@ def osa_distance(a, b, limit):
     lb = len(b)
     if abs(la - lb) > limit:
         return limit + 1
+    # three rows of the table, made once and reused in turn (no new list per row)
     before = []
     previous = []
+    current = []
     for j in range(lb + 1):
         previous.append(j)
         before.append(j)
+        current.append(j)
     for i in range(1, la + 1):
         ca = a[i - 1]
-        current = [i]
+        current[0] = i
         row_min = i
         for j in range(1, lb + 1):
             cb = b[j - 1]
@@ -128,13 +131,15 @@ def osa_distance(a, b, limit):
                 best = current[j - 1] + 1
             if i > 1 and j > 1 and ca == b[j - 2] and a[i - 2] == cb and before[j - 2] + 1 < best:
                 best = before[j - 2] + 1
-            current.append(best)
+            current[j] = best
             if best < row_min:
                 row_min = best
         if row_min > limit:
             return limit + 1
+        spare = before
         before = previous
         previous = current
+        current = spare
     result = previous[lb]
     if result > limit:
         return limit + 1

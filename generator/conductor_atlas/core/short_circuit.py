@@ -27,6 +27,7 @@ IEC60949_BETA_ALUMINIUM = 228.0
 SIMPSON_PANELS = 64  # even; Simpson's rule on 1/ρ over ≤ 1000 K is far below 1e-6 relative for linear ρ
 
 
+# __pragma__ ('nokwargs')
 def check_squarable(x, field, what):
     """CoreError unless x is finite, above 0, and x² neither underflows to 0 nor overflows (I², S² appear).
 
@@ -191,3 +192,4 @@ def linear_heat_integral(volumetric_heat, rho_ref, alpha, t_ref, theta_lo, theta
     rho_lo = rho_ref * (1.0 + alpha * (theta_lo - t_ref))
     rho_hi = rho_ref * (1.0 + alpha * (theta_hi - t_ref))
     return volumetric_heat / (rho_ref * alpha) * math.log(rho_hi / rho_lo)
+# __pragma__ ('kwargs')

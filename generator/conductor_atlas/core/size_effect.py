@@ -40,10 +40,12 @@ _cos = math.cos
 _exp = math.exp
 
 
+# __pragma__ ('nokwargs')
 def _check(kappa, p):
     check_positive(kappa, "kappa", "thickness over mean free path")
     if not (p >= 0.0 and p < 1.0):
         raise CoreError("specularity must be at least 0 and below 1", "p")
+# __pragma__ ('kwargs')
 
 
 def _graded_edges(lo_scale, hi_scale, lo_floor=0.01, hi_floor=0.01):
@@ -75,6 +77,7 @@ def _graded_edges(lo_scale, hi_scale, lo_floor=0.01, hi_floor=0.01):
     return left
 
 
+# __pragma__ ('nokwargs')
 def _outer_edges(alpha):
     # the combined model's phi integrand is smooth (even in phi) at phi = 0; its only
     # boundary layer is at phi = pi/2, of width ~alpha: one panel [0, pi/4], then halving
@@ -89,6 +92,7 @@ def _outer_edges(alpha):
         if x >= 0.25 * math.pi:
             edges.append(x)
     return edges
+# __pragma__ ('kwargs')
 
 
 def _integrate(func, args, edges, nodes=None, weights=None):
@@ -106,6 +110,7 @@ def _integrate(func, args, edges, nodes=None, weights=None):
     return total
 
 
+# __pragma__ ('nokwargs')
 def _fs_integral(kappa, p):
     # integral from 1 to inf of (1/t^3 - 1/t^5)(1 - e^(-kappa t))/(1 - p e^(-kappa t)) dt;
     # with t = 1/sin(theta): (1/t^3 - 1/t^5) dt -> sin(theta) cos^3(theta) d(theta) on [0, pi/2].
@@ -126,6 +131,7 @@ def _fs_integral(kappa, p):
                 part += GL_WEIGHTS[i] * (u * s * s * s * (1.0 - e) / (1.0 - p * e))
         total += half * part
     return total
+# __pragma__ ('kwargs')
 
 
 def fuchs_sondheimer_ratio(kappa, p=0.0):
@@ -206,6 +212,7 @@ def fuchs_sondheimer_thick_film_ratio(kappa, p=0.0):
     return 1.0 + 3.0 * (1.0 - p) / (8.0 * kappa)
 
 
+# __pragma__ ('nokwargs')
 def mayadas_shatzkes_alpha(mean_free_path, grain_size, R):
     """Grain-boundary parameter of Mayadas-Shatzkes, alpha = (l / D) R / (1 - R).
 
@@ -391,3 +398,4 @@ def film_resistivity_ratio(kappa, p, alpha):
     surface = _integrate(_ms_phi_integrand, [kappa, p, alpha], _outer_edges(alpha),
                          _GL10_NODES, _GL10_WEIGHTS)
     return 1.0 / (grains - 6.0 / (math.pi * kappa) * (1.0 - p) * surface)
+# __pragma__ ('kwargs')

@@ -104,6 +104,7 @@ def surface_resistance(rho, f, mu_r=1.0):
     return rho / skin_depth(rho, f, mu_r)
 
 
+# __pragma__ ('nokwargs')
 def kelvin_resistance_ratio(x):
     """AC/DC resistance ratio of an isolated solid round wire, as a function of x.
 
@@ -153,6 +154,7 @@ def kelvin_resistance_ratio(x):
         return x / (2.0 * _SQRT2) + 0.25 + 3.0 / (16.0 * _SQRT2 * x)
     v = kelvin_scaled(x)
     return 0.5 * x * (v[0] * v[3] - v[1] * v[2]) / (v[2] * v[2] + v[3] * v[3])
+# __pragma__ ('kwargs')
 
 
 def round_wire_resistance_ratio(radius, rho, f, mu_r=1.0):
@@ -188,6 +190,7 @@ def round_wire_resistance_ratio(radius, rho, f, mu_r=1.0):
     return kelvin_resistance_ratio(_SQRT2 * radius / skin_depth(rho, f, mu_r))
 
 
+# __pragma__ ('nokwargs')
 def _plate_factor(u):
     # (u/2)(sinh u + sin u)/(cosh u - cos u), written without cancellation or overflow
     if u < 2.0:
@@ -205,6 +208,7 @@ def _plate_factor(u):
         return 0.5 * u * num / den
     q = math.exp(-u)
     return 0.5 * u * (1.0 - q * q + 2.0 * q * math.sin(u)) / (1.0 + q * q - 2.0 * q * math.cos(u))
+# __pragma__ ('kwargs')
 
 
 def plate_resistance_ratio(thickness, rho, f, mu_r=1.0):

@@ -18,6 +18,7 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.quadrature import GL_NODES, GL_WEIGHTS
 
 
+# __pragma__ ('nokwargs')
 def _finite(x):
     return x - x == 0
 
@@ -255,6 +256,7 @@ def bg_warnings(T, theta):
         out.append("above about 2 Theta thermal expansion, anharmonicity and thermal "
                    "vacancies raise the resistivity above the model's linear rise")
     return out
+# __pragma__ ('kwargs')
 
 
 # --------------------------------------------------------------------------------------
@@ -384,6 +386,7 @@ def callendar_van_dusen_temperature(R, R0, A=CVD_A, B=CVD_B, C=CVD_C):
     return T
 
 
+# __pragma__ ('nokwargs')
 def cvd_warnings(T):
     """Warnings for a Callendar-Van Dusen evaluation at T [K] (range -200..850 degC).
 
@@ -490,3 +493,4 @@ def table_warnings(T, temperatures):
     if T > hi:
         out.append("extrapolated above the highest temperature in the table")
     return out
+# __pragma__ ('kwargs')

@@ -14,6 +14,7 @@ NAME_SPACES = ("\t\n\x0b\x0c\r\x1c\x1d\x1e\x1f \x85\xa0\u1680\u2000\u2001\u2002\
                "\u2006\u2007\u2008\u2009\u200a\u2028\u2029\u202f\u205f\u3000")
 
 
+# __pragma__ ('nokwargs')
 def name_key(text):
     """The key a material id, alias or name is known by: lower case; full-width forms (U+FF01-U+FF5E)
     as their ASCII letters; invisible characters (INVISIBLE), controls and characters beyond U+FFFF
@@ -41,3 +42,4 @@ def name_key(text):
         space = False
         out.append(ch)
     return "".join(out).lower()
+# __pragma__ ('kwargs')

@@ -16,6 +16,7 @@ SPACE_CHARACTERS = ("\t\n\x0b\x0c\r\x1c\x1d\x1e\x1f \x85\xa0\u1680\u2000\u2001\u
                     "\u2006\u2007\u2008\u2009\u200a\u2028\u2029\u202f\u205f\u3000")
 
 
+# __pragma__ ('nokwargs')
 def is_space(ch):
     """True when the one character ``ch`` is in SPACE_CHARACTERS."""
     return SPACE_CHARACTERS.find(ch) >= 0
@@ -330,3 +331,4 @@ def point_reading_note(text, field):
         return ""
     return (field + ": “" + number_text + "” is read with a decimal point as " + runs[0] + "."
             + without_trailing_zeros(runs[1]) + "; for " + runs[0] + runs[1] + " write " + runs[0] + runs[1])
+# __pragma__ ('kwargs')

@@ -153,6 +153,7 @@ KIND_WORDS = {
 }
 
 
+# __pragma__ ('nokwargs')
 def joined_spaces(unit):
     """``unit`` with each run of spaces dropped when a "*" or "/" is next to it and made one "*"
     otherwise ("A / mm2" -> "A/mm2", "ohm  m" -> "ohm*m"): what the former patterns
@@ -229,6 +230,7 @@ def remember_field(memo, key, typed, value, problem):
         memo[key] = [typed, value, "", ""]
     else:
         memo[key] = [typed, None, problem.message, problem.field]
+# __pragma__ ('kwargs')
 
 
 def parse_quantity(text, kind, field="", default_unit=""):
@@ -263,6 +265,7 @@ def parse_quantity(text, kind, field="", default_unit=""):
     return si
 
 
+# __pragma__ ('nokwargs')
 def quantity_in_si(text, kind, field, default_unit):
     """parse_quantity without the memo (``text`` is a str)."""
     cleaned = normalise_text(text)
@@ -292,3 +295,4 @@ def quantity_in_si(text, kind, field, default_unit):
     if not (si - si == 0):
         raise CoreError("“" + text + "” is too large to compute with", field)
     return si
+# __pragma__ ('kwargs')
