@@ -40,6 +40,25 @@ def test_stored_solutions_are_current():
     assert not missing, f"{len(missing)} bar solutions not stored (a changed ρ?); " + hint
 
 
+def test_the_digest_follows_the_code_not_its_comments_or_docstrings(tmp_path, monkeypatch):
+    """A comment, a docstring or a blank line added to a solver file keeps the stored solutions; a change
+    to an expression does not."""
+    for name in bar_table.SOLVER_FILES:
+        (tmp_path / name).write_text((bar_table.CORE_DIR / name).read_text(encoding="utf-8"), encoding="utf-8")
+    monkeypatch.setattr(bar_table, "CORE_DIR", tmp_path)
+    before = bar_table.solver_digest()
+    solver = tmp_path / "filament_solver.py"
+    source = solver.read_text(encoding="utf-8")
+    lines = ('"""Another module docstring."""\n# a comment\n\n' + source.split('"""', 2)[2]).split("\n")
+    first_def = next(i for i, line in enumerate(lines) if line.startswith("def ") and line.endswith("):"))
+    lines[first_def:first_def + 1] = ["# a note", lines[first_def], '    """A docstring."""', ""]
+    solver.write_text("\n".join(lines), encoding="utf-8")
+    assert bar_table.solver_digest() == before
+    constants = tmp_path / "constants.py"
+    constants.write_text(constants.read_text(encoding="utf-8").replace("1.25663706212e-6", "1.25663706213e-6", 1), encoding="utf-8")
+    assert bar_table.solver_digest() != before
+
+
 @pytest.mark.parametrize("width, thickness", [(0.02, 0.005), (0.04, 0.005), (0.05, 0.005)])
 def test_stored_solution_equals_a_fresh_solve(width, thickness):
     """Cheap cells (5 mm bars at 50 Hz, about 0.1 s each) solved again: identical to the stored ones."""

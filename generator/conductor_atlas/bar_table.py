@@ -9,7 +9,7 @@ at 400 Hz: bench/filament_speed.py), about 35 s for one material's 36 cells, so:
   filament method takes the field as in free space) and not clad (a clad bar is refused by the
   calculator);
 - solutions are kept in ``bar_ratios.json`` beside this module, keyed by the exact (w, t, ρ, f) and
-  stamped with a digest of the solver's source files (``SOLVER_FILES``). A stored solution is used only
+  stamped with a digest of the solver's code (``SOLVER_FILES``; comments and docstrings do not count). A stored solution is used only
   while the digest matches; anything else (an edited ρ, your own material, a changed solver) is solved
   in the build. ``python -m conductor_atlas.bar_table --write`` solves the shipped set again and
   rewrites the file; tests/test_bar_table.py fails while the file is stale.
@@ -23,8 +23,10 @@ from __future__ import annotations
 import argparse
 import functools
 import hashlib
+import io
 import json
 import sys
+import tokenize
 from pathlib import Path
 
 from conductor_atlas.core import filament_solver
@@ -46,10 +48,33 @@ BAR_FREQUENCIES = (50.0, 60.0, 400.0)  # power frequencies and aircraft/ground-p
 BAR_CLASSES = ("conductor-grade", "copper-alloy")
 
 
+def code_tokens(source: str) -> list[tuple[int, str]]:
+    """The (type, text) tokens of Python source that make its code: comments, blank lines and strings
+    that stand alone as a statement (docstrings) are left out, so editing those keeps the digest."""
+    tokens = [t for t in tokenize.generate_tokens(io.StringIO(source).readline)
+              if t.type not in (tokenize.COMMENT, tokenize.NL)]
+    kept = []
+    statement_start = True
+    skip_newline = False
+    for i, token in enumerate(tokens):
+        alone = (token.type == tokenize.STRING and statement_start and i + 1 < len(tokens)
+                 and tokens[i + 1].type in (tokenize.NEWLINE, tokenize.ENDMARKER))
+        if alone:
+            skip_newline = True  # the statement's end goes with it
+            continue
+        if not (skip_newline and token.type == tokenize.NEWLINE):
+            kept.append((token.type, token.string))
+        skip_newline = False
+        statement_start = token.type in (tokenize.NEWLINE, tokenize.INDENT, tokenize.DEDENT)
+    return kept
+
+
 def solver_digest() -> str:
+    """SHA-256 of the code tokens of SOLVER_FILES (code_tokens: a comment or docstring edit keeps it)."""
     digest = hashlib.sha256()
     for name in SOLVER_FILES:
-        digest.update(name.encode() + b"\0" + (CORE_DIR / name).read_bytes())
+        source = (CORE_DIR / name).read_text(encoding="utf-8")
+        digest.update(name.encode() + b"\0" + repr(code_tokens(source)).encode() + b"\0")
     return digest.hexdigest()
 
 
