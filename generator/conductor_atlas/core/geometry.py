@@ -159,7 +159,13 @@ def bar_parts(text):
 
 
 def awg_number(name):
-    """AWG gauge text -> gauge number n ("4/0" -> -3, "1/0" -> 0, "0000" -> -3, "12" -> 12)."""
+    """AWG gauge text -> gauge number n ("4/0" -> -3, "1/0" -> 0, "0000" -> -3, "12" -> 12).
+
+    Examples
+    --------
+    >>> awg_number("4/0"), awg_number("0000"), awg_number("1/0"), awg_number("12")
+    (-3, -3, 0, 12)
+    """
     text = name.strip()
     for i in range(len(AWG_NAMES)):
         if text == AWG_NAMES[i]:
@@ -175,7 +181,13 @@ def awg_number(name):
 
 
 def awg_name(n):
-    """Gauge number -> text (-3 -> "4/0", 0 -> "1/0", -6 -> "7/0", 12 -> "12")."""
+    """Gauge number -> text (-3 -> "4/0", 0 -> "1/0", -6 -> "7/0", 12 -> "12").
+
+    Examples
+    --------
+    >>> awg_name(-3), awg_name(0), awg_name(12)
+    ('4/0', '1/0', '12')
+    """
     if n <= 0:
         return str(1 - n) + "/0"
     return str(n)
@@ -185,6 +197,13 @@ def awg_diameter_exact(n):
     """Diameter of AWG gauge n from the defining geometric series, [m].
 
     d_n = 0.005 in * 92**((36 - n) / 39)   (ASTM B258-18, section 4; 4/0 is n = -3)
+
+    Examples
+    --------
+    4/0 is the series' start, 0.46 in = 11.684 mm exactly (ASTM B258):
+
+    >>> round(awg_diameter_exact(-3) * 1e3, 9)
+    11.684
     """
     return 0.005 * INCH * math.pow(92.0, (36.0 - n) / 39.0)
 
@@ -194,6 +213,13 @@ def awg_diameter(n):
 
     The exact series value rounded to the nearest 0.1 mil (0.0001 in), as the standard's table
     gives it for gauges 4/0 to 56 (e.g. 4/0: 0.4600 in, 10: 0.1019 in, 30: 0.0100 in).
+
+    Examples
+    --------
+    AWG 10: 0.1019 in (101.9 mil), as ASTM B258's table prints (from memory):
+
+    >>> round(awg_diameter(10) / 0.0254 * 1e3, 6)
+    101.9
     """
     if n < -3 or n > 56:
         raise CoreError("AWG gauges run from 4/0 to 56; found " + awg_name(n), "size")
@@ -203,18 +229,42 @@ def awg_diameter(n):
 
 
 def awg_area(n):
-    """Cross-section of a solid round AWG wire from its nominal diameter, [m^2]: A = π d² / 4."""
+    """Cross-section of a solid round AWG wire from its nominal diameter, [m^2]: A = π d² / 4.
+
+    Examples
+    --------
+    AWG 10: 5.261 mm^2, as ASTM B258's table prints (10 380 cmil; from memory):
+
+    >>> round(awg_area(10) * 1e6, 3)
+    5.261
+    """
     d = awg_diameter(n)
     return math.pi * d * d / 4.0
 
 
 def round_area(diameter):
-    """Area of a round conductor, A = π d² / 4 [m^2]; diameter [m]."""
+    """Area of a round conductor, A = π d² / 4 [m^2]; diameter [m].
+
+    Examples
+    --------
+    A 1.6 mm wire: pi 1.6^2 / 4 = 2.0106 mm^2 (by hand):
+
+    >>> round(round_area(1.6e-3) * 1e6, 4)
+    2.0106
+    """
     return math.pi * diameter * diameter / 4.0
 
 
 def diameter_from_area(area):
-    """Diameter of the round conductor of a given area, d = sqrt(4 A / π) [m]; area [m^2]."""
+    """Diameter of the round conductor of a given area, d = sqrt(4 A / π) [m]; area [m^2].
+
+    Examples
+    --------
+    2.5 mm^2 solid: sqrt(10 / pi) = 1.784 mm (by hand):
+
+    >>> round(diameter_from_area(2.5e-6) * 1e3, 3)
+    1.784
+    """
     return math.sqrt(4.0 * area / math.pi)
 
 
@@ -325,6 +375,13 @@ def next_metric_size(area):
     """Smallest IEC 60228 nominal size (mm², as a float) whose nominal area is >= area [m^2].
 
     Returns -1.0 when the area exceeds the largest listed size.
+
+    Examples
+    --------
+    1.999 mm^2 needed: 2.5 mm^2 is the next size of the IEC 60228 series (1.5, 2.5, 4, ...):
+
+    >>> next_metric_size(1.999e-6), next_metric_size(1e-2)
+    (2.5, -1.0)
     """
     needed = area * 1e6
     for size in IEC60228_SIZES_MM2:
@@ -337,6 +394,13 @@ def next_awg(area):
     """Largest AWG gauge number (thinnest wire) whose nominal area is >= area [m^2].
 
     Returns -99 when even 4/0 is too small (use kcmil sizes or parallel conductors).
+
+    Examples
+    --------
+    2.0 mm^2 needed: AWG 14 (2.08 mm^2 by ASTM B258) is the thinnest gauge that has it:
+
+    >>> next_awg(2.0e-6), next_awg(5e-4)
+    (14, -99)
     """
     n = 56
     while n >= -3:
