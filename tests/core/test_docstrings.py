@@ -29,6 +29,9 @@ EXAMPLES_REQUIRED = {
                  "diameter_from_area", "next_metric_size", "next_awg"],
     "material_models": ["cvd_ratio", "choose_model", "resistivity_or_none", "within_model", "resistivity_at",
                         "local_temperature_coefficient"],
+    "filament_inductance": ["rectangle_log_gmd_exact", "rectangle_log_gmd_far", "rectangle_log_gmd", "annulus_log_gmd"],
+    "filament_solver": ["skin_depth_mu0", "graded_cells", "bar_group_solution", "bar_pair_solution",
+                        "round_layers_solution"],
 }
 
 # A unit in brackets: after a space, a parenthesis or the line start, no space inside. Data-shape

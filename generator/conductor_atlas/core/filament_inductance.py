@@ -94,6 +94,13 @@ def rectangle_log_gmd_exact(xa, ya, wa, ha, xb, yb, wb, hb):
        applications to more complicated geometries", J. Res. NBS 69C (2), 127-137 (1965),
        eq. (14) and (20) (from memory; the formula here is re-derived and tested).
     2. Grover, F. W., Inductance Calculations, Dover 1946, ch. 3 (geometric mean distances).
+
+    Examples
+    --------
+    A square with itself: GMD = 0.447049 s, Maxwell's 0.44705 s (Grover 1946, ch. 3; from memory):
+
+    >>> round(math.exp(rectangle_log_gmd_exact(0.0, 0.0, 1.0, 1.0, 0.0, 0.0, 1.0, 1.0)), 6)
+    0.447049
     """
     xs = _double_sum_pairs(xa - 0.5 * wa, xa + 0.5 * wa, xb - 0.5 * wb, xb + 0.5 * wb)
     ys = _double_sum_pairs(ya - 0.5 * ha, ya + 0.5 * ha, yb - 0.5 * hb, yb + 0.5 * hb)
@@ -120,6 +127,16 @@ def rectangle_log_gmd_far(xa, ya, wa, ha, xb, yb, wb, hb):
     Taylor expansion of the harmonic function ln r about the centre offset, averaged over the
     difference of two uniform distributions (its odd moments vanish, and ln r being harmonic
     makes f_yy = -f_xx and f_yyyy = -f_xxyy = f_xxxx). Error of order (s / D)^6, s the largest side.
+
+    Examples
+    --------
+    Two 1 mm squares 10 mm apart: the expansion and the closed form agree to 3e-11; both lie
+    8e-7 above ln(10 mm), the GMD of two points (by hand, ln 0.01 = -4.6051702):
+
+    >>> far = rectangle_log_gmd_far(0.0, 0.0, 1e-3, 1e-3, 0.01, 0.0, 1e-3, 1e-3)
+    >>> exact = rectangle_log_gmd_exact(0.0, 0.0, 1e-3, 1e-3, 0.01, 0.0, 1e-3, 1e-3)
+    >>> abs(far - exact) < 3e-11, round(far, 7)
+    (True, -4.6051694)
     """
     dx = xb - xa
     dy = yb - ya
@@ -149,6 +166,16 @@ def rectangle_log_gmd(xa, ya, wa, ha, xb, yb, wb, hb):
 
     Arguments as rectangle_log_gmd_exact (centres and sides, [m]). The far-field expansion is used
     where the centre distance exceeds FAR_FIELD_RATIO times the largest side of either rectangle.
+
+    Examples
+    --------
+    The square with itself by the closed form (Maxwell's 0.44705 s), two small squares far apart by
+    the expansion (their centre distance, 1 m):
+
+    >>> round(math.exp(rectangle_log_gmd(0.0, 0.0, 0.01, 0.01, 0.0, 0.0, 0.01, 0.01)) / 0.01, 5)
+    0.44705
+    >>> abs(rectangle_log_gmd(0.0, 0.0, 1e-3, 1e-3, 1.0, 0.0, 1e-3, 1e-3)) < 1e-9
+    True
     """
     dx = xb - xa
     dy = yb - ya
@@ -212,6 +239,17 @@ def annulus_log_gmd(a1, a2, b1, b2):
     ----------
     1. Grover, F. W., Inductance Calculations, Dover 1946, ch. 3: the GMD of a point from a ring
        (outside it: its centre distance; inside: the ring's radius) and of an area from itself.
+
+    Examples
+    --------
+    A disk of 1 mm radius with itself: GMD = e^(-1/4) mm = 0.7788 mm (Grover 1946, ch. 3); a disk
+    inside a ring of radii 2 and 3 mm: by hand (b2^2 ln b2 - b1^2 ln b1) / (b2^2 - b1^2) - 1/2 =
+    -5.98477 (the ring's mean of ln r, by Gauss's mean value):
+
+    >>> round(math.exp(annulus_log_gmd(0.0, 1e-3, 0.0, 1e-3)) * 1e3, 4)
+    0.7788
+    >>> round(annulus_log_gmd(0.0, 1e-3, 2e-3, 3e-3), 5)
+    -5.98477
     """
     na = 0.5 * (a2 * a2 - a1 * a1)
     nb = 0.5 * (b2 * b2 - b1 * b1)

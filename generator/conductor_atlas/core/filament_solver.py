@@ -64,7 +64,16 @@ def _check_positive(x, field, what):
 
 
 def skin_depth_mu0(rho, f):
-    """delta = sqrt(rho / (pi f mu_0)) [m] of a non-magnetic conductor (rho [ohm m], f [Hz])."""
+    """delta = sqrt(rho / (pi f mu_0)) [m] of a non-magnetic conductor (rho [ohm m], f [Hz]).
+
+    Examples
+    --------
+    IEC 60028 copper at 50 Hz: 9.35 mm, the same as core.skin_effect.skin_depth with mu_r = 1 (and the
+    9.3 mm of handbook tables for copper at 50 Hz, from memory):
+
+    >>> round(skin_depth_mu0(1.7241e-8, 50.0) * 1e3, 2)
+    9.35
+    """
     return _sqrt(rho / (_pi * f * MU_0))
 
 
@@ -129,6 +138,14 @@ def graded_cells(lo, hi, fine_lo, fine_hi, delta, level):
 
     Exponential stretching from each fine end (both: each half from its own end), the same map at
     every level with the cell count proportional to level (see FINE_DEPTH).
+
+    Examples
+    --------
+    The cells cover lo..hi exactly, the finest at the fine end:
+
+    >>> cells = graded_cells(0.0, 1e-3, True, False, 1e-4, 1)
+    >>> round(sum([c[1] for c in cells]) * 1e3, 12), cells[0][1] < cells[len(cells) - 1][1]
+    (1.0, True)
     """
     edges = graded_edges(lo, hi, fine_lo, fine_hi, delta, level)
     cells = []
@@ -510,6 +527,14 @@ def bar_group_solution(width, thickness, count, gap, rho, f):
     -----
     Isolated group (no return conductor nearby, the phases far away), non-magnetic, straight.
     Solved on a quarter of the cross-section (mirror symmetry across both axes of the group).
+
+    Examples
+    --------
+    One 100 x 10 mm copper bar at 50 Hz: 1.198, as the scikit-fem solution of the same section gives
+    (1.19818, tests/core/test_filament_solver.py; about 1.2 in busbar handbooks' skin-effect charts):
+
+    >>> round(bar_group_solution(0.1, 0.01, 1, 0.0, 1.7241e-8, 50.0)["ratio"], 3)
+    1.198
     """
     _check_inputs(width, thickness, rho, f)
     if not (count >= 1 and count <= 8 and math.floor(count) == count):
@@ -566,6 +591,14 @@ def bar_pair_solution(width, thickness, spacing, rho, f):
     -----
     Solved on a quarter: mirror across the width's centre line (same current) and across the
     plane between the bars (opposite current).
+
+    Examples
+    --------
+    A go-and-return pair of 100 x 10 mm copper bars at 30 mm centres, 50 Hz: 1.086 per bar, as the
+    scikit-fem solution gives (1.08606, tests/core/test_filament_solver.py):
+
+    >>> round(bar_pair_solution(0.1, 0.01, 0.03, 1.7241e-8, 50.0)["ratio"], 3)
+    1.086
     """
     _check_inputs(width, thickness, rho, f)
     if not (spacing - spacing == 0) or spacing <= thickness:
@@ -599,6 +632,15 @@ def round_layers_solution(layers, f):
     rings, with the exact GMDs of annuli (core.filament_inductance.annulus_log_gmd). Used for
     clad wire with a non-magnetic core (copper-clad aluminium) and, in the tests, to check the
     method against the exact Kelvin solution of a solid wire.
+
+    Examples
+    --------
+    A solid 2 mm copper wire at 50 kHz: within 1e-5 (relative) of the exact Kelvin ratio 1.965991 (the
+    formula with scipy.special's ber, bei, berp, beip; see core.skin_effect.round_wire_resistance_ratio):
+
+    >>> solution = round_layers_solution([[1e-3, 1.7241e-8]], 50e3)
+    >>> abs(solution["ratio"] / 1.965991 - 1.0) < 1e-5, solution["converged"]
+    (True, True)
     """
     _check_positive(f, "f", "frequency")
     inner = 0.0
