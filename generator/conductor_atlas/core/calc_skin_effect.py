@@ -43,9 +43,9 @@ RESULT_LABELS = [
 AC_RESULTS = ["area", "resistance", "ac_dc_ratio", "ac_method", "bar_share", "proximity_factor", "resistance_ac",
               "depth_ratio"]
 SIDE_FIELDS = {"size": AC_RESULTS, "arrangement": AC_RESULTS}
-CAUTION = ("Straight conductors far from anything but the arrangement given (a single conductor is taken as isolated): "
-           "other nearby conductors, stranding, steel enclosures and magnetic armour raise the AC resistance "
-           "further. A physics estimate, not a cable or busbar rating.")
+CAUTION = ("Straight conductors, with proximity only between the conductors of the arrangement given (a single "
+           "conductor is taken as isolated): other nearby conductors, stranding, steel enclosures and magnetic "
+           "armour raise the AC resistance further. A physics estimate, not a cable or busbar rating.")
 
 
 # __pragma__ ('nokwargs')
