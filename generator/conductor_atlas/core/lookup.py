@@ -7,7 +7,7 @@ by search_text.osa_distance.
 """
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.search_text import osa_distance
+from conductor_atlas.core.search_text import cached_tokens, osa_distance, tokens
 from conductor_atlas.core.text_match import name_key
 
 
@@ -82,37 +82,14 @@ def nearest_names(catalogue, text, count):
     return names
 
 
-# Characters that part the words of a name key for names_with_words ("copper-clad steel 30")
-WORD_SEPARATORS = " -_/().,%+:;&*'\"#"
-
-
-# name key -> its words, for the ids and aliases names_with_words reads on every keystroke (speed only)
+# name key -> its words (search_text.tokens), for the ids and aliases names_with_words reads on every
+# keystroke (speed only)
 KEY_WORDS = {}
-
-
-def key_words(key):
-    """The words of a name key, split at WORD_SEPARATORS: "copper-clad steel 30" -> copper, clad, steel, 30."""
-    if key in KEY_WORDS:
-        return KEY_WORDS[key]
-    words = []
-    current = ""
-    for ch in key:
-        if WORD_SEPARATORS.find(ch) >= 0:
-            if len(current) > 0:
-                words.append(current)
-            current = ""
-        else:
-            current = current + ch
-    if len(current) > 0:
-        words.append(current)
-    if len(KEY_WORDS) < 5000:
-        KEY_WORDS[key] = words
-    return words
 
 
 def starts_words_of(wanted_words, key):
     """True when every word of wanted_words begins some word of the name key ``key``."""
-    words = key_words(key)
+    words = cached_tokens(KEY_WORDS, key)
     for want in wanted_words:
         hit = False
         for word in words:
@@ -135,7 +112,7 @@ def names_with_words(catalogue, text, count):
     or name ("steel" finds low-carbon and stainless steel and copper-clad steel; "tinned", tinned
     copper; "CCS", the clad steels), one per material, shortest first; [] when text has no words.
     A material matched only by its long name is listed by its id."""
-    wanted_words = key_words(name_key(text))
+    wanted_words = tokens(text)
     if len(wanted_words) == 0:
         return []
     best = {}
