@@ -186,3 +186,25 @@ def test_designations_find_their_material_first(shipped, query, title):
     outcome = search(shipped, query, 5)
     assert outcome["errors"] == {} or not outcome["errors"]
     assert outcome["results"][0]["title"].startswith(title), [r["title"] for r in outcome["results"]]
+
+
+@pytest.mark.parametrize("query, wanted", [
+    # what a shop user types for a job (the data files' `uses`, common practice, no source): the grades
+    # the trade uses for it are among the first results, not materials that merely share letters
+    ("busbar", ["Standard annealed copper", "Aluminium alloy 6101", "Conductor aluminium 1350 (hard-drawn)"]),
+    ("bus bar", ["Standard annealed copper", "Aluminium alloy 6101"]),
+    ("magnet wire", ["Standard annealed copper", "Oxygen-free copper"]),
+    ("heating element", ["Nickel-chromium 80/20", "Iron-chromium-aluminium"]),
+    ("shunt", ["Copper-manganese-nickel", "Copper-nickel 55/45"]),
+    ("Pt100", ["Platinum for industrial resistance thermometers"]),
+])
+def test_a_use_finds_the_grades_used_for_it(shipped, query, wanted):
+    titles = [r["title"] for r in search(shipped, query, 6)["results"]]
+    for title in wanted:
+        assert any(t.startswith(title) for t in titles), (title, titles)
+
+
+def test_a_size_query_answers_with_the_size_first(shipped):
+    # ASTM B258: 4/0 AWG is 0.4600 in across, 107.2 mm²; before, "4/0" listed Copper-nickel 55/45 first
+    first = search(shipped, "4/0", 8)["results"][0]
+    assert first["kind"] == "size" and first["title"] == "4/0 AWG: 107.2 mm², ø 11.68 mm"

@@ -19,7 +19,7 @@ from conductor_atlas.data_fields import (Problems, convert, display_path, invisi
                                          parse_temperature, read_locator, read_toml, unreachable)
 from conductor_atlas.model import DataSet, Layers, Material, ResistivityTable, Source, Value
 from conductor_atlas.standards import read_standard, standard_files
-from conductor_atlas.schema import (CLASSES, LAYER_KEYS, MAX_TABLE_POINTS, PROPERTIES, RECORD_KEYS,
+from conductor_atlas.schema import (CLASSES, LAYER_KEYS, USE_LENGTH, USES_MAX, MAX_TABLE_POINTS, PROPERTIES, RECORD_KEYS,
                                     SCHEMA_VERSION, TABLE_KEYS, TABLE_RESISTIVITY_OHM_M, TABLE_TEMPERATURE_K,
                                     TOP_LEVEL_KEYS, YEARS)
 
@@ -87,6 +87,23 @@ def read_record(name: str, record: object, where: str, sources: set[str], proble
     return Value(name=name, si=value, unit=spec.unit, text=record["value"], source=source,
                  locator=record["locator"].strip(), note=record.get("note", ""), temperature=temperature,
                  low=low, high=high, valid_from=valid_from, valid_to=valid_to)
+
+
+def read_uses(raw: object, where: str, problems: Problems) -> tuple[str, ...]:
+    """The file's `uses`: a list of short, visible texts (what the trade makes of the material)."""
+    if not isinstance(raw, list) or not all(isinstance(u, str) and u.strip() for u in raw):
+        problems.add(where, f"expected a list of short texts like [\"busbars\", \"magnet wire\"], found {raw!r}")
+        return ()
+    if len(raw) > USES_MAX:
+        problems.add(where, f"has {len(raw)} entries; keep the {USES_MAX} a user would search by")
+    for text in raw:
+        if len(text) > USE_LENGTH:
+            problems.add(where, f"\"{text[:USE_LENGTH]}…\" is over {USE_LENGTH} characters; a use is a few words "
+                         "(put explanations in notes)")
+        found = invisible_character(text)
+        if found is not None:
+            problems.add(where, f"\"{text}\" contains the invisible character {found}; type it without")
+    return tuple(u.strip() for u in raw)
 
 
 def read_table(table: object, where: str, sources: set[str], strict_rise: bool,
@@ -215,6 +232,7 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
         problems.add(f"{where}: aliases", "expected a list of non-empty strings or {name, source, locator} tables, "
                      f"found {aliases!r}")
         aliases = []
+    uses = read_uses(data.get("uses", []), f"{where}: uses", problems)
     notes = data.get("notes", "")
     if not isinstance(notes, str):
         problems.add(f"{where}: notes", "expected a Markdown string")
@@ -257,7 +275,7 @@ def read_material(path: Path, sources: set[str], problems: Problems) -> Material
     return Material(id=material_id, name=data["name"].strip(), klass=klass, aliases=tuple(a.strip() for a in aliases),
                     summary=data["summary"].strip(), notes=notes, properties=MappingProxyType(properties),
                     table=table, path=path, temperature_base_id=base_id, alias_sources=tuple(alias_sources),
-                    clad_layer_ids=tuple(layer_ids), layers=layers)
+                    clad_layer_ids=tuple(layer_ids), layers=layers, uses=uses)
 
 
 def read_layers(table: object, where: str, sources: set[str], problems: Problems) -> Layers | None:

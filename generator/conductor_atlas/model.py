@@ -123,6 +123,8 @@ class Material:
     alias_sources: tuple[tuple[str, str, str], ...] = ()
     # a clad wire (copper-clad steel or aluminium): its core and cladding ([layers] in the file)
     layers: Layers | None = None
+    # what the trade uses it for (the file's `uses`): shown on its page and searched
+    uses: tuple[str, ...] = ()
 
     def get(self, name: str) -> Value | None:
         return self.properties.get(name)

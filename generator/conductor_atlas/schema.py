@@ -19,10 +19,14 @@ CLASSES = {
     "sensor-metal": "Sensor metals",
 }
 
-TOP_LEVEL_KEYS = {"schema", "id", "name", "class", "aliases", "summary", "notes", "properties",
+TOP_LEVEL_KEYS = {"schema", "id", "name", "class", "aliases", "summary", "uses", "notes", "properties",
                   "resistivity_table", "temperature_base", "clad_layers", "layers"}
 # [layers] of a clad round wire (its AC resistance): core and cladding are ids of other materials,
 # cladding_share the cladding's fraction of the cross-section by area
+# uses = ["busbars", ...]: what the trade makes of the material, words a user searches by (trade
+# facts, common practice with no source): at most USES_MAX, each at most USE_LENGTH characters
+USES_MAX = 12
+USE_LENGTH = 60
 LAYER_KEYS = {"core", "cladding", "cladding_share", "source", "locator", "note"}
 RECORD_KEYS = {"value", "min", "max", "temperature", "valid_from", "valid_to", "source", "locator",
                "note"}

@@ -54,7 +54,7 @@ def material_entry(view: MaterialView) -> dict:
         "rho_20": ["resistivity at 20 °C", property_text("resistivity", view.rho_20)],
         "iacs_20": ["conductivity at 20 °C", f"{format_number(view.iacs_20, 4)} %IACS"],
     }
-    keywords = ["resistivity", "conductivity"]
+    keywords = ["resistivity", "conductivity", *m.uses]
     for name in PROPERTIES:
         value = m.get(name)
         if value is None:

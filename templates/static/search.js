@@ -14,7 +14,7 @@ const FIRST_FORM = document.querySelector('form[data-search]');
 const SITE_ROOT = new URL(FIRST_FORM ? FIRST_FORM.dataset.root : './', window.location.href);
 const POPUP_LIMIT = 8;
 const PAGE_LIMIT = 60;
-const KIND_LABEL = {material: 'Material', table: 'Table', calculator: 'Calculator', page: 'Page'};
+const KIND_LABEL = {material: 'Material', table: 'Table', calculator: 'Calculator', page: 'Page', size: 'Size'};
 const ANNOUNCE_PAUSE = 350;  // ms without typing before the live region reads the count
 
 let indexPromise = null;

@@ -24,7 +24,7 @@ MODULES = sorted(p.stem for p in CORE.glob("*.py") if p.stem != "__init__")
 EXAMPLES_REQUIRED = {
     "resistance": None, "quadrature": None, "short_circuit": None, "practice": None, "conformance": None,
     "size_effect": None, "carriers": None, "skin_effect": None, "kelvin_functions": None,
-    "temperature_models": None, "layered_round": None, "clad_layers": None,
+    "temperature_models": None, "layered_round": None, "clad_layers": None, "search_size": None,
     "geometry": ["awg_number", "awg_name", "awg_diameter_exact", "awg_diameter", "awg_area", "round_area",
                  "diameter_from_area", "next_metric_size", "next_awg"],
     "material_models": ["cvd_ratio", "choose_model", "resistivity_or_none", "within_model", "resistivity_at",

@@ -370,7 +370,7 @@ def all_cases():
 
 
 SEARCH_QUERIES = [
-    "copper", "Copper", "COPPER", "cooper", "coper", "nickle", "aluminum", "alumínium", "ALUMINIUM", "aluminim",
+    "4/0", "12 AWG", "100 x 10 mm", "copper", "Copper", "COPPER", "cooper", "coper", "nickle", "aluminum", "alumínium", "ALUMINIUM", "aluminim",
     "tungsten", "wolfram", "w", "c", "n", "s", "7", "cu", "A91350", "uns a91350", "c17200", "C172", "cca 10", "CCA-10", "2.4869",
     "skin depth", "skin", "resistivity temperature", "debye", "mean free path", "calculator", "resistance calculator",
     "references", "gold film", "copper alloy", "the", "   ", "", "Ωµ²·", "crème brûlée", "zzzz qqqq",
@@ -413,6 +413,9 @@ def search_cases():
         cases.append((matching, "token_match", [a, b]))
     for query in ["iacs > 90; density < 3, copper", "rho < 2,5 uohm*cm and iacs > 1", "a and b", ",;,"]:
         cases.append(("conductor_atlas.core.search_filters", "split_clauses", [query]))
+    for text in ["4/0", "12 AWG", "#12", "2.5 mm²", "250 kcmil", "100 x 10 mm", "d 1.6 mm", "12", "copper", "4/0 copper",
+                 "1e400 mm²", "0 AWG", "50 AWG"]:
+        cases.append(("conductor_atlas.core.search_size", "size_result", [text]))
     for word in ["copper", "c17200", "", "zz9"]:
         cases.append(("conductor_atlas.core.search_format", "letter_mask", [word]))
     hits = [[2, 1.5, 0, "Copper", "copper", 0, -1], [2, 1.5, 1, "Copper", "copper-table", 3, -1],

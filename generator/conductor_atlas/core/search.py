@@ -41,7 +41,8 @@ Problems become messages in the outcome, never exceptions.
 The search is split into flat sibling modules, one job each: core.search_text (folding and word
 matching), core.search_format (the prepared index's layout), core.search_prepare (prepare_index, at
 build time), core.search_filters (property filters), core.search_rank (matching words, scoring and
-ordering entries) and this module (the query: ``search``).
+ordering entries), core.search_size (a query that is a conductor size) and this module (the query:
+``search``).
 """
 
 from conductor_atlas.core.errors import CoreError
@@ -50,6 +51,7 @@ from conductor_atlas.core.search_format import (E_ALIASES, E_CLASS, E_FACTS, E_I
 from conductor_atlas.core.search_text import compact, STOP_WORDS, tokens, word_match
 from conductor_atlas.core.search_filters import find_operator, parse_filter, passes, split_clauses
 from conductor_atlas.core.search_prepare import prepare_index
+from conductor_atlas.core.search_size import size_result
 from conductor_atlas.core.search_rank import (best_field, gather, keep_hit, KIND_BONUS, KIND_ORDER, merge_sort,
                                               score_bound, score_entry, word_marks, word_qualities, word_score,
                                               words_matched)
@@ -282,6 +284,13 @@ def search(index, query, limit):
                                   position, c], limit)
     if limit <= 0:
         top = merge_sort(top)
+    # a query that reads as a conductor size answers with the size first (core.search_size)
+    size = size_result(text) if len(filters) == 0 else None
+    if size is not None:
+        outcome["results"].append(size)
+        total += 1
+        if limit > 0 and len(top) >= limit:
+            top.pop()
     outcome["total"] = total
     for hit in top:
         record = entries[hit[5]]
