@@ -192,3 +192,27 @@ def test_every_folder_has_an_index_page(http_site, built_site):
         with urllib.request.urlopen(f"{http_site}/{folder}", timeout=10) as answer:
             text = answer.read().decode("utf-8")
         assert "Directory listing" not in text and "nothing in it to read" in text, folder
+
+
+def test_a_client_that_leaves_mid_file_prints_no_traceback(built_site, capfd):
+    """A browser closing a tab while a file is on its way makes the server write into a closed
+    connection (BrokenPipeError or ConnectionResetError in the request's thread): routine, so it says
+    nothing; before, socketserver printed a traceback for each. Any other failure is one line naming
+    the client. (Called as the server calls it, from inside the except block of the request.)"""
+    server = make_server(built_site, port=0, quiet=False)
+    try:
+        for problem in (BrokenPipeError(32, "Broken pipe"), ConnectionResetError(104, "Connection reset by peer")):
+            try:
+                raise problem
+            except OSError:
+                server.handle_error(None, ("192.0.2.7", 50000))
+        assert capfd.readouterr().err == ""
+        try:
+            raise ValueError("odd request")
+        except ValueError:
+            server.handle_error(None, ("192.0.2.7", 50000))
+        err = capfd.readouterr().err
+        assert "Traceback" not in err
+        assert err.strip() == "serve: a request from 192.0.2.7 failed (ValueError: odd request)"
+    finally:
+        server.server_close()

@@ -8,6 +8,7 @@ https, which the standard library's ssl serves from a certificate and key the us
 from __future__ import annotations
 
 import functools
+import sys
 import http.server
 import ssl
 import urllib.parse
@@ -56,6 +57,22 @@ class SiteHandler(http.server.SimpleHTTPRequestHandler):
         super().log_message(format, *args)
 
 
+class SiteServer(http.server.ThreadingHTTPServer):
+    """The threading server with one-line request errors: a browser that closes a tab or drops a
+    download mid-file (broken pipe, reset) is routine and says nothing; anything else prints one
+    line naming the client, never a traceback."""
+
+    quiet = False
+
+    def handle_error(self, request, client_address) -> None:
+        problem = sys.exc_info()[1]
+        if isinstance(problem, (BrokenPipeError, ConnectionResetError, ConnectionAbortedError, TimeoutError)):
+            return
+        if not self.quiet:
+            print(f"serve: a request from {client_address[0]} failed "
+                  f"({problem.__class__.__name__}: {problem})", file=sys.stderr)
+
+
 def tls_context(cert: Path, key: Path | None) -> ssl.SSLContext:
     """A server TLS context from a PEM certificate and its private key (or one file holding both)."""
     for name, path in (("--cert", cert), ("--key", key)):
@@ -86,7 +103,7 @@ def make_server(folder: Path, port: int = 8000, host: str = "127.0.0.1", quiet: 
     context = tls_context(cert, key) if cert is not None else None
     handler = functools.partial(SiteHandler, directory=str(folder))
     try:
-        server = http.server.ThreadingHTTPServer((host, port), handler)
+        server = SiteServer((host, port), handler)
     except OSError as exc:
         raise AtlasError(f"cannot listen on {host}:{port} ({exc.strerror}); try --port") from exc
     server.quiet = quiet  # type: ignore[attr-defined]
