@@ -6,7 +6,10 @@
   The service worker is blocked here so the figures are the page's own; the offline copy it would
   download in the background after the first visit is reported separately by run.py.
 - calculator update: in the page, performance.now() from dispatching an input event on a number
-  field to the moment a result's data-value has changed, CPU throttled ×4 (Emulation domain).
+  field to the moment a result's data-value has changed and the page's style and layout are up to
+  date (read back at once; painting left out), CPU throttled ×4 (Emulation domain); the floor is a
+  form added to a calculator page whose handler only copies the input into a data-value, timed by
+  the same code.
 - search: the same for the header search box, once its index is loaded.
 - first contentful paint of a material page, fresh browser context, CPU throttled ×4.
 """
@@ -26,18 +29,22 @@ CHROMIUM_ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-
                  "--disable-background-networking", "--disable-component-update", "--disable-sync"]
 THROTTLE = 4
 
-# Runs in the page: change a number field of the form back and forth, time each update.
+# Runs in the page: change a number field of the form back and forth, time each update from
+# dispatching the input event until a result's data-value has changed AND the page's style and
+# layout are up to date (read back at once, as the next frame would have to compute them before
+# showing anything; painting is left out). The floor (FLOOR_FORM) is timed by this same function.
 CALC_TIMER = """
 async ({name, rounds}) => {
   const form = document.querySelector(`form[data-calculator="${name}"]`);
   if (!form) return {error: 'no form for ' + name};
   const section = form.closest('section');
-  const snapshot = () => Array.from(section.querySelectorAll('[data-result]'))
-    .map((cell) => cell.dataset.value === undefined ? '' : cell.dataset.value).join('|');
+  const cells = Array.from(section.querySelectorAll('[data-result]'));
+  const snapshot = () => cells.map((cell) => cell.dataset.value === undefined ? '' : cell.dataset.value).join('|');
+  const laidOut = () => { void document.documentElement.offsetHeight; return performance.now(); };
   const changed = (before) => new Promise((resolve) => {
-    if (snapshot() !== before) { resolve(performance.now()); return; }
+    if (snapshot() !== before) { resolve(laidOut()); return; }
     const observer = new MutationObserver(() => {
-      if (snapshot() !== before) { observer.disconnect(); resolve(performance.now()); }
+      if (snapshot() !== before) { observer.disconnect(); resolve(laidOut()); }
     });
     observer.observe(section, {subtree: true, attributes: true, attributeFilter: ['data-value']});
     setTimeout(() => { observer.disconnect(); resolve(null); }, 2000);
@@ -51,6 +58,7 @@ async ({name, rounds}) => {
     const samples = [];
     for (let i = 0; i < rounds; i++) {
       const before = snapshot();
+      void document.documentElement.offsetHeight;  // nothing left over from the last round
       const start = performance.now();
       input.value = i % 2 === 0 ? other : original;
       input.dispatchEvent(new Event('input', {bubbles: true}));
@@ -66,6 +74,42 @@ async ({name, rounds}) => {
   return {error: 'no number field of ' + name + ' changes a result'};
 }
 """
+
+# Runs in the page: the floor, a form whose input handler only copies the input into a result's text
+# and data-value (no core, no page glue), added to the page and timed by CALC_TIMER like a calculator.
+FLOOR_FORM = """
+() => {
+  const section = document.createElement('section');
+  const form = document.createElement('form');
+  form.dataset.calculator = 'bench-floor';
+  const input = document.createElement('input');
+  input.type = 'text';
+  input.name = 'value';
+  input.value = '1 m';
+  const cell = document.createElement('dd');
+  cell.dataset.result = 'value';
+  form.append(input);
+  section.append(form, cell);
+  document.body.append(section);
+  form.addEventListener('input', () => { cell.textContent = input.value; cell.dataset.value = input.value; });
+}
+"""
+
+
+def floor_times(browser, base: str, page_path: str, rounds: int, reps: int = 1) -> dict:
+    """The floor on ``page_path`` (same page, CSS and throttling as a calculator): median over ``reps``
+    fresh pages of each page's median."""
+    runs = []
+    for _ in range(max(1, reps)):
+        context, page = throttled_page(browser, f"{base}/{page_path}")
+        page.evaluate(FLOOR_FORM)
+        result = page.evaluate(CALC_TIMER, {"name": "bench-floor", "rounds": rounds})
+        context.close()
+        if "error" in result:
+            return {"error": result["error"]}
+        runs.append(statistics.median(result["samples"]))
+    return {"median_ms": statistics.median(runs), "runs_ms": runs}
+
 
 # Runs in the page: load the search index with a first query, then time each query.
 SEARCH_TIMER = """

@@ -15,8 +15,9 @@ shared machine:
   process (wall clock beside it), since on a shared machine wall clock also carries other work;
   the cold build is judged on wall clock (its Transcrypt subprocess runs beside the rest), with
   its CPU seconds in the note;
-- browser: the floor is the same measurement on a page whose input handler only copies the
-  input into a data-value (no core), under the same ×4 CPU throttling; for first paint, the same
+- browser: the floor is the same measurement (same timing code: input event → data-value changed
+  and style and layout up to date) on a form added to a calculator page whose input handler only
+  copies the input into a data-value (no core), under the same ×4 CPU throttling; for first paint, the same
   material page with its scripts removed (same HTML, CSS and address), alternating with the page;
 - `conductor-atlas build` as a whole process (interpreter start and imports included): with nothing
   changed, against the cold build.
@@ -53,28 +54,8 @@ AGGREGATE_PREFIX = "site:"    # cache labels of the pages that list every materi
 CHANGED_ID = "copper"
 FIRST_PAGE = "materials/copper/index.html"
 SECOND_PAGE = "materials/aluminium/index.html"
+FLOOR_PAGE = "calculators/resistance/index.html"  # the floor form is added to this page
 SEARCH_QUERIES = ["copper", "C17200", "nickl chrom", "resistivity < 3 uohm*cm"]
-CALC_FLOOR = """
-async ({rounds}) => {
-  const form = document.createElement('form');
-  const input = document.createElement('input');
-  const cell = document.createElement('dd');
-  form.append(input, cell);
-  document.body.append(form);
-  form.addEventListener('input', () => { cell.textContent = input.value; cell.dataset.value = input.value; });
-  const samples = [];
-  for (let i = 0; i < rounds; i++) {
-    const start = performance.now();
-    input.value = String(i);
-    input.dispatchEvent(new Event('input', {bubbles: true}));
-    if (cell.dataset.value !== String(i)) return {error: 'floor handler did not run'};
-    samples.push(performance.now() - start);
-    await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
-  }
-  form.remove();
-  return {samples};
-}
-"""
 # The skin-effect calculator's bar sizes run the filament solver (core/filament_solver.py), a round
 # pair the multipole solution (core/round_pair.py): the time
 # from typing to the AC result, and how long the page's input handler holds the main thread meanwhile.
@@ -226,13 +207,9 @@ def browser_section(site: Path, big_site: Path | None, calculators: list[str], r
             if "weight" in parts:
                 out["weight"] = bench_browser.page_weight(chromium, base, FIRST_PAGE, SECOND_PAGE)
             if parts & {"calculators", "search", "bar-solver"}:
-                floors = []
-                for _ in range(max(1, reps)):
-                    context, page = bench_browser.throttled_page(chromium, f"{base}/methods/index.html")
-                    floors.append(median(page.evaluate(CALC_FLOOR, {"rounds": rounds}).get("samples", [None])))
-                    context.close()
-                out["input_floor_ms"] = median(floors)
-                out["input_floor_runs_ms"] = floors
+                floor = bench_browser.floor_times(chromium, base, FLOOR_PAGE, rounds, reps)
+                out["input_floor_ms"] = floor.get("median_ms")
+                out["input_floor_runs_ms"] = floor.get("runs_ms", [])
             if "calculators" in parts:
                 out["calculators"] = bench_browser.calculator_times(chromium, base, calculators, rounds, reps)
             if "bar-solver" in parts:
@@ -315,7 +292,7 @@ def figures(results: dict) -> list[dict]:
                 f"{w['second']['from_cache']} of {w['second']['requests']} requests from cache")
         fl = br.get("input_floor_ms")
         if fl is not None:
-            add("browser", "input→data-value floor (no core)", fl, "ms", fl,
+            add("browser", "input→result laid out, floor (no core)", fl, "ms", fl,
                 note="per run: " + ", ".join(f"{t:.2f}" for t in br["input_floor_runs_ms"]))
         for name, r in br.get("calculators", {}).items():
             if "error" in r:

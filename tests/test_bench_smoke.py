@@ -36,7 +36,7 @@ def test_quick_benchmark_runs_and_reports_every_figure(tmp_path):
                 "rebuild after editing copper.toml", "×2 peak memory", "total site"]
     if browser:
         expected += ["first visit materials/copper/index.html", "next page materials/aluminium/index.html",
-                     "input→data-value floor (no core)"]
+                     "input→result laid out, floor (no core)"]
     for name in expected:
         assert name in names, f"{name!r} missing from the benchmark's figures: {names}"
         assert name in result.stdout, f"{name!r} missing from the printed table"

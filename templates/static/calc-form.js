@@ -80,22 +80,31 @@ function viewOf(form) {
   const section = form.closest('section');
   const fields = fieldsOf(form).map((input) => ({
     input, name: input.name, visible: input.type !== 'hidden',
-    slot: document.getElementById(input.id + '-error'), message: null, shown: null, editing: false, timer: 0}));
+    slot: document.getElementById(input.id + '-error'), message: null, shown: null, editing: false, timer: 0, due: 0}));
   // the key-result strip repeats some results (data-key-result): each mirrors its data-result cell
   const keyCells = Array.from(section.querySelectorAll('[data-key-result]'));
   const cells = Array.from(section.querySelectorAll('[data-result]')).map((cell) => ({
     cell, name: cell.dataset.result, text: null, value: null, low: null, high: null,
     mirrors: keyCells.filter((key) => key.dataset.keyResult === cell.dataset.result)}));
   return {
-    form, fields, cells, inputs: null, state: null, general: null, warnings: null, model: null, sources: null,
+    form, fields, cells, inputs: null, state: null, general: null, warnings: [], model: null, sources: null,
     problemsNode: section.querySelector('.calc-problems'),
     warningsNode: section.querySelector('.calc-warnings'),
     modelNode: section.querySelector('[data-model]'), materialNode: section.querySelector('[data-material]'), used: null,
     sourcesNode: section.querySelector('[data-sources]'),
-    busyNode: section.querySelector('[data-busy]'), slow: false, ran: false, solveTimer: 0, solved: null,
+    busyNode: section.querySelector('[data-busy]'), busy: '', slow: false, ran: false, solveTimer: 0, solved: null,
     // the model list, found once; modelsFor: the material its options were last marked for
     modelSelect: form.querySelector('select[name=model]'), modelsFor: null,
   };
+}
+
+// Change an element's text in place: its one text node takes the new characters, so no node is made
+// or dropped (a new node needs its style and layout objects made again). Empty text removes the node,
+// so :empty rules (a hidden problems line) still hold.
+function setText(node, text) {
+  const first = node.firstChild;
+  if (text !== '' && first !== null && first === node.lastChild && first.nodeType === Node.TEXT_NODE) first.data = text;
+  else node.textContent = text;
 }
 
 // In the narrow key-result strip a number keeps its unit on its line: "3.2243 µΩ·cm", never a
@@ -113,18 +122,27 @@ function paint(field) {
   const text = field.editing && field.message !== field.shown ? '' : field.message;
   if (text === field.shown) return;
   field.shown = text;
-  if (field.slot) field.slot.textContent = text;
+  if (field.slot) setText(field.slot, text);
   if (text) field.input.setAttribute('aria-invalid', 'true'); else field.input.removeAttribute('aria-invalid');
 }
 
+// A keystroke only moves the field's deadline; its one timer re-arms itself until the deadline passes.
 function typing(field) {
   field.editing = true;
-  clearTimeout(field.timer);
-  field.timer = setTimeout(() => judge(field), PAUSE_MS);
+  field.due = performance.now() + PAUSE_MS;
+  if (!field.timer) field.timer = setTimeout(() => pause(field), PAUSE_MS);
+}
+
+function pause(field) {
+  const wait = field.due - performance.now();
+  if (wait > 1) { field.timer = setTimeout(() => pause(field), wait); return; }
+  field.timer = 0;
+  judge(field);
 }
 
 function judge(field) {
   clearTimeout(field.timer);
+  field.timer = 0;
   field.editing = false;
   paint(field);
 }
@@ -148,8 +166,11 @@ function show(view, outcome) {
     const text = shown ? result.text : '—';
     const value = shown ? String(result.value) : null;
     if (text !== entry.text) {
-      entry.cell.textContent = text;
-      for (const mirror of entry.mirrors) mirror.textContent = keepUnits(text);
+      setText(entry.cell, text);
+      if (entry.mirrors.length) {
+        const kept = keepUnits(text);
+        for (const mirror of entry.mirrors) setText(mirror, kept);
+      }
       entry.text = text;
     }
     if (value !== entry.value) {
@@ -169,21 +190,12 @@ function show(view, outcome) {
     }
   }
   const problems = general.join(' · ');
-  if (view.problemsNode && problems !== view.general) view.problemsNode.textContent = problems;
+  if (view.problemsNode && problems !== view.general) setText(view.problemsNode, problems);
   view.general = problems;
-  const warnings = outcome.warnings.join('\u0000');
-  if (view.warningsNode && warnings !== view.warnings) {
-    view.warningsNode.replaceChildren();
-    for (const text of outcome.warnings) {
-      const item = document.createElement('li');
-      item.textContent = text;
-      view.warningsNode.appendChild(item);
-    }
-  }
-  view.warnings = warnings;
+  if (view.warningsNode) showList(view.warningsNode, view.warnings, outcome.warnings);
   showMaterials(view, outcome.used || []);
   const model = outcome.model ? 'Model: ' + outcome.model : '';
-  if (view.modelNode && model !== view.model) view.modelNode.textContent = model;
+  if (view.modelNode && model !== view.model) setText(view.modelNode, model);
   view.model = model;
   const sources = outcome.sources && outcome.sources.length ? outcome.sources.join(', ') : '';
   if (view.sourcesNode && sources !== view.sources) showSources(view.sourcesNode, outcome.sources || []);
@@ -191,6 +203,22 @@ function show(view, outcome) {
   const state = Object.keys(errors).length ? 'error' : 'ok';
   if (state !== view.state) view.form.dataset.state = state;
   view.state = state;
+}
+
+// The warnings as list items: an item whose text is unchanged is left alone, a changed one gets its
+// new text in place, and items are added or dropped only at the end. ``shown`` is the texts shown.
+function showList(node, shown, texts) {
+  for (let i = 0; i < texts.length; i++) {
+    if (i < shown.length) {
+      if (shown[i] !== texts[i]) { setText(node.children[i], texts[i]); shown[i] = texts[i]; }
+    } else {
+      const item = document.createElement('li');
+      item.textContent = texts[i];
+      node.appendChild(item);
+      shown.push(texts[i]);
+    }
+  }
+  while (shown.length > texts.length) { node.lastElementChild.remove(); shown.pop(); }
 }
 
 // The sources a result used, each linked to its entry on the references page (as on material pages).
@@ -265,7 +293,9 @@ const SLOW_MS = 100;
 const SETTLE_MS = 400;
 
 function setBusy(view, text) {
-  if (view.busyNode && view.busyNode.textContent !== text) view.busyNode.textContent = text;
+  if (text === view.busy) return;
+  view.busy = text;
+  if (view.busyNode) setText(view.busyNode, text);
   if (text) view.form.dataset.solving = ''; else delete view.form.dataset.solving;
 }
 

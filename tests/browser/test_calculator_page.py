@@ -90,3 +90,23 @@ def test_file_url_reads_and_calculates(browser, built_site, catalogue):
     assert pg.locator("#resistivity-temperature table tbody tr").count() > 5
     assert errors == []
     context.close()
+
+
+def test_an_update_changes_texts_in_place_and_keeps_the_warnings_list_in_step(page, served_site, catalogue):
+    """A keystroke writes each changed result into the text node already shown (no new nodes for the
+    browser to style and lay out again), and the warnings list follows the core's warnings item by
+    item, also when one appears and goes again (the decimal-point note of "110.001 m")."""
+    page.goto(f"{served_site}/calculators/resistance/index.html")
+    page.wait_for_selector("html.calc-ready")
+    page.evaluate("() => { window.shownNode = document.querySelector('[data-result=resistance]').firstChild; }")
+    inputs = {"material": "copper-annealed", "size": "2.5 mm2", "temperature": "20 °C", "current": "",
+              "frequency": "", "model": "auto"}
+    for length in ["110.001 m", "100 m", "110.001 m", "7 km"]:
+        page.fill("#in-resistance-length", length)
+        expected = calculate("resistance", inputs | {"length": length}, catalogue)
+        assert page.text_content("[data-result=resistance]") == expected["results"]["resistance"]["text"]
+        assert page.evaluate("() => document.querySelector('[data-result=resistance]').firstChild === window.shownNode")
+        items = page.eval_on_selector_all("#calc-resistance .calc-warnings li", "els => els.map((e) => e.textContent)")
+        assert items == expected["warnings"]
+        assert page.is_visible("#calc-resistance .calc-warnings") == bool(expected["warnings"])
+    assert page.errors == []
