@@ -25,10 +25,21 @@ EXAMPLES_REQUIRED = {
     "resistance": None, "quadrature": None, "short_circuit": None, "practice": None, "conformance": None,
     "size_effect": None, "carriers": None, "skin_effect": None, "kelvin_functions": None,
     "temperature_models": None, "layered_round": None, "clad_layers": None, "search_size": None,
+    "round_pair": None, "errors": None,
     "geometry": ["awg_number", "awg_name", "awg_diameter_exact", "awg_diameter", "awg_area", "round_area",
                  "diameter_from_area", "next_metric_size", "next_awg"],
     "material_models": ["cvd_ratio", "choose_model", "resistivity_or_none", "within_model", "resistivity_at",
-                        "local_temperature_coefficient"],
+                        "local_temperature_coefficient", "model_key", "model_rho", "resistivity_value"],
+    "units": ["parse_quantity", "quantity_in_si"],
+    # the calculators' physics helpers (their readers, texts and calculate() are checked by the calculator tests)
+    "calc_common": ["material_resistivity", "warn_if_fusing", "recorded_mean_free_path",
+                    "frequency_beyond_dc_conductivity"],
+    "calc_short_circuit": ["iec_constants", "resistivities", "heat_integral_of", "final_temperature"],
+    "calc_resistance": ["ac_ratio"],
+    "calc_skin_effect": ["half_thickness", "mean_free_path_check"],
+    "calc_thin_film": ["bulk_mean_free_path"],
+    "calc_temperature_rise": ["material_k"],
+    "calc_compare": ["add_bar_width"],
     "filament_inductance": ["rectangle_log_gmd_exact", "rectangle_log_gmd_far", "rectangle_log_gmd", "annulus_log_gmd"],
     "filament_solver": ["skin_depth_mu0", "graded_cells", "bar_group_solution", "bar_pair_solution",
                         "round_layers_solution"],
@@ -53,7 +64,9 @@ def docstrings(module_name: str):
 
 
 def bracket_units(doc: str) -> list[str]:
-    text = CODE_SPAN.sub("", doc)
+    # the ``>>>`` examples and their printed answers are code and data (a list ['iec60028']), not prose
+    prose = "".join(part for part in doctest.DocTestParser().parse(doc) if isinstance(part, str))
+    text = CODE_SPAN.sub("", prose)
     return [u for u in BRACKET.findall(text)
             if u not in NOT_UNITS and '"' not in u and any(ch.isalpha() or ch in "%-" for ch in u) and u != "..."]
 
@@ -97,3 +110,5 @@ def test_the_scan_finds_the_units_it_should():
     # the scanner itself, on text written for it: units found, data shapes and code left alone
     doc = 'R = ρ L / A, [ohm].  rho [ohm*m], area [m^2], ratio [-]; returns ["single"] or [str]; ``x[0-9]``'
     assert bracket_units(doc) == ["ohm", "ohm*m", "m^2", "-"]
+    example = "rho [ohm*m]\n\n>>> sources(x) [0]\n['iec60028']\n\nthen [K]\n"
+    assert bracket_units(example) == ["ohm*m", "K"]

@@ -13,7 +13,24 @@ from conductor_atlas.core.calc_inputs import field_text, read_material, read_tem
 
 # __pragma__ ('nokwargs')
 def material_resistivity(outcome, m, t, inputs):
-    """ρ of m at t [K] by the model asked in inputs["model"] ("auto" by default), or None."""
+    """ρ [ohm*m] of m at t [K] by the model asked in inputs["model"] ("auto" by default), or None
+    (the model's error under its field). The model's warnings, sources and label go into the outcome.
+
+    Examples
+    --------
+    IEC 60028 copper (1.7241e-8 ohm*m at 20 °C, α = 0.00393 /K): at 90 °C
+    1.7241e-8 · (1 + 0.00393 · 70) = 2.19840e-8 ohm*m by hand; a tablet's "Linear" reads as "linear":
+
+    >>> from conductor_atlas.core.outcome import new_outcome
+    >>> copper = {"name": "copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0,
+    ...           "rho_sources": ["iec60028"], "melting_point": 1357.77}
+    >>> outcome = new_outcome("example", {"model": "Linear"})
+    >>> round(material_resistivity(outcome, copper, 363.15, outcome["inputs"]) * 1e8, 5), outcome["sources"]
+    (2.1984, ['iec60028'])
+    >>> material_resistivity(outcome, copper, 363.15, {"model": "table"}), outcome["errors"]["model"]
+    (None, 'no sourced ρ(T) table is on record for copper')
+    """
     model = field_text(inputs, "model").lower()  # a tablet capitalises the first letter: "Linear"
     if len(model) == 0:
         model = "auto"
@@ -42,7 +59,22 @@ PREECE_COPPER = 10244.0 / math.pow(0.0254, 1.5)  # [A/m^1.5]
 
 def warn_if_fusing(outcome, current, area):
     """Warn when ``current`` [A] exceeds Preece's fusing current of a bare copper wire of the same
-    cross-section ``area`` [m^2] (round: d = sqrt(4A/π))."""
+    cross-section ``area`` [m^2] (round: d = sqrt(4A/π)): I = a d^1.5, a = 10244 A/in^1.5.
+
+    Examples
+    --------
+    1 mm²: d = 1.1284 mm, and 10244 A/in^1.5 is 10244 / 25.4^1.5 = 80.02 A/mm^1.5, so Preece's current
+    is 80.02 · 1.1284^1.5 = 95.9 A by hand:
+
+    >>> from conductor_atlas.core.outcome import new_outcome
+    >>> outcome = new_outcome("example", {})
+    >>> warn_if_fusing(outcome, 95.0, 1e-6); len(outcome["warnings"])
+    0
+    >>> warn_if_fusing(outcome, 97.0, 1e-6); outcome["warnings"][0][:75]
+    'a current of 97 A is above the fusing current of a bare copper wire of this'
+    >>> "(95.9 A by Preece" in outcome["warnings"][0]
+    True
+    """
     d = math.sqrt(4.0 * area / math.pi)
     fusing = PREECE_COPPER * math.pow(d, 1.5)
     if current > fusing:
@@ -111,6 +143,20 @@ def recorded_mean_free_path(m, rho, t):
     (Gall, J. Appl. Phys. 119, 085101, 2016, eq. 1). ``how`` is "as recorded" (t within 0.5 K of the
     record's temperature), "scaled" (by ρ·ℓ = const), "unscaled" (no model reaches the record's
     temperature) or "none" (no record; ℓ is then -1.0).
+
+    Examples
+    --------
+    Copper with ℓ = 39 nm on record at 20 °C (Gall 2016, Table 1: 39.9 nm; rounded here), at 100 °C
+    with the linear ρ of IEC 60028: 39 nm / (1 + 0.00393 · 80) = 29.67 nm by hand:
+
+    >>> copper = {"name": "copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0,
+    ...           "mean_free_path": 39e-9, "mean_free_path_t": 293.15}
+    >>> found = recorded_mean_free_path(copper, 1.7241e-8 * (1.0 + 0.00393 * 80.0), 373.15)
+    >>> round(found[0] * 1e9, 2), found[1]
+    (29.67, 'scaled')
+    >>> recorded_mean_free_path(copper, 1.7241e-8, 293.15)[1]
+    'as recorded'
     """
     if not (m["mean_free_path"] > 0):
         return [-1.0, "none"]
@@ -158,6 +204,24 @@ def frequency_beyond_dc_conductivity(outcome, m, rho, f, field):
     omega tau with tau = m_e / (n e^2 rho) (carriers.relaxation_time; n = m["electron_density"]):
     refused above DRUDE_REFUSE_OMEGA_TAU, a warning above DRUDE_CAUTION_OMEGA_TAU; with no n on record,
     refused above UNKNOWN_TAU_LIMIT_HZ.
+
+    Examples
+    --------
+    Copper, n = 8.47e28 /m^3 (Ashcroft & Mermin Table 1.1), ρ = 1.7241e-8 ohm*m: τ = m_e / (n e² ρ)
+    = 2.430e-14 s with scipy.constants' m_e and e, so ωτ = 1 at f = 1 / (2πτ) = 6.55 THz and ωτ = 0.153
+    at 1 THz (cautioned, above 0.1); 10 THz is refused:
+
+    >>> from conductor_atlas.core.outcome import new_outcome
+    >>> copper = {"name": "copper", "electron_density": 8.47e28}
+    >>> outcome = new_outcome("example", {})
+    >>> frequency_beyond_dc_conductivity(outcome, copper, 1.7241e-8, 1e12, "frequency")
+    False
+    >>> outcome["warnings"][0][:28]
+    'at this frequency ωτ = 0.153'
+    >>> frequency_beyond_dc_conductivity(outcome, copper, 1.7241e-8, 1e13, "frequency")
+    True
+    >>> outcome["errors"]["frequency"][-30:]
+    'type a frequency below 6.5 THz'
     """
     n = m["electron_density"]
     if n > 0 and rho > 0:

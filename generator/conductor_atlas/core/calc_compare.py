@@ -128,7 +128,20 @@ def calculate(inputs, catalogue):
 
 def add_bar_width(outcome, size, area_ratio):
     """The other material's bar of the reference bar's thickness at equal DC resistance per length:
-    R' = ρ/(w t) is equal when w2 = w1 · ρ2/ρ1 [m] (t unchanged)."""
+    R' = ρ/(w t) is equal when w2 = w1 · ρ2/ρ1 [m] (t unchanged); area_ratio = ρ2/ρ1 [-].
+
+    Examples
+    --------
+    100 x 10 mm copper (IEC 60028, 0.017241 ohm*mm^2/m) against 1350 aluminium (IEC 60889,
+    0.028264 ohm*mm^2/m): 100 mm · 0.028264 / 0.017241 = 163.93 mm by hand:
+
+    >>> from conductor_atlas.core.outcome import new_outcome
+    >>> from conductor_atlas.core.geometry import parse_size
+    >>> outcome = new_outcome("example", {})
+    >>> add_bar_width(outcome, parse_size("100 x 10 mm"), 0.028264 / 0.017241)
+    >>> outcome["results"]["bar_width_other"]["text"]
+    '163.9 mm'
+    """
     w2 = size["width"] * area_ratio
     add_result(outcome, "bar_width_other", w2, "m", format_number(w2 * 1000.0, 4) + " mm")
     add_warning(outcome, "the equal-resistance bar matches at DC only: at AC a bar's resistance rises by its own "

@@ -55,8 +55,25 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
 
 # __pragma__ ('nokwargs')
 def ac_ratio(outcome, size, rho, f, mu_r, layers):
-    """R_ac/R_dc of one isolated conductor of the size's shape, with its method (core.ac_layout; layers:
-    core.clad_layers.clad_layers_at's list for a clad wire, else None)."""
+    """R_ac/R_dc [-] of one isolated conductor of the size's shape at f [Hz] with resistivity rho
+    [ohm*m] and relative permeability mu_r [-], with its method in the outcome (core.ac_layout; layers:
+    core.clad_layers.clad_layers_at's list for a clad wire, else None).
+
+    Examples
+    --------
+    A solid round copper wire, d 20 mm at 50 Hz: the Kelvin ratio Re[(z/2) I0(z)/I1(z)],
+    z = (1 + j) a/δ, δ = 9.3458 mm, is 1.0267257 with scipy.special.iv; d 2 mm at 100 kHz 2.6616588:
+
+    >>> from conductor_atlas.core.outcome import new_outcome
+    >>> from conductor_atlas.core.geometry import parse_size
+    >>> outcome = new_outcome("example", {})
+    >>> round(ac_ratio(outcome, parse_size("d 20 mm"), 1.7241e-8, 50.0, 1.0, None), 7)
+    1.0267257
+    >>> round(ac_ratio(outcome, parse_size("d 2 mm"), 1.7241e-8, 1e5, 1.0, None), 7)
+    2.6616588
+    >>> outcome["results"]["ac_method"]["text"]
+    'exact Kelvin-function solution (isolated round wire)'
+    """
     return ac_ratio_for(outcome, size, ["single"], rho, f, mu_r, layers)
 
 

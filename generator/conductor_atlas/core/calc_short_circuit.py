@@ -54,7 +54,20 @@ AGREEMENT = 0.02  # the integrated answer and IEC 60949's formula are expected t
 
 # __pragma__ ('nokwargs')
 def iec_constants(m, catalogue):
-    """[K [A*s^0.5/m^2], β [K], "copper" / "aluminium"] of IEC 60949 for the material, or None."""
+    """[K [A*s^0.5/m^2], β [K], "copper" / "aluminium"] of IEC 60949 for the material, or None.
+
+    K and β are IEC 60949:1988 Table I's (from memory): copper 226 A*s^0.5/mm^2 and 234.5 K, aluminium
+    148 A*s^0.5/mm^2 and 228 K; other materials have no row (None). Copper and EC aluminium as
+    calc_temperature_rise.is_copper and is_ec_aluminium read the record.
+
+    Examples
+    --------
+    >>> copper = {"id": "copper-annealed", "klass": "conductor-grade"}
+    >>> iec_constants(copper, {"aliases": {"cu": "copper-annealed"}})
+    [226000000.0, 234.5, 'copper']
+    >>> iec_constants({"id": "brass-c26000", "klass": "copper-alloy"}, {"aliases": {}}) is None
+    True
+    """
     if is_copper(m, catalogue):
         return [sc.IEC60949_K_COPPER, sc.IEC60949_BETA_COPPER, "copper"]
     if is_ec_aluminium(m, catalogue) or m["id"] == "aluminium":
@@ -63,7 +76,19 @@ def iec_constants(m, catalogue):
 
 
 def resistivities(m, points, model):
-    """ρ [ohm*m] of m at each temperature of ``points`` by ``model`` (warnings are read separately)."""
+    """ρ [ohm*m] of m at each temperature [K] of ``points`` by ``model`` (warnings are read separately).
+
+    Examples
+    --------
+    IEC 60028 copper, ρ = 1.7241e-8 ohm*m (1 + 0.00393 /K (θ − 20 °C)): 2.19831e-8 ohm*m at 90 °C by
+    hand (1.7241 · 1.2751 = 2.19840 with α = 0.00393; here α = 1/254.5, IEC 60949's β = 234.5 K, so
+    1.7241 · (254.5 + 70) / 254.5 = 2.19831):
+
+    >>> copper = {"name": "copper", "rho_ref": 1.7241e-8, "alpha": 1.0 / 254.5, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 573.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> [round(r * 1e8, 5) for r in resistivities(copper, [293.15, 363.15], "linear")]
+    [1.7241, 2.19831]
+    """
     out = []
     for t in points:
         out.append(resistivity_value(m, t, model))
@@ -71,7 +96,23 @@ def resistivities(m, points, model):
 
 
 def heat_integral_of(m, model, lo, hi, cv):
-    """∫ c_v/ρ(θ) dθ from lo to hi [K] with m's own ρ(T), [A^2*s/m^4]."""
+    """∫ c_v/ρ(θ) dθ from lo to hi [K] with m's own ρ(T) by ``model``, [A^2*s/m^4]; cv [J/(K*m^3)].
+
+    The right side of the adiabatic balance J² t = ∫ c_v/ρ dθ (short_circuit.heat_integral: Simpson's
+    rule over short_circuit.integration_points).
+
+    Examples
+    --------
+    Copper with IEC 60949's constants (c_v = 3.45e6 J/(K*m^3), ρ20 = 1.7241e-8 ohm*m, β = 234.5 K,
+    so α = 1/(β + 20)) from 90 °C to 250 °C. IEC 60949's closed form by hand:
+    K² ln((θf + β)/(θi + β)) with K² = c_v (β + 20) / ρ20 = 5.0926e16, ln(484.5 / 324.5) = 0.40083,
+    giving 2.04130e16 A^2*s/m^4 (K = 225.7 A*s^0.5/mm^2, Table I's 226 rounded):
+
+    >>> copper = {"name": "copper", "rho_ref": 1.7241e-8, "alpha": 1.0 / 254.5, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 573.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> '%.5e' % heat_integral_of(copper, "linear", 363.15, 523.15, 3.45e6)
+    '2.04130e+16'
+    """
     return sc.heat_integral(resistivities(m, sc.integration_points(lo, hi), model), lo, hi, cv)
 
 
@@ -81,6 +122,19 @@ def final_temperature(m, model, t_i, target, cv, cap):
     Newton's method on F(θ) = ∫ c_v/ρ dθ − target, whose slope is c_v/ρ(θ), kept inside a
     bisection bracket [lo, hi] (a step that leaves it bisects instead); stops when a step is below
     1e-10 of θ. About five integrals instead of the 35 of bisection alone.
+
+    Examples
+    --------
+    The inverse of heat_integral_of's example: copper from 90 °C with J² t = 2.04130e16 A^2*s/m^4
+    reaches 250 °C (IEC 60949's closed form, solved by hand for θf: (θi + β) e^(J² t / K²) − β
+    = 324.5 · 1.49307 − 234.5 = 250.0 °C); a cap below that gives -1.0:
+
+    >>> copper = {"name": "copper", "rho_ref": 1.7241e-8, "alpha": 1.0 / 254.5, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 573.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> round(final_temperature(copper, "linear", 363.15, 2.04130e16, 3.45e6, 2000.0) - 273.15, 2)
+    250.0
+    >>> final_temperature(copper, "linear", 363.15, 2.04130e16, 3.45e6, 473.15)
+    -1.0
     """
     if heat_integral_of(m, model, t_i, cap, cv) < target:
         return -1.0

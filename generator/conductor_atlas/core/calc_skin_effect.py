@@ -50,7 +50,14 @@ CAUTION = ("Straight conductors, with proximity only between the conductors of t
 
 # __pragma__ ('nokwargs')
 def half_thickness(size):
-    """The depth the current must reach from the surface: the radius, or half a bar's thickness [m]."""
+    """The depth the current must reach from the surface: the radius, or half a bar's thickness [m].
+
+    Examples
+    --------
+    >>> from conductor_atlas.core.geometry import parse_size
+    >>> half_thickness(parse_size("100 x 10 mm")), half_thickness(parse_size("d 2 mm"))
+    (0.005, 0.001)
+    """
     if size["shape"] == "bar":
         return size["thickness"] / 2.0
     return size["diameter"] / 2.0
@@ -158,7 +165,24 @@ def calculate(inputs, catalogue):
 
 def mean_free_path_check(outcome, m, rho, t, delta):
     """ℓ at t (the record's, scaled by ρ·ℓ = const; else the free-electron ℓ = ħk_F/(n e² ρ)) and ℓ/δ,
-    with calc_common.warn_if_anomalous's warning."""
+    with calc_common.warn_if_anomalous's warning.
+
+    Examples
+    --------
+    Copper with ℓ = 39 nm on record at 20 °C (Gall 2016, Table 1: 39.9 nm; rounded here) at 1 GHz:
+    δ = sqrt(ρ / (π f μ0)) = 2.0898 µm with scipy.constants.mu_0, so ℓ/δ = 0.01866 by hand, far
+    below the anomalous-skin-effect warning's 0.3:
+
+    >>> from conductor_atlas.core.outcome import new_outcome
+    >>> copper = {"name": "copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0,
+    ...           "mean_free_path": 39e-9, "mean_free_path_t": 293.15, "mean_free_path_source": "gall2016",
+    ...           "mean_free_path_how": "", "electron_density": 8.47e28}
+    >>> outcome = new_outcome("example", {})
+    >>> mean_free_path_check(outcome, copper, 1.7241e-8, 293.15, 2.0898e-6)
+    >>> outcome["results"]["path_ratio"]["text"], outcome["warnings"]
+    ('0.0187', [])
+    """
     found = recorded_mean_free_path(m, rho, t)
     mfp = found[0]
     sources = []

@@ -97,7 +97,24 @@ def is_ec_aluminium(m, catalogue):
 
 
 def material_k(outcome, m, catalogue):
-    """k [K] for the material, with a warning that says where it comes from; None on error."""
+    """k [K] for the material, with a warning that says where it comes from; None on error.
+
+    Copper 234.5 and EC aluminium 225 (IEEE Std 118, IEC 60034-1; from memory); any other material
+    with a positive α at t_ref: k = 1/α − t_ref, t_ref in °C (practice.inferred_zero_from_alpha).
+
+    Examples
+    --------
+    A copper alloy with α = 0.0039 /K at 20 °C: k = 1/0.0039 − 20 = 236.41 by hand:
+
+    >>> from conductor_atlas.core.outcome import new_outcome
+    >>> catalogue = {"aliases": {"cu": "copper-annealed"}}
+    >>> copper = {"id": "copper-annealed", "klass": "conductor-grade", "name": "annealed copper"}
+    >>> alloy = {"id": "copper-alloy-x", "klass": "copper-alloy", "name": "alloy X", "alpha": 0.0039,
+    ...          "t_ref": 293.15, "alpha_source": "demo (invented)"}
+    >>> outcome = new_outcome("example", {})
+    >>> material_k(outcome, copper, catalogue), round(material_k(outcome, alloy, catalogue), 2)
+    (234.5, 236.41)
+    """
     if is_copper(m, catalogue):
         add_warning(outcome, "k = 234.5 for copper, as IEEE Std 118 and IEEE Std 112 use it; IEC 60034-1 rounds it "
                              "to 235 (from memory); enter k to use another value")

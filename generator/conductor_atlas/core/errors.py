@@ -21,6 +21,16 @@ class CoreError(Exception):
 
 
 def check_positive(x, field, what):
-    """Raise CoreError(field) unless x is a finite number above 0 (NaN and ±∞ are refused too)."""
+    """Raise CoreError(field) unless x is a finite number above 0 (NaN and ±∞ are refused too).
+
+    Examples
+    --------
+    >>> check_positive(2.5e-3, "radius", "the radius")
+    >>> try:
+    ...     check_positive(float("nan"), "radius", "the radius")
+    ... except CoreError as problem:
+    ...     print(problem.field + ": " + problem.message)
+    radius: the radius must be a finite number above 0
+    """
     if not (x - x == 0) or x <= 0.0:
         raise CoreError(what + " must be a finite number above 0", field)

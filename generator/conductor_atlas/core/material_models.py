@@ -244,7 +244,15 @@ def within_model(found):
 # (positional arguments only, as above)
 # __pragma__ ('nokwargs')
 def model_key(m, t, model):
-    """The model key ``model`` stands for at temperature t [K]: "auto" (or empty) is choose_model's pick."""
+    """The model key ``model`` stands for at temperature t [K]: "auto" (or empty) is choose_model's pick.
+
+    Examples
+    --------
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> model_key(copper, 363.15, "auto"), model_key(copper, 363.15, ""), model_key(copper, 363.15, "table")
+    ('linear', 'linear', 'table')
+    """
     if model == "auto" or len(model) == 0:
         return choose_model(m, t)
     return model
@@ -275,7 +283,24 @@ def resistivity_value(m, t, model):
 def model_rho(m, t, key, model):
     """ρ [ohm*m] of m at t [K] by model ``key`` (resolved, not "auto"); ``model`` is the name typed, for
     the message when no model has that name. Raises CoreError (field "model" or "temperature") when the
-    model is not on record for m or does not reach t."""
+    model is not on record for m or does not reach t.
+
+    Examples
+    --------
+    Linear, IEC 60028 copper at 90 °C: 1.7241e-8 · (1 + 0.00393 · 70) = 2.19840e-8 ohm*m by hand.
+    Callendar–Van Dusen with IEC 60751's coefficients and ρ0 of platinum 1.05e-7 ohm*m (an example
+    value): ρ(100 °C) = 1.385055 ρ0, a Pt100's 138.5055 ohm over 100 ohm (IEC 60751 Table 1, from
+    memory):
+
+    >>> copper = {"name": "annealed copper", "rho_ref": 1.7241e-8, "alpha": 0.00393, "t_ref": 293.15,
+    ...           "valid_from": 223.15, "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0}
+    >>> round(model_rho(copper, 363.15, "linear", "linear") * 1e8, 5)
+    2.1984
+    >>> pt = {"name": "platinum", "rho_ref": 1.05e-7, "t_ref": 273.15, "cvd_a": 3.9083e-3, "cvd_b": -5.775e-7,
+    ...       "cvd_c": -4.183e-12}
+    >>> round(model_rho(pt, 373.15, "callendar-van-dusen", "auto") / 1.05e-7, 6)
+    1.385055
+    """
     if key == "linear":
         if not has_linear(m):
             raise CoreError("no temperature coefficient is on record for " + m["name"], "model")

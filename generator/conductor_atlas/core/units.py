@@ -248,6 +248,16 @@ def parse_quantity(text, kind, field="", default_unit=""):
 
     Raises CoreError (with ``field``) for an empty field, a missing or unknown unit, a unit of
     another kind, or a number that is not finite.
+
+    Examples
+    --------
+    Each against pint (tests/core/test_units.py checks every unit the table knows): 68 degF is
+    293.15 K, 1.72 microohm*cm is 1.72e-8 ohm*m, 250 kcmil is 126.677 mm^2:
+
+    >>> round(parse_quantity("68 °F", "temperature"), 9), parse_quantity("1.72 µΩ·cm", "resistivity")
+    (293.15, 1.72e-08)
+    >>> round(parse_quantity("250 kcmil", "area") * 1e6, 3), round(parse_quantity("2.5", "area", "size", "mm2") * 1e6, 12)
+    (126.677, 2.5)
     """
     if text is None:
         raise CoreError("is empty: enter " + KIND_WORDS[kind], field)
@@ -267,7 +277,15 @@ def parse_quantity(text, kind, field="", default_unit=""):
 
 # __pragma__ ('nokwargs')
 def quantity_in_si(text, kind, field, default_unit):
-    """parse_quantity without the memo (``text`` is a str)."""
+    """parse_quantity without the memo (``text`` is a str).
+
+    Examples
+    --------
+    The international foot is 0.3048 m exactly (NIST SP 811, B.8), as pint has it: 328 ft = 99.9744 m:
+
+    >>> round(quantity_in_si("328 ft", "length", "length", ""), 9)
+    99.9744
+    """
     cleaned = normalise_text(text)
     if len(cleaned) == 0:
         raise CoreError("is empty: enter " + KIND_WORDS[kind], field)
