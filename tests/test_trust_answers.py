@@ -257,6 +257,19 @@ def test_suggestions_carry_a_description(catalogue):
     assert "nearest: copper (Standard annealed copper), Co (Cobalt (high purity))" in caught.value.message
 
 
+def test_a_job_typed_as_material_names_the_grades_used_for_it(catalogue):
+    # a winding shop types what it winds with; the refusal lists the grades the data files' `uses`
+    # name for it (common practice, no source) before the nearest spellings ("magnesium" before)
+    with pytest.raises(CoreError) as caught:
+        find_material(catalogue, "magnet wire")
+    message = caught.value.message
+    assert "used for it: copper-annealed (Standard annealed copper), copper-oxygen-free" in message
+    assert message.index("used for it") < message.index("nearest: ")
+    with pytest.raises(CoreError) as caught:
+        find_material(catalogue, "coper")
+    assert "used for it" not in caught.value.message
+
+
 # --- issue 18 item 1: an added folder can never take over a shipped id, alias or name -----------------
 OVERLAY = '''schema = 1
 id = "aaa-overlay"

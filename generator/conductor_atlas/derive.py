@@ -350,8 +350,9 @@ def model_sources(m: Material) -> list[str]:
 
 def calc_catalogue(records: list[dict], materials: list[Material], limits: tuple = ()) -> dict:
     """{"materials": {id: record}, "aliases": {folded alias or name: id}, "display_aliases": {...},
+    "uses": {folded use: [ids]},
     "limits": [conductor-standard tables, standards.limits_record]}."""
-    catalogue = {"materials": {}, "aliases": {}, "display_aliases": {}, "word_keys": {},
+    catalogue = {"materials": {}, "aliases": {}, "display_aliases": {}, "word_keys": {}, "uses": {},
                  "limits": limits_record(limits)}
     taken = {r["id"] for r in records}
     by_id = {m.id: m for m in materials}
@@ -365,6 +366,12 @@ def calc_catalogue(records: list[dict], materials: list[Material], limits: tuple
                 continue
             catalogue["aliases"][key] = m.id
             catalogue["display_aliases"][key] = label
+    # what the trade uses each material for (the files' `uses`), by name key: lookup.materials_used_for
+    for record in records:
+        for use in by_id[record["id"]].uses:
+            ids = catalogue["uses"].setdefault(name_key(use), [])
+            if record["id"] not in ids:
+                ids.append(record["id"])
     # every id, alias and name by its words in sorted order (lookup.loose_match): the first one wins
     for record in records:
         m = by_id[record["id"]]

@@ -156,6 +156,9 @@ def calculator_cases():
             cases.append(("conductor_atlas.core.lookup", "nearest_names", [catalogue, text, count]))
     for text in ("steel", "tinned", "CCS", "copper clad steel", "c", "zirc", "-", "", "brass 70", "Ni Cr"):
         cases.append(("conductor_atlas.core.lookup", "names_with_words", [catalogue, text, 5]))
+    for text in ("magnet wire", "busbar", "heater", "shunt", "wire", "", "zzz"):
+        cases.append(("conductor_atlas.core.lookup", "materials_used_for", [catalogue, text, 4]))
+        cases.append(("conductor_atlas.core.lookup", "find_material", [catalogue, text, "material"]))
     cases.extend(new_calculator_cases(catalogue))
     return cases
 

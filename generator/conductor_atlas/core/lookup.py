@@ -140,6 +140,28 @@ def names_with_words(catalogue, text, count):
     return names[0:count]
 
 
+def materials_used_for(catalogue, text, count):
+    """Up to ``count`` ids of the materials the trade uses for what ``text`` names: every word of text
+    begins a word of one of the material's uses ("magnet wire", "busbar" finds "busbars"), in the
+    order of the catalogue's uses; [] when text has no words or the catalogue lists no uses."""
+    wanted_words = tokens(text)
+    found = []
+    if len(wanted_words) == 0 or not ("uses" in catalogue):
+        return found
+    uses = catalogue["uses"]
+    for key in uses.keys():
+        if not starts_words_of(wanted_words, key):
+            continue
+        for material_id in uses[key]:
+            seen = False
+            for other in found:
+                if other == material_id:
+                    seen = True
+            if not seen and len(found) < count:
+                found.append(material_id)
+    return found
+
+
 # The plain words a practitioner types for conductor metal mean the conductor grade that is bought
 # and measured, not the high-purity element (common practice (no source)); the chemical symbol keeps
 # meaning the element. word -> [grade id, the element's id, the element's symbol]
@@ -259,4 +281,10 @@ def find_material(catalogue, text, field="material"):
             continue  # one name per material
         listed[found] = True
         described.append(name + " (" + materials[found]["name"] + ")")
-    raise CoreError("unknown material “" + str(text).strip() + "”; nearest: " + ", ".join(described), field)
+    message = "unknown material “" + str(text).strip() + "”; "
+    used = []
+    for material_id in materials_used_for(catalogue, text, 4):
+        used.append(lookup_text(catalogue, material_id) + " (" + materials[material_id]["name"] + ")")
+    if len(used) > 0:
+        message = message + "used for it: " + ", ".join(used) + "; "
+    raise CoreError(message + "nearest: " + ", ".join(described), field)
