@@ -109,6 +109,9 @@ def test_bar_gets_an_equal_resistance_bar_of_the_same_thickness(catalogue):
     assert rho_al / (value(out, "bar_width_other") * 0.01) == pytest.approx(RHO_CU / (0.1 * 0.01), rel=1e-14)
     assert "diameter_other" in out["results"]
     assert any("DC only" in w and "skin-effect" in w for w in out["warnings"])
+    # cable sizes (IEC 60228, AWG) do not apply to a bar: no next size, no "more than 4/0 AWG" caution
+    assert "next_metric_size" not in out["results"] and "next_awg" not in out["results"]
+    assert not any("AWG" in w or "stranded" in w for w in out["warnings"])
 
 
 def test_bar_width_at_temperature_and_with_a_range(catalogue):

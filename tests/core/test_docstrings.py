@@ -39,7 +39,7 @@ EXAMPLES_REQUIRED = {
     "calc_skin_effect": ["half_thickness", "mean_free_path_check"],
     "calc_thin_film": ["bulk_mean_free_path"],
     "calc_temperature_rise": ["material_k"],
-    "calc_compare": ["add_bar_width"],
+    "calc_compare": ["add_bar_width", "add_standard_sizes"],
     "filament_inductance": ["rectangle_log_gmd_exact", "rectangle_log_gmd_far", "rectangle_log_gmd", "annulus_log_gmd"],
     "filament_solver": ["skin_depth_mu0", "graded_cells", "bar_group_solution", "bar_pair_solution",
                         "round_layers_solution"],

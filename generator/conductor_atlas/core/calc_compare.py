@@ -103,27 +103,42 @@ def calculate(inputs, catalogue):
         add_result(outcome, "diameter_other", d2, "m", format_number(d2 * 1000.0, 4) + " mm")
         if size["shape"] == "bar":
             add_bar_width(outcome, size, area_ratio)
-        metric = next_metric_size(a2)
-        if metric > 0:
-            add_result(outcome, "next_metric_size", metric / 1e6, "m²", format_number(metric, 4) + " mm²")
         else:
-            add_warning(outcome, "the other material needs more than the largest IEC 60228 size (2500 mm²): use "
-                                 "parallel conductors")
-        gauge = next_awg(a2)
-        if gauge > -99:
-            add_result(outcome, "next_awg", awg_area(gauge), "m²", awg_name(gauge) + " AWG ("
-                       + format_number(awg_area(gauge) * 1e6, 4) + " mm²)")
-        else:
-            add_warning(outcome, "the other material needs more than 4/0 AWG: use kcmil sizes or parallel conductors")
+            add_standard_sizes(outcome, a2)
         if with_mass:
             add_result(outcome, "mass_per_metre", m1["density"] * a1, "kg/m", mass_text(m1["density"] * a1)
                        + " per metre")
             add_result(outcome, "mass_per_metre_other", m2["density"] * a2, "kg/m", mass_text(m2["density"] * a2)
                        + " per metre")
-        add_warning(outcome, "standard sizes are nominal areas: a stranded conductor's resistance is set by its "
-                             "standard's maximum resistance, so check the chosen size against that table")
     check_finite_results(outcome, "size")
     return outcome
+
+
+def add_standard_sizes(outcome, area):
+    """The IEC 60228 and AWG (ASTM B258) sizes at or above ``area`` [m^2], for a round or area size
+    (a bar is answered by its equal-resistance width instead: cable sizes do not apply to it).
+    57.4 mm² (35 mm² copper as 1350 aluminium) lies between IEC 60228's 50 and 70 mm² and between
+    ASTM B258's 1/0 (0.3249 in, 53.49 mm²) and 2/0 (0.3648 in, 67.43 mm²):
+
+    >>> out = new_outcome("compare", {})
+    >>> add_standard_sizes(out, 57.4e-6)
+    >>> out["results"]["next_metric_size"]["text"], out["results"]["next_awg"]["text"]
+    ('70 mm²', '2/0 AWG (67.43 mm²)')
+    """
+    metric = next_metric_size(area)
+    if metric > 0:
+        add_result(outcome, "next_metric_size", metric / 1e6, "m²", format_number(metric, 4) + " mm²")
+    else:
+        add_warning(outcome, "the other material needs more than the largest IEC 60228 size (2500 mm²): use "
+                             "parallel conductors")
+    gauge = next_awg(area)
+    if gauge > -99:
+        add_result(outcome, "next_awg", awg_area(gauge), "m²", awg_name(gauge) + " AWG ("
+                   + format_number(awg_area(gauge) * 1e6, 4) + " mm²)")
+    else:
+        add_warning(outcome, "the other material needs more than 4/0 AWG: use kcmil sizes or parallel conductors")
+    add_warning(outcome, "standard sizes are nominal areas: a stranded conductor's resistance is set by its "
+                         "standard's maximum resistance, so check the chosen size against that table")
 
 
 def add_bar_width(outcome, size, area_ratio):
