@@ -113,3 +113,18 @@ def test_old_transpiled_cores_are_pruned(tmp_path):
     unfinished.mkdir()
     transpile.prune_transpiled(folder, keep=folder / "core0", newest=2)
     assert sorted(p.name for p in folder.iterdir()) == ["core0", "core4", "core5", "scratch"]
+
+
+def test_code_edited_during_a_build_leaves_nothing_in_the_cache(tmp_path, own_cache, extra_folder, monkeypatch):
+    """A build reads the code's version when it starts, but rendered with modules imported before: a
+    file edited in that window (seen: a test run going while a calculator's summary was edited) stored
+    pages of the old code under the new version, and every later build served the old summary. The
+    version is read again at the end; when it moved, what the build stored is removed."""
+    versions = iter([b"version at the start", b"version after an edit", b"version after an edit"])
+    monkeypatch.setattr(cache, "code_version", lambda: next(versions))
+    build(tmp_path / "site", [extra_folder])
+    assert list((own_cache / "build").rglob("*.pickle")) == []
+    monkeypatch.setattr(cache, "code_version", lambda: b"version after an edit")
+    report = build(tmp_path / "site", [extra_folder])
+    assert len(cache.LAST_STATS["made"]) == report.materials + len(SITE_PARTS) + len(SCRIPT_PARTS)
+    assert list((own_cache / "build").rglob("*.pickle")) != []

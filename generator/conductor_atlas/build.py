@@ -122,5 +122,6 @@ def build(out: Path, extra_data: list[Path] | None = None, inputs: BuildInputs |
                              written=published.written)
         if inputs is not None:
             inputs.remember({"materials": report.materials, "files": report.files, "bytes": report.bytes})
+    cache.drop_if_code_changed()
     cache.prune()
     return report

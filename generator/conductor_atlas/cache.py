@@ -111,6 +111,7 @@ class BuildCache:
         self.made: list[str] = []
         self.reused: list[str] = []
         self.used: set[Path] = set()
+        self.written: list[Path] = []
         LAST_STATS["made"], LAST_STATS["reused"] = self.made, self.reused
 
     def _path(self, label: str, key: bytes) -> Path:
@@ -148,8 +149,26 @@ class BuildCache:
             with tempfile.NamedTemporaryFile(dir=path.parent, prefix=".tmp-", delete=False) as handle:
                 handle.write(data)
             os.replace(handle.name, path)
+            self.written.append(path)
         except OSError:
             pass  # a cache that cannot be written only makes the next build slower
+
+    def drop_if_code_changed(self) -> bool:
+        """Remove what this build stored when the code changed while it ran; True if it did.
+
+        The version is read from the files when the build starts, but the modules that render were
+        imported earlier: a file edited in between (a test run or a build going while a developer
+        edits) gives pages made by the old code under the new version, and every later build would
+        reuse them. Comparing the version again at the end finds that window."""
+        if self.folder is None or code_version() == self.version:
+            return False
+        for path in self.written:
+            try:
+                path.unlink()
+            except OSError:
+                pass
+        self.written = []
+        return True
 
     def prune(self, limit_bytes: int = LIMIT_BYTES) -> list[Path]:
         """Remove the least recently used entries until the folder holds at most ``limit_bytes``;
