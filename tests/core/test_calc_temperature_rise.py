@@ -11,11 +11,12 @@ import subprocess
 import sys
 
 import pytest
+from scipy.constants import zero_Celsius
 
 from conductor_atlas.core.calc_temperature_rise import calculate as calculate_temperature_rise
 from tests.support.outcomes import result_value as value
 
-T0 = 273.15
+T0 = zero_Celsius  # 273.15 K, scipy.constants (the definition of the Celsius scale)
 
 
 def run(catalogue, **fields):

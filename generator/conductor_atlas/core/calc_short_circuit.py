@@ -2,11 +2,10 @@
 under a fault current, by the adiabatic heat balance with the material's own ρ(T), IEC 60949 beside it."""
 
 from conductor_atlas.core import short_circuit as sc
-from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import next_metric_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at, resistivity_value
-from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
+from conductor_atlas.core.numfmt import celsius_text, format_fixed, format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           has_errors, new_outcome)
 from conductor_atlas.core.calc_inputs import (field_text, read_material, read_quantity, read_size,
@@ -167,10 +166,6 @@ def guard_squares(outcome, current, size):
             sc.check_squarable(size["area"], "size", "the cross-section")
     except CoreError as problem:
         add_error(outcome, problem.field, problem.message)
-
-
-def celsius_text(t):
-    return format_fixed(t - ZERO_CELSIUS, 1) + " °C"
 
 
 def difference_text(value, reference):

@@ -4,7 +4,7 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
 from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.text_match import name_key
-from conductor_atlas.core.numfmt import format_fixed, format_number, temperature_text
+from conductor_atlas.core.numfmt import celsius_text, format_fixed, format_number, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results, has_errors,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_quantity, require_positive
@@ -132,8 +132,8 @@ def material_k(outcome, m, catalogue):
     k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
     add_sources(outcome, [m["alpha_source"]])
     add_warning(outcome, "k = " + format_number(k, 4) + " from the temperature coefficient of " + m["name"] + " (α = "
-                + format_number(m["alpha"], 4) + " /K at " + format_fixed(m["t_ref"] - ZERO_CELSIUS, 1)
-                + " °C): k = 1/α − t_ref; the standards give k for copper and aluminium only")
+                + format_number(m["alpha"], 4) + " /K at " + celsius_text(m["t_ref"])
+                + "): k = 1/α − t_ref; the standards give k for copper and aluminium only")
     if m["alpha"] < 1e-3:
         add_warning(outcome, "the resistance of " + m["name"] + " changes little with temperature (α below 0.001 /K), "
                              "so small measurement errors in R1 and R2 give large temperature errors")
@@ -203,12 +203,12 @@ def calculate(inputs, catalogue):
     add_result(outcome, "temperature_hot", t2, "K", temperature_text(t2))
     if coolant is not None:
         add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the coolant ("
-                   + format_fixed(coolant - ZERO_CELSIUS, 1) + " °C)")
+                   + celsius_text(coolant) + ")")
     elif coolant_bad:
         pass  # the rise needs the coolant typed: it is left out, the message is under the field
     else:
         add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the cold temperature ("
-                   + format_fixed(t1 - ZERO_CELSIUS, 1) + " °C)")
+                   + celsius_text(t1) + ")")
     add_result(outcome, "resistance_ratio", r2 / r1, "", format_number(r2 / r1, 5))
     add_result(outcome, "k", k, "K", format_number(k, 5) + " (inferred zero at " + format_number(-k, 5) + " °C)")
     if t2 < LINEAR_FROM or t2 > LINEAR_TO:

@@ -248,7 +248,25 @@ def format_si(x, unit, sig=4):
 
 
 # __pragma__ ('nokwargs')
+def celsius_text(t):
+    """A temperature t [K] in degrees Celsius to one decimal, t − 273.15 K (the zero of Celsius,
+    core.celsius): "90.0 °C". The one home of the core's temperature texts.
+
+    Examples
+    --------
+    >>> celsius_text(363.15), celsius_text(4.2), celsius_text(0.0)
+    ('90.0 °C', '−269.0 °C', '−273.2 °C')
+    """
+    return format_fixed(t - ZERO_CELSIUS, 1) + " °C"
+
+
 def temperature_text(t):
-    """A temperature in K as text a person reads: "90.0 °C (363.15 K)"."""
-    return format_fixed(t - ZERO_CELSIUS, 1) + " °C (" + format_fixed(t, 2) + " K)"
+    """A temperature t [K] as text a person reads: "90.0 °C (363.15 K)" (celsius_text, then kelvin).
+
+    Examples
+    --------
+    >>> temperature_text(363.15)
+    '90.0 °C (363.15 K)'
+    """
+    return celsius_text(t) + " (" + format_fixed(t, 2) + " K)"
 # __pragma__ ('kwargs')
