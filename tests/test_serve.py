@@ -35,33 +35,23 @@ EXPECTED = {
 }
 
 
-@pytest.fixture(scope="module")
-def http_site(built_site):
-    server = make_server(built_site, port=0, quiet=True)
-    thread = threading.Thread(target=server.serve_forever, daemon=True)
-    thread.start()
-    yield f"http://127.0.0.1:{server.server_address[1]}"
-    server.shutdown()
-    server.server_close()
-
-
 @pytest.mark.parametrize("path, mime", sorted(EXPECTED.items()))
-def test_content_type(http_site, built_site, path, mime):
+def test_content_type(served_site, built_site, path, mime):
     assert (built_site / path).is_file(), f"the built site has no {path}"
-    with urllib.request.urlopen(f"{http_site}/{path}") as response:
+    with urllib.request.urlopen(f"{served_site}/{path}") as response:
         assert response.status == 200
         assert response.headers.get_content_type() == mime
         assert response.read() == (built_site / path).read_bytes()
 
 
-def test_directory_url_serves_its_index(http_site, built_site):
-    with urllib.request.urlopen(f"{http_site}/materials/copper-annealed/") as response:
+def test_directory_url_serves_its_index(served_site, built_site):
+    with urllib.request.urlopen(f"{served_site}/materials/copper-annealed/") as response:
         assert response.read() == (built_site / "materials/copper-annealed/index.html").read_bytes()
 
 
-def test_missing_file_is_404(http_site):
+def test_missing_file_is_404(served_site):
     with pytest.raises(urllib.error.HTTPError) as info:
-        urllib.request.urlopen(f"{http_site}/no-such-page.html")
+        urllib.request.urlopen(f"{served_site}/no-such-page.html")
     assert info.value.code == 404
 
 
@@ -78,9 +68,9 @@ def test_folder_without_a_site_is_refused(tmp_path):
         make_server(tmp_path, port=0)
 
 
-def raw_request(http_site: str, request_line: bytes) -> bytes:
+def raw_request(served_site: str, request_line: bytes) -> bytes:
     """Send one raw request line over a loopback socket; return all the server answered."""
-    host, port = http_site.removeprefix("http://").split(":")
+    host, port = served_site.removeprefix("http://").split(":")
     with socket.create_connection((host, int(port)), timeout=10) as conn:
         conn.sendall(request_line + b"\r\nHost: 127.0.0.1\r\nConnection: close\r\n\r\n")
         chunks = []
@@ -90,20 +80,20 @@ def raw_request(http_site: str, request_line: bytes) -> bytes:
 
 
 @pytest.mark.parametrize("path", [b"/%00", b"/index.html%00.css", b"/materials/%00/", b"/static/%00style.css"])
-def test_encoded_nul_byte_is_a_bad_request(http_site, path):
+def test_encoded_nul_byte_is_a_bad_request(served_site, path):
     """A path with an encoded NUL used to drop the connection with no answer (os.stat: embedded null byte)."""
-    answer = raw_request(http_site, b"GET " + path + b" HTTP/1.1")
+    answer = raw_request(served_site, b"GET " + path + b" HTTP/1.1")
     assert answer.startswith(b"HTTP/1.0 400 "), answer[:200]
 
 
-def test_security_policy_is_sent_as_headers(http_site, built_site):
+def test_security_policy_is_sent_as_headers(served_site, built_site):
     """The pages' meta policy as a header, plus what a meta tag cannot carry (CSP Level 3, §6.4.2:
     frame-ancestors is ignored in <meta>); nosniff (Fetch standard, "X-Content-Type-Options")."""
     page = (built_site / "index.html").read_text(encoding="utf-8")
     meta_policy = re.search(r'http-equiv="Content-Security-Policy" content="([^"]*)"', page).group(1)
     for path in ("index.html", "static/style.css", "no-such-page.html"):
         try:
-            response = urllib.request.urlopen(f"{http_site}/{path}")
+            response = urllib.request.urlopen(f"{served_site}/{path}")
         except urllib.error.HTTPError as error:  # the 404 page carries the headers too
             response = error
         policy = response.headers["Content-Security-Policy"]
@@ -178,18 +168,18 @@ def test_certificate_mistakes_are_one_line_messages(built_site, tmp_path):
         make_server(built_site, port=0, cert=junk)
 
 
-def test_every_folder_has_an_index_page(http_site, built_site):
+def test_every_folder_has_an_index_page(served_site, built_site):
     folders = [p for p in built_site.rglob("*") if p.is_dir()]
     assert len(folders) > 50
     assert [p for p in folders if not (p / "index.html").is_file()] == []
-    with urllib.request.urlopen(f"{http_site}/materials/", timeout=10) as answer:
+    with urllib.request.urlopen(f"{served_site}/materials/", timeout=10) as answer:
         page = answer.read().decode("utf-8")
     assert "<h1>Materials</h1>" in page
     for material in (built_site / "materials").iterdir():
         if material.is_dir():
             assert f'materials/{material.name}/index.html"' in page, f"materials/ does not list {material.name}"
     for folder in ("static/", "static/icons/", "js/"):
-        with urllib.request.urlopen(f"{http_site}/{folder}", timeout=10) as answer:
+        with urllib.request.urlopen(f"{served_site}/{folder}", timeout=10) as answer:
             text = answer.read().decode("utf-8")
         assert "Directory listing" not in text and "nothing in it to read" in text, folder
 

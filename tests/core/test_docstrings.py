@@ -27,7 +27,7 @@ EXAMPLES_REQUIRED = {
     "temperature_models": None, "layered_round": None, "clad_layers": None, "search_size": None,
     "round_pair": None, "errors": None,
     "geometry": ["awg_number", "awg_name", "awg_diameter_exact", "awg_diameter", "awg_area", "round_area",
-                 "diameter_from_area", "next_metric_size", "next_awg"],
+                 "diameter_from_area", "next_metric_size", "next_awg", "parse_size", "size_from_text"],
     "material_models": ["cvd_ratio", "choose_model", "resistivity_or_none", "within_model", "resistivity_at",
                         "local_temperature_coefficient", "model_key", "model_rho", "resistivity_value"],
     "units": ["parse_quantity", "quantity_in_si"],

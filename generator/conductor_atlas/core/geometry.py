@@ -309,9 +309,24 @@ LAST_SIZE = {}
 
 
 def parse_size(text, field="size"):
-    """Parse a conductor size (see module docstring) into a size record with SI values.
+    """Parse a conductor size (see module docstring) into a size record with SI values: "shape",
+    "area" [m^2], "label", "diameter", "width", "thickness" [m] (0.0 where the shape has none).
 
     Raises CoreError naming ``field`` for anything it cannot read or that is not positive.
+
+    Examples
+    --------
+    12 AWG is 80.8 mil = 2.05232 mm in ASTM B258's table, so π d²/4 = 3.3081 mm² by hand; a bar's
+    area is width times thickness; 250 kcmil is 126.677 mm² with pint:
+
+    >>> s = parse_size("12 AWG")
+    >>> s["shape"], round(s["diameter"] * 1e3, 5), round(s["area"] * 1e6, 4)
+    ('round', 2.05232, 3.3081)
+    >>> s = parse_size("100 x 10 mm")
+    >>> s["shape"], round(s["area"] * 1e6, 9), s["width"], s["thickness"]
+    ('bar', 1000.0, 0.1, 0.01)
+    >>> round(parse_size("250 kcmil")["area"] * 1e6, 3)
+    126.677
     """
     if text is None or len(str(text).strip()) == 0:
         raise CoreError("is empty: enter a size (e.g. 2.5 mm², 12 AWG, d 1.6 mm, 40 x 5 mm)", field)
@@ -330,7 +345,20 @@ def parse_size(text, field="size"):
 
 # __pragma__ ('nokwargs')
 def size_from_text(text, field):
-    """parse_size without the memo (``text`` is a non-empty str)."""
+    """parse_size without the memo (``text`` is a non-empty str).
+
+    Examples
+    --------
+    4/0 AWG is 0.4600 in = 11.684 mm (ASTM B258), π d²/4 = 107.219 mm² by hand; "d 1.6 mm" a round
+    wire of π 1.6²/4 = 2.0106 mm²:
+
+    >>> s = size_from_text("4/0 AWG", "size")
+    >>> s["label"], round(s["diameter"] * 1e3, 6), round(s["area"] * 1e6, 3)
+    ('4/0 AWG', 11.684, 107.219)
+    >>> s = size_from_text("d 1.6 mm", "size")
+    >>> s["label"], round(s["area"] * 1e6, 4)
+    ('ø 1.6 mm', 2.0106)
+    """
     raw = normalise_text(text)
     compact = raw.strip()
     gauge = awg_gauge_text(compact)
