@@ -109,3 +109,13 @@ def test_falling_table_of_a_pure_metal(tmp_path):
 def test_missing_folder(tmp_path):
     found = problems_of([DATA_DIR, tmp_path / "absent"])
     assert any("absent: is not a folder" in p for p in found)
+
+
+def test_uses_are_read_and_a_search_spelling_is_shown_once():
+    # the data file lists "bus bars" beside "busbars" so that both spellings find copper; the page
+    # lists the use once
+    cu = load_dataset([DATA_DIR]).by_id("copper-annealed")
+    assert "busbars" in cu.uses and "bus bars" in cu.uses
+    shown = cu.shown_uses()
+    assert "busbars" in shown and "bus bars" not in shown
+    assert len(shown) == len(cu.uses) - 1

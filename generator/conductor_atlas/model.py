@@ -129,6 +129,18 @@ class Material:
     def get(self, name: str) -> Value | None:
         return self.properties.get(name)
 
+    def shown_uses(self) -> list[str]:
+        """The uses as the page lists them: a spelling kept for search only ("bus bars" beside
+        "busbars", the same letters without spaces or hyphens) is shown once."""
+        seen: set[str] = set()
+        shown = []
+        for use in self.uses:
+            key = "".join(ch for ch in use.lower() if ch.isalnum())
+            if key not in seen:
+                seen.add(key)
+                shown.append(use)
+        return shown
+
     def resistivity_source_keys(self) -> list[str]:
         """The sources of ρ and its temperature dependence (reference value, coefficient, table)."""
         keys = {v.source for name, v in self.properties.items()
