@@ -35,9 +35,13 @@ CASES = [
     ["bar 100x10 mm Cu 50 Hz", "bar_group_solution", [0.1, 0.01, 1, 0.0, RHO_CU, 50.0], 100],
     ["bar 40x5 mm Cu 50 Hz", "bar_group_solution", [0.04, 0.005, 1, 0.0, RHO_CU, 50.0], 100],
     ["bar 200x10 mm Cu 400 Hz", "bar_group_solution", [0.2, 0.01, 1, 0.0, RHO_CU, 400.0], 100],
+    # the slowest single bar seen on the page: three levels, 288 filaments per quarter at the last
+    ["bar 100x10 mm Cu 400 Hz", "bar_group_solution", [0.1, 0.01, 1, 0.0, RHO_CU, 400.0], 100],
     ["bar 20x5 mm Cu 10 kHz", "bar_group_solution", [0.02, 0.005, 1, 0.0, RHO_CU, 1e4], 100],
     ["2 x 100x10 mm gap 10 mm 50 Hz", "bar_group_solution", [0.1, 0.01, 2, 0.01, RHO_CU, 50.0], 300],
     ["3 x 100x10 mm gap 10 mm 50 Hz", "bar_group_solution", [0.1, 0.01, 3, 0.01, RHO_CU, 50.0], 300],
+    # the slowest group seen on the page: many skin depths across, 378 filaments per quarter at level 1
+    ["3 x 100x10 mm gap 10 mm 100 kHz", "bar_group_solution", [0.1, 0.01, 3, 0.01, RHO_CU, 1e5], 300],
     ["pair 100x10 mm at 30 mm 50 Hz", "bar_pair_solution", [0.1, 0.01, 0.03, RHO_CU, 50.0], 100],
     ["CCA 2 mm, 1 MHz (rings)", "round_layers_solution", [[[0.000949, RHO_AL], [0.001, RHO_CU]], 1e6], 100],
     # round go-and-return pairs (core/round_pair.py, harmonics instead of filaments): the slowest are

@@ -65,6 +65,14 @@ BAR_CASES = [
     {"label": "3 bars 100 x 10 mm, gap 10 mm, 50 Hz", "fields": {"size": "100 x 10 mm",
                                                                 "arrangement": "3 bars, gap 10 mm", "frequency": "50 Hz"},
      "edit": "frequency", "other": "60 Hz"},
+    # the slowest bar cases seen on the page: a wide bar a few skin depths thick (three levels), and a
+    # group many skin depths across (the largest first mesh)
+    {"label": "single bar 100 x 10 mm, 400 Hz", "fields": {"size": "100 x 10 mm", "arrangement": "single",
+                                                         "frequency": "400 Hz"}, "edit": "frequency", "other": "390 Hz"},
+    {"label": "3 bars 100 x 10 mm, gap 10 mm, 100 kHz", "fields": {"size": "100 x 10 mm",
+                                                                  "arrangement": "3 bars, gap 10 mm",
+                                                                  "frequency": "100 kHz"},
+     "edit": "frequency", "other": "90 kHz"},
     # a go-and-return pair of round wires: the exact multipole solution (core/round_pair.py)
     {"label": "round pair d 20 mm at 22 mm, 1 kHz", "fields": {"size": "d 20 mm", "arrangement": "pair, 22 mm",
                                                               "frequency": "1 kHz"}, "edit": "frequency", "other": "2 kHz"},
@@ -309,8 +317,11 @@ def figures(results: dict) -> list[dict]:
             add("browser", f"bar solver: {label}, keystroke handler", r["handler_ms"], "ms", fl, "≤ 16 ms (a frame)",
                 r["handler_ms"] <= 16, "slowest of the keystrokes: the solve waits for a pause in typing; "
                 f"'solving' shown: {r['busy_shown']}")
-            add("browser", f"bar solver: {label}, the solve (longest task)", r["input_block_ms"], "ms",
-                note="runs once typing pauses, after the 'Solving …' note is painted; "
+            # issue 14's targets at x4 throttling: a single bar (or pair) <= 100 ms, a group of bars <= 300 ms
+            limit = 300.0 if " bars " in label else 100.0
+            solve_ms = median(r["blocks_ms"])
+            add("browser", f"bar solver: {label}, the solve (longest task, median)", solve_ms, "ms", None,
+                f"≤ {limit:g} ms", solve_ms <= limit, "runs once typing pauses, after the 'Solving …' note is painted; "
                 "per change: " + ", ".join(f"{t:.0f}" for t in r["blocks_ms"]))
         big = max(results["settings"]["scales"], default=50)
         limits = (("search", "search, shipped set", 5.0), ("search_big", f"search, ×{big} set", 50.0))

@@ -37,8 +37,9 @@ from conductor_atlas.derived_table import Column, Row, Table
 
 CORE_DIR = Path(filament_solver.__file__).parent
 STORE = Path(__file__).with_name("bar_ratios.json")
-# the files whose code decides a solution (solver, inductances, linear solve, μ0)
-SOLVER_FILES = ("filament_solver.py", "filament_inductance.py", "complex_linear.py", "constants.py")
+# the files whose code decides a solution (driver, mesh, matrix, inductances, linear solve, skin depth, μ0)
+SOLVER_FILES = ("filament_solver.py", "filament_mesh.py", "filament_matrix.py", "filament_inductance.py",
+                "complex_linear.py", "skin_effect.py", "constants.py")
 # Flat bar sizes, width x thickness [mm], from 20 x 5 to 200 x 10: sizes copper and aluminium busbar
 # is commonly stocked in (common practice (no source)).
 BAR_SIZES_MM = ((20, 5), (30, 5), (40, 5), (50, 5), (40, 10), (50, 10), (60, 10), (80, 10), (100, 10),

@@ -113,8 +113,10 @@ def test_tabulated_inductances_equal_the_direct_sum(blocks, sym_x, sym_y):
     # the two differ only in rounding (edges taken from the mesh, not as centre +- half side; the
     # closed form's 16 terms cancel to the result): measured 1e-13 relative, tolerance 1e-12
     from conductor_atlas.core.filament_inductance import rectangle_log_gmd
-    from conductor_atlas.core.filament_solver import _filaments, _images, filament_log_gmds, skin_depth_mu0
-    mesh = _filaments(blocks, skin_depth_mu0(RHO_CU, 50.0), 1.0)
+    from conductor_atlas.core.filament_matrix import filament_log_gmds
+    from conductor_atlas.core.filament_mesh import filament_mesh, mirror_images
+    from conductor_atlas.core.skin_effect import skin_depth
+    mesh = filament_mesh(blocks, skin_depth(RHO_CU, 50.0), 1.0)
     fils = mesh[0]
     logs = filament_log_gmds(mesh, sym_x, sym_y)
     n = len(fils)
@@ -124,5 +126,5 @@ def test_tabulated_inductances_equal_the_direct_sum(blocks, sym_x, sym_y):
         for j in range(n):
             b = fils[j]
             direct = sum(img[2] * rectangle_log_gmd(a[0], a[1], a[2], a[3], img[0] * b[0], img[1] * b[1], b[2], b[3])
-                         for img in _images(sym_x, sym_y))
+                         for img in mirror_images(sym_x, sym_y))
             assert logs[i * n + j] == pytest.approx(direct, rel=1e-12)

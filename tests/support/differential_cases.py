@@ -295,9 +295,9 @@ def new_calculator_cases(catalogue):
 
 
 def fs_mesh_example():
-    """A quarter of a 20 x 3 mm bar cut 3 x 2 (graded), as core.filament_solver._filaments builds it."""
-    from conductor_atlas.core.filament_solver import _filaments
-    return _filaments([[0.0, 0.01, 0.0, 0.0015, False, True, False, True, 0, 1.7241e-8]], 9.3e-3, 1.0)
+    """A quarter of a 20 x 3 mm bar cut 3 x 3 (graded), as core.filament_mesh.filament_mesh builds it."""
+    from conductor_atlas.core.filament_mesh import filament_mesh
+    return filament_mesh([[0.0, 0.01, 0.0, 0.0015, False, True, False, True, 0, 1.7241e-8]], 9.3e-3, 1.0)
 
 
 def filament_cases():
@@ -305,6 +305,8 @@ def filament_cases():
     fi = "conductor_atlas.core.filament_inductance"
     fs = "conductor_atlas.core.filament_solver"
     cl = "conductor_atlas.core.complex_linear"
+    fm = "conductor_atlas.core.filament_mesh"
+    fx = "conductor_atlas.core.filament_matrix"
     cases = []
     for placement in ([0.0, 0.0, 1e-3, 1e-3, 0.0, 0.0, 1e-3, 1e-3], [0.0, 0.0, 2e-3, 5e-4, 1.5e-3, 2e-4, 1e-3, 1e-3],
                       [0.0, 0.0, 1e-3, 1e-3, 4e-3, 3e-3, 1e-3, 2e-3], [0.0, 0.0, 1e-3, 1e-3, 0.05, -0.02, 1e-3, 2e-3]):
@@ -321,14 +323,25 @@ def filament_cases():
     cases.append((cl, "solve_complex", [[0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
     cases.append((cl, "solve_complex_symmetric", [[2.0, 0.5, 0.5, 3.0], [1.0, -0.3, -0.3, 2.0], [1.0, 2.0], [0.0, 1.0], 2]))
     cases.append((cl, "solve_complex_symmetric", [[0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    cases.append((cl, "back_substitute", [[2.0, 1.0, 0.0, 1.0], [0.0, 0.5, 0.0, 1.0], [3.0, 1.0], [0.0, 1.0], 2]))
     for args in ([0.0, 0.05, False, True, 9.3e-3, 1], [0.0, 0.005, True, True, 9.3e-3, 2], [0.0, 0.1, False, False, 1e-3, 1]):
-        cases.append((fs, "graded_cells", args))
+        cases.append((fm, "graded_cells", args))
     rho = 1.7241e-8
-    cases.append((fs, "graded_edges", [0.0, 0.05, False, True, 9.3e-3, 2]))
-    # the solver's matrix of a small quarter mesh (edges and filaments as _filaments builds them)
+    cases.append((fm, "graded_edges", [0.0, 0.05, False, True, 9.3e-3, 2]))
+    cases.append((fm, "graded_edges", [0.0, 0.01, True, True, 1e-3, 1]))
+    cases.append((fm, "filament_mesh", [[[0.0, 0.01, 0.0, 0.0015, False, True, False, True, 0, rho]], 9.3e-3, 1.0]))
+    cases.append((fm, "filament_mesh", [[[0.0, 0.01, 0.0035, 0.0065, False, True, True, True, 0, rho],
+                                         [0.0, 0.01, 0.0, 0.0015, False, True, False, True, 1, rho]], 9.3e-3, 2.0]))
+    cases.append((fm, "filament_mesh", [[[0.0, 0.5, 0.0, 0.0015, False, True, False, True, 0, rho]], 1e-5, 1.0]))
+    for sym in ([1.0, 1.0], [1.0, -1.0], [0.0, 1.0], [0.0, 0.0]):
+        cases.append((fm, "mirror_images", sym))
+    # the solver's matrix of a small quarter mesh (edges and filaments as filament_mesh builds them)
     quarter = fs_mesh_example()
-    cases.append((fs, "filament_log_gmds", [quarter, 1.0, 1.0]))
-    cases.append((fs, "filament_log_gmds", [quarter, 1.0, -1.0]))
+    cases.append((fx, "filament_log_gmds", [quarter, 1.0, 1.0]))
+    cases.append((fx, "filament_log_gmds", [quarter, 1.0, -1.0]))
+    cases.append((fx, "filament_log_gmds", [quarter, 0.0, 0.0]))
+    cases.append((fx, "filament_currents", [quarter, 50.0, 1.0, 1.0]))
+    cases.append((fx, "filament_currents", [quarter, 400.0, 1.0, -1.0]))
     cases.append((fs, "bar_group_solution", [0.04, 0.005, 1, 0.0, rho, 50.0]))
     cases.append((fs, "bar_group_solution", [0.02, 0.003, 3, 0.005, rho, 50.0]))
     cases.append((fs, "bar_group_solution", [0.02, 0.003, 0, 0.005, rho, 50.0]))

@@ -76,24 +76,7 @@ def solve_complex(ar, ai, br, bi, n):
                 ai[row + j] -= fr * ui + fi * ur
             br[i] -= fr * br[k] - fi * bi[k]
             bi[i] -= fr * bi[k] + fi * br[k]
-    xr = []
-    xi = []
-    for i in range(n):
-        xr.append(0.0)
-        xi.append(0.0)
-    i = n - 1
-    while i >= 0:
-        sr = br[i]
-        si = bi[i]
-        row = i * n
-        for j in range(i + 1, n):
-            sr -= ar[row + j] * xr[j] - ai[row + j] * xi[j]
-            si -= ar[row + j] * xi[j] + ai[row + j] * xr[j]
-        d = ar[row + i] * ar[row + i] + ai[row + i] * ai[row + i]
-        xr[i] = (sr * ar[row + i] + si * ai[row + i]) / d
-        xi[i] = (si * ar[row + i] - sr * ai[row + i]) / d
-        i -= 1
-    return [xr, xi]
+    return back_substitute(ar, ai, br, bi, n)
 # __pragma__ ('kwargs')
 
 
@@ -138,6 +121,24 @@ def solve_complex_symmetric(ar, ai, br, bi, n):
                 ai[row + j] -= fr * ui + fi * ur
             br[i] -= fr * br[k] - fi * bi[k]
             bi[i] -= fr * bi[k] + fi * br[k]
+    return back_substitute(ar, ai, br, bi, n)
+# __pragma__ ('kwargs')
+
+
+# __pragma__ ('nokwargs')
+def back_substitute(ar, ai, br, bi, n):
+    """Solve U x = b for the upper triangle U of (ar + i ai) (row-major, n * n; the part below the
+    diagonal is not read) and b = br + i bi: the last step of both eliminations.
+
+    Returns [xr, xi]. The diagonal must be nonzero (the eliminations check their pivots).
+
+    Examples
+    --------
+    [[2, 1], [0, 1 + i]] x = [3, 1 + i] by hand: x2 = 1, x1 = (3 - 1) / 2 = 1:
+
+    >>> back_substitute([2.0, 1.0, 0.0, 1.0], [0.0, 0.0, 0.0, 1.0], [3.0, 1.0], [0.0, 1.0], 2)
+    [[1.0, 1.0], [0.0, 0.0]]
+    """
     xr = []
     xi = []
     for i in range(n):
