@@ -285,11 +285,12 @@ function run(view, catalogue) {
 }
 
 // A form whose last update took longer than SLOW_MS (the skin-effect calculator's bar sizes run the
-// filament solver: 0.25 s for one bar to 1.4 s for three on a tablet; any other update takes a few
-// ms, and SLOW_MS leaves room for a busy machine, so no other form waits) waits for a pause in typing
-// of SETTLE_MS before it solves again, and says so, so keystrokes never wait for the solver. The
-// note is painted before the solve starts (the solve holds the page until it ends).
-const SLOW_MS = 100;
+// filament solver: tens of ms to a few hundred for one bar or a group on a tablet; any other update
+// takes a few ms, and SLOW_MS leaves room for a busy machine, so no other form waits) waits for a
+// pause in typing of SETTLE_MS before it solves again, and says so, so keystrokes never wait for the
+// solver. 50 ms is what browsers count as a long task (one that delays input). The note is painted
+// before the solve starts (the solve holds the page until it ends).
+const SLOW_MS = 50;
 const SETTLE_MS = 400;
 
 function setBusy(view, text) {

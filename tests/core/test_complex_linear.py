@@ -6,7 +6,7 @@ import random
 import numpy as np
 import pytest
 
-from conductor_atlas.core.complex_linear import solve_complex, solve_complex_symmetric
+from conductor_atlas.core.complex_linear import packed_index, solve_complex, solve_complex_symmetric
 from conductor_atlas.core.errors import CoreError
 
 
@@ -25,7 +25,19 @@ def filament_like(n, seed):
     return ar, ai
 
 
-@pytest.mark.parametrize("n, seed", [(1, 0), (7, 1), (60, 2), (150, 3)])
+def packed(full, n):
+    """The upper triangle of a row-major n x n list, packed row by row (the symmetric solver's input)."""
+    return [full[i * n + j] for i in range(n) for j in range(i, n)]
+
+
+def test_packed_index_counts_the_upper_triangle_row_by_row():
+    n = 5
+    order = [(i, j) for i in range(n) for j in range(i, n)]
+    assert [packed_index(i, j, n) for i, j in order] == list(range(n * (n + 1) // 2))
+
+
+# odd and even orders: the elimination takes its pivots two at a time (a last one alone when n is odd)
+@pytest.mark.parametrize("n, seed", [(1, 0), (2, 4), (7, 1), (8, 5), (60, 2), (150, 3)])
 def test_symmetric_solver_matches_lapack(n, seed):
     # tolerance 1e-12 relative to the largest component: LDL^T without pivoting on this class has a
     # growth factor below 3 (Higham 1998), measured error 1.5e-14 at n = 120
@@ -33,7 +45,7 @@ def test_symmetric_solver_matches_lapack(n, seed):
     a = np.array(ar).reshape(n, n) + 1j * np.array(ai).reshape(n, n)
     b = np.array([1.0 + 0.5j * (k % 3) for k in range(n)])
     ref = np.linalg.solve(a, b)
-    x = solve_complex_symmetric(list(ar), list(ai), list(b.real), list(b.imag), n)
+    x = solve_complex_symmetric(packed(ar, n), packed(ai, n), list(b.real), list(b.imag), n)
     got = np.array(x[0]) + 1j * np.array(x[1])
     assert np.abs(got - ref).max() <= 1e-12 * np.abs(ref).max()
     # the general solver agrees too (the filament solver used it before)
@@ -43,4 +55,10 @@ def test_symmetric_solver_matches_lapack(n, seed):
 
 def test_symmetric_solver_refuses_a_zero_pivot():
     with pytest.raises(CoreError):
-        solve_complex_symmetric([0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2)
+        solve_complex_symmetric([0.0, 0.0, 0.0], [0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2)
+
+
+def test_symmetric_solver_refuses_a_zero_second_pivot():
+    # [[1, 1], [1, 1]] is singular: the second pivot of the pair, 1 - 1 * 1 / 1, is zero
+    with pytest.raises(CoreError):
+        solve_complex_symmetric([1.0, 1.0, 1.0], [0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2)

@@ -43,7 +43,7 @@ EXAMPLES_REQUIRED = {
     "filament_inductance": ["rectangle_log_gmd_exact", "rectangle_log_gmd_far", "rectangle_log_gmd", "annulus_log_gmd"],
     "filament_mesh": None, "filament_matrix": None,
     "filament_solver": ["bar_group_solution", "bar_pair_solution", "round_layers_solution"],
-    "complex_linear": ["back_substitute"],
+    "complex_linear": ["packed_index", "solve_complex_symmetric", "back_substitute"],
 }
 
 # A unit in brackets: after a space, a parenthesis or the line start, no space inside. Data-shape

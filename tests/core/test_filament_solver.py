@@ -108,11 +108,13 @@ def test_go_and_return_pair_matches_fem():
       [0.0, 0.05, 0.0, 0.005, False, True, False, True, 1, RHO_CU]], 1.0, 1.0),
 ])
 def test_tabulated_inductances_equal_the_direct_sum(blocks, sym_x, sym_y):
-    # the solver's matrix (corner terms tabulated per edge pair, far images' ln D as one product)
+    # the solver's matrix (its packed upper triangle: corner terms tabulated per edge pair, far
+    # images' ln D as one product and their expansion's moments applied once per pair)
     # against summing rectangle_log_gmd over the images pair by pair, as the method states it;
     # the two differ only in rounding (edges taken from the mesh, not as centre +- half side; the
     # closed form's 16 terms cancel to the result): measured 1e-13 relative, tolerance 1e-12
     from conductor_atlas.core.filament_inductance import rectangle_log_gmd
+    from conductor_atlas.core.complex_linear import packed_index
     from conductor_atlas.core.filament_matrix import filament_log_gmds
     from conductor_atlas.core.filament_mesh import filament_mesh, mirror_images
     from conductor_atlas.core.skin_effect import skin_depth
@@ -127,4 +129,4 @@ def test_tabulated_inductances_equal_the_direct_sum(blocks, sym_x, sym_y):
             b = fils[j]
             direct = sum(img[2] * rectangle_log_gmd(a[0], a[1], a[2], a[3], img[0] * b[0], img[1] * b[1], b[2], b[3])
                          for img in mirror_images(sym_x, sym_y))
-            assert logs[i * n + j] == pytest.approx(direct, rel=1e-12)
+            assert logs[packed_index(min(i, j), max(i, j), n)] == pytest.approx(direct, rel=1e-12)

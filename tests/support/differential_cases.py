@@ -321,9 +321,22 @@ def filament_cases():
         cases.append((fi, "annulus_log_gmd", rings))
     cases.append((cl, "solve_complex", [[2.0, 1.0, 0.5, 3.0], [0.1, -1.0, 2.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
     cases.append((cl, "solve_complex", [[0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
-    cases.append((cl, "solve_complex_symmetric", [[2.0, 0.5, 0.5, 3.0], [1.0, -0.3, -0.3, 2.0], [1.0, 2.0], [0.0, 1.0], 2]))
-    cases.append((cl, "solve_complex_symmetric", [[0.0, 0.0, 0.0, 0.0], [0.0, 0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
-    cases.append((cl, "back_substitute", [[2.0, 1.0, 0.0, 1.0], [0.0, 0.5, 0.0, 1.0], [3.0, 1.0], [0.0, 1.0], 2]))
+    # the symmetric solver reads the packed upper triangle: [a00, a01, a11] for n = 2
+    cases.append((cl, "solve_complex_symmetric", [[2.0, 0.5, 3.0], [1.0, -0.3, 2.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    cases.append((cl, "solve_complex_symmetric", [[0.0, 0.0, 0.0], [0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    cases.append((cl, "solve_complex_symmetric", [[1.0, 1.0, 1.0], [0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
+    # n = 5: two pairs of pivots and a last one alone (a 1 / (1 + |i - j|) kernel, diagonal 2 + k / 2)
+    sym_r = []
+    sym_i = []
+    for i in range(5):
+        for j in range(i, 5):
+            sym_r.append(2.0 + 0.5 * i if i == j else 0.1 / (1 + j - i))
+            sym_i.append(3.0 if i == j else 1.0 / (1 + j - i))
+    cases.append((cl, "solve_complex_symmetric", [sym_r, sym_i, [1.0, 0.0, 2.0, 1.0, 1.0], [0.0, 1.0, 0.0, 0.5, 0.0], 5]))
+    for ij in ([0, 0, 5], [1, 3, 5], [4, 4, 5]):
+        cases.append((cl, "packed_index", ij))
+    cases.append((cl, "back_substitute", [[2.0, 1.0, 0.0, 1.0], [0.0, 0.5, 0.0, 1.0], [3.0, 1.0], [0.0, 1.0], [0, 2]]))
+    cases.append((cl, "back_substitute", [[2.0, 1.0, 1.0], [0.0, 0.5, 1.0], [3.0, 1.0], [0.0, 1.0], [0, 1]]))
     for args in ([0.0, 0.05, False, True, 9.3e-3, 1], [0.0, 0.005, True, True, 9.3e-3, 2], [0.0, 0.1, False, False, 1e-3, 1]):
         cases.append((fm, "graded_cells", args))
     rho = 1.7241e-8

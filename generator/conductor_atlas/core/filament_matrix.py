@@ -11,28 +11,16 @@ Pure Python in the Transcrypt subset; a mesh as core.filament_mesh.filament_mesh
 
 import math
 
-from conductor_atlas.core.complex_linear import solve_complex_symmetric
+from conductor_atlas.core.complex_linear import packed_index, solve_complex_symmetric
 from conductor_atlas.core.constants import MU_0
-from conductor_atlas.core.filament_inductance import FAR_FIELD_RATIO, corner_term, far_field_correction
+from conductor_atlas.core.filament_inductance import FAR_FIELD_RATIO, corner_term
 from conductor_atlas.core.filament_mesh import mirror_images
 
 _pi = math.pi
+_log = math.log  # bound once: in the transpiled code math.log is a module attribute read per call
 
 
 # __pragma__ ('nokwargs')
-def _filled(count, value):
-    # a list of count copies of value, grown by chunks (one append per element costs a call each in JS)
-    chunk = []
-    for k in range(256):
-        chunk.append(value)
-    out = []
-    while len(out) + 256 <= count:
-        out.extend(chunk)
-    while len(out) < count:
-        out.append(value)
-    return out
-
-
 def _edge_differences(edges):
     """[keys, values] of the differences between the edges of one axis, flat lists of 2 n^2 (n edges).
 
@@ -77,21 +65,32 @@ def _lower_pair(p, q, n, mirrored):
     return p * n + q
 
 
-def _corner(corners, at, u, v):
-    # G(u, v) from the table, computed at its first use (1e300: not yet)
-    g = corners[at]
+def _table_row(rows, template, key):
+    # the table row of an x key, made (a copy of the unset row) at its first use: the near pairs
+    # touch few x keys (122 of 650 for a 100 x 10 mm quarter at 400 Hz, level 3), and growing a
+    # table of them all (118,300 entries there) took a third of the assembly's time in node
+    row = rows[key]
+    if row is None:
+        row = template[:]
+        rows[key] = row
+    return row
+
+
+def _corner(row, at, u, v):
+    # G(u, v) from the table row, computed at its first use (1e300: not yet)
+    g = row[at]
     if g > 1e299:
         g = corner_term(u, v)
-        corners[at] = g
+        row[at] = g
     return g
 
 
-def _corner_row(corners, row, u, v_keys, v_values, k, ny):
+def _corner_row(row, u, v_keys, v_values, k, ny):
     # G(u, v1) - G(u, v2) - G(u, v3) + G(u, v4) over the four y edge pairs from index k
-    return (_corner(corners, row + v_keys[k + ny], u, v_values[k + ny])
-            - _corner(corners, row + v_keys[k], u, v_values[k])
-            - _corner(corners, row + v_keys[k + ny + 1], u, v_values[k + ny + 1])
-            + _corner(corners, row + v_keys[k + 1], u, v_values[k + 1]))
+    return (_corner(row, v_keys[k + ny], u, v_values[k + ny])
+            - _corner(row, v_keys[k], u, v_values[k])
+            - _corner(row, v_keys[k + ny + 1], u, v_values[k + ny + 1])
+            + _corner(row, v_keys[k + 1], u, v_values[k + 1]))
 
 
 def filament_log_gmds(mesh, sym_x, sym_y):
@@ -108,16 +107,21 @@ def filament_log_gmds(mesh, sym_x, sym_y):
     Returns
     -------
     logs : list
-        n * n floats, row-major, symmetric, [ln m]
+        The upper triangle of the symmetric n x n matrix, packed row by row (entry (i, j), i <= j,
+        at core.complex_linear.packed_index(i, j, n)): n (n + 1) / 2 floats, [ln m]
 
     Notes
     -----
     ln g of two cells far apart (centre distance over FAR_FIELD_RATIO times the largest side) by
-    the far-field expansion, the ln D of all far images of one pair summed as the log of one
-    product; else by the exact closed form (rectangle_log_gmd_exact: 16 corner terms G(u, v), u
-    and v differences of the cells' edges), each G tabulated by its pair of edge differences: the
-    cells of a tensor mesh share their edges, so each G is computed once. The same values as
-    summing core.filament_inductance.rectangle_log_gmd over the images (tests/core/test_filament_solver.py).
+    the far-field expansion (core.filament_inductance.far_field_correction); its moments depend
+    on the two cells' sides only, so the images' derivative terms are summed first and the moments
+    applied once per pair, and the ln D of all far images is the log of one product. Near images
+    by the exact closed form (rectangle_log_gmd_exact: 16 corner terms G(u, v), u and v differences
+    of the cells' edges), each G tabulated by its pair of edge differences: the cells of a tensor
+    mesh share their edges, so each G is computed once. The same values as summing
+    core.filament_inductance.rectangle_log_gmd over the images, to rounding
+    (tests/core/test_filament_solver.py). Most pairs of a mesh are far: the far branch is the
+    inner loop, written with plain floats (no call, no list made per pair).
 
     Examples
     --------
@@ -130,6 +134,7 @@ def filament_log_gmds(mesh, sym_x, sym_y):
     fils = mesh[0]
     n = len(fils)
     images = mirror_images(sym_x, sym_y)
+    count = len(images)
     nx = len(mesh[1])
     ny = len(mesh[2])
     xd = _edge_differences(mesh[1])
@@ -138,53 +143,100 @@ def filament_log_gmds(mesh, sym_x, sym_y):
     x_values = xd[1]
     y_keys = yd[0]
     y_values = yd[1]
-    width = ny * (ny + 1)  # keys per row of the table
-    corners = _filled(nx * (nx + 1) * width, 1e300)
+    # the table of G: a row per x key (made at its first use), an entry per y key
+    template = []
+    for k in range(ny * (ny + 1)):
+        template.append(1e300)
+    rows = []
+    for k in range(nx * (nx + 1)):
+        rows.append(None)
+    # the filaments' numbers as flat lists: centre, sides, squared sides, largest side, edge indices
+    xs = []
+    ys = []
+    ws = []
+    hs = []
+    w2s = []
+    h2s = []
     sides = []
+    xi = []
+    yi = []
     for a in fils:
+        xs.append(a[0])
+        ys.append(a[1])
+        ws.append(a[2])
+        hs.append(a[3])
+        w2s.append(a[2] * a[2])
+        h2s.append(a[3] * a[3])
         side = a[2]
         if a[3] > side:
             side = a[3]
         sides.append(side)
+        xi.append(a[6])
+        yi.append(a[7])
     far2 = FAR_FIELD_RATIO * FAR_FIELD_RATIO
-    logs = _filled(n * n, 0.0)
+    logs = []
     for i in range(n):
-        a = fils[i]
+        xa = xs[i]
+        ya = ys[i]
+        wa2 = w2s[i]
+        ha2 = h2s[i]
         for j in range(i, n):
-            b = fils[j]
             s = sides[i]
             if sides[j] > s:
                 s = sides[j]
-            m = 0.0
-            # the far images' ln D summed as the log of one product of D^2 (one log, not four)
+            limit = far2 * s * s
+            near = 0.0
+            far = 0
+            # far images: the product of their D^2 (signed powers), and the sums of the signed
+            # derivative factors of far_field_correction, (dy^2 - dx^2) / D^4 and
+            # (dx^4 - 6 dx^2 dy^2 + dy^4) / D^8
             product = 1.0
-            for img in images:
-                bx = img[0] * b[0]
-                by = img[1] * b[1]
-                dx = bx - a[0]
-                dy = by - a[1]
-                d2 = dx * dx + dy * dy
-                if d2 > far2 * s * s:
-                    if img[2] > 0.0:
+            second = 0.0
+            fourth = 0.0
+            for k in range(count):
+                img = images[k]
+                sign = img[2]
+                dx = img[0] * xs[j] - xa
+                dy = img[1] * ys[j] - ya
+                dx2 = dx * dx
+                dy2 = dy * dy
+                d2 = dx2 + dy2
+                if d2 > limit:
+                    far += 1
+                    q = 1.0 / (d2 * d2)
+                    if sign > 0.0:
                         product *= d2
                     else:
                         product /= d2
-                    m += img[2] * far_field_correction(dx, dy, a[2], a[3], b[2], b[3])
+                    second += sign * (dy2 - dx2) * q
+                    fourth += sign * (dx2 * dx2 - 6.0 * dx2 * dy2 + dy2 * dy2) * q * q
                     continue
                 # edge pairs in rectangle_log_gmd_exact's order (upper - lower, lower - lower,
                 # upper - upper, lower - upper; signs +, -, -, +)
-                kx = _lower_pair(a[6], b[6], nx, img[0] < 0.0)
-                ky = _lower_pair(a[7], b[7], ny, img[1] < 0.0)
-                total = (_corner_row(corners, x_keys[kx + nx] * width, x_values[kx + nx], y_keys, y_values, ky, ny)
-                         - _corner_row(corners, x_keys[kx] * width, x_values[kx], y_keys, y_values, ky, ny)
-                         - _corner_row(corners, x_keys[kx + nx + 1] * width, x_values[kx + nx + 1], y_keys, y_values,
-                                       ky, ny)
-                         + _corner_row(corners, x_keys[kx + 1] * width, x_values[kx + 1], y_keys, y_values, ky, ny))
-                m += img[2] * total / (a[2] * a[3] * b[2] * b[3])
-            if product != 1.0:
-                m += 0.5 * math.log(product)
-            logs[i * n + j] = m
-            logs[j * n + i] = m
+                kx = _lower_pair(xi[i], xi[j], nx, img[0] < 0.0)
+                ky = _lower_pair(yi[i], yi[j], ny, img[1] < 0.0)
+                near += sign * (_corner_row(_table_row(rows, template, x_keys[kx + nx]), x_values[kx + nx],
+                                            y_keys, y_values, ky, ny)
+                                - _corner_row(_table_row(rows, template, x_keys[kx]), x_values[kx],
+                                              y_keys, y_values, ky, ny)
+                                - _corner_row(_table_row(rows, template, x_keys[kx + nx + 1]), x_values[kx + nx + 1],
+                                              y_keys, y_values, ky, ny)
+                                + _corner_row(_table_row(rows, template, x_keys[kx + 1]), x_values[kx + 1],
+                                              y_keys, y_values, ky, ny))
+            m = 0.0
+            if far < count:
+                m = near / (ws[i] * hs[i] * ws[j] * hs[j])
+            if far > 0:
+                # far_field_correction's moments of the pair (the same for every image)
+                wb2 = w2s[j]
+                hb2 = h2s[j]
+                m2x = (wa2 + wb2) / 12.0
+                m2y = (ha2 + hb2) / 12.0
+                m4x = (wa2 * wa2 + wb2 * wb2) / 80.0 + wa2 * wb2 / 24.0
+                m4y = (ha2 * ha2 + hb2 * hb2) / 80.0 + ha2 * hb2 / 24.0
+                m += (0.5 * _log(product) + 0.5 * second * (m2x - m2y)
+                      - 0.25 * fourth * (m4x - 6.0 * m2x * m2y + m4y))
+            logs.append(m)
     return logs
 
 
@@ -218,12 +270,17 @@ def filament_currents(mesh, f, sym_x, sym_y):
     n = len(fils)
     omega_l = 2.0 * _pi * f * MU_0 / (2.0 * _pi)  # w mu_0 / (2 pi)
     ai = filament_log_gmds(mesh, sym_x, sym_y)
-    for k in range(n * n):
+    size = len(ai)
+    for k in range(size):
         ai[k] = -omega_l * ai[k]
-    ar = _filled(n * n, 0.0)
+    # the real part: a copy of the imaginary one, cleared (a slice is one copy in the transpiled
+    # code; a list grown entry by entry costs several times more)
+    ar = ai[:]
+    for k in range(size):
+        ar[k] = 0.0
     for i in range(n):
         a = fils[i]
-        ar[i * n + i] = a[5] / (a[2] * a[3])
+        ar[packed_index(i, i, n)] = a[5] / (a[2] * a[3])
     br = []
     bi = []
     for i in range(n):
