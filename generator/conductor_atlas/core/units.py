@@ -39,7 +39,12 @@ SI_UNIT = {
     "time": "s",
 }
 
-MIL = 2.54e-5  # [m] 0.001 in; the inch is 0.0254 m exactly (international yard and pound, 1959)
+# The international yard and pound agreement (1959) defines the inch as 0.0254 m and the foot as 0.3048 m
+# exactly; the other English units are written from them (each product gives the same float as the
+# exact decimal: 0.0254 * 1e-3 is 2.54e-5, 0.0254^2 is 0.00064516, 0.3048^2 is 0.09290304).
+INCH = 0.0254  # [m]
+FOOT = 0.3048  # [m] 12 in
+MIL = INCH * 1e-3  # [m] 0.001 in
 CIRCULAR_MIL = math.pi / 4.0 * MIL * MIL  # [m^2] the area of a circle one mil across
 
 # normalised spelling -> [kind, factor, offset]; offset only for temperatures
@@ -51,16 +56,16 @@ UNITS = {
     "mm": ["length", 0.001, 0.0],
     "um": ["length", 1e-6, 0.0],
     "nm": ["length", 1e-9, 0.0],
-    "ft": ["length", 0.3048, 0.0],
-    "in": ["length", 0.0254, 0.0],
+    "ft": ["length", FOOT, 0.0],
+    "in": ["length", INCH, 0.0],
     "mil": ["length", MIL, 0.0],
     # area
     "m2": ["area", 1.0, 0.0],
     "cm2": ["area", 1e-4, 0.0],
     "mm2": ["area", 1e-6, 0.0],
     "um2": ["area", 1e-12, 0.0],
-    "in2": ["area", 0.00064516, 0.0],
-    "ft2": ["area", 0.09290304, 0.0],
+    "in2": ["area", INCH * INCH, 0.0],
+    "ft2": ["area", FOOT * FOOT, 0.0],
     "cmil": ["area", CIRCULAR_MIL, 0.0],
     "kcmil": ["area", 1000.0 * CIRCULAR_MIL, 0.0],
     "mcm": ["area", 1000.0 * CIRCULAR_MIL, 0.0],
