@@ -15,7 +15,7 @@ from conductor_atlas.bundle import bundle, parse_module
 from conductor_atlas.atlas_errors import BuildError
 from conductor_atlas.offline import (ICON_SIZES, MANIFEST, WORKER, add_offline_files, cache_version,
                                      png_size, precache_list)
-from tests.support.node_core import node_available
+from tests.support.node_core import TO_PY_JS, node_available
 
 
 def js(text: str) -> bytes:
@@ -123,22 +123,11 @@ def test_unused_named_imports_are_left_out_and_used_ones_kept(tmp_path):
 
 CLASSIC_RUNNER = r"""
 const calls = globalThis.calls, modules = globalThis.coreModules, dict = modules.__runtime__.dict;
-function toPy(value) {
-  if (Array.isArray(value)) return value.map(toPy);
-  if (value !== null && typeof value === 'object') {
-    if ('__nonfinite__' in value) return Number(value.__nonfinite__);
-    const out = {};
-    for (const key of Object.keys(value)) out[key] = toPy(value[key]);
-    return dict(out);
-  }
-  return value;
-}
+""" + TO_PY_JS + r"""
 globalThis.answer = calls.map((call) => {
   try {
     const result = modules[call.module][call.function](...call.args.map(toPy));
-    return {ok: JSON.parse(JSON.stringify(result, (k, v) =>
-      typeof v === 'number' && !Number.isFinite(v) ? {__nonfinite__: String(v)} :
-      v === undefined ? {__undefined__: true} : v))};
+    return {ok: JSON.parse(JSON.stringify(result, replacer))};
   } catch (e) {
     return {error: e && typeof e.__str__ === 'function' ? e.__str__() : 'JS ' + (e && e.message)};
   }

@@ -13,12 +13,10 @@ import shutil
 import subprocess
 from pathlib import Path
 
-RUNNER = r"""
-import {dict} from './org.transcrypt.__runtime__.js';
-const chunks = [];
-for await (const chunk of process.stdin) chunks.push(chunk);
-const calls = JSON.parse(Buffer.concat(chunks).toString('utf8'));
-const modules = {};
+# The JS both runners share (this one through node's module loader, the classic-script one of
+# tests/test_offline_build.py through the bundle): arguments' plain objects become Transcrypt dicts
+# (``dict`` must be in scope), and results go to JSON with non-finite numbers and undefined tagged.
+TO_PY_JS = r"""
 function toPy(value) {
   if (Array.isArray(value)) return value.map(toPy);
   if (value !== null && typeof value === 'object') {
@@ -34,6 +32,15 @@ function replacer(key, value) {
   if (value === undefined) return {__undefined__: true};
   return value;
 }
+"""
+
+RUNNER = r"""
+import {dict} from './org.transcrypt.__runtime__.js';
+const chunks = [];
+for await (const chunk of process.stdin) chunks.push(chunk);
+const calls = JSON.parse(Buffer.concat(chunks).toString('utf8'));
+const modules = {};
+""" + TO_PY_JS + r"""
 const results = [];
 for (const call of calls) {
   if (!(call.module in modules)) modules[call.module] = await import('./' + call.module + '.js');
