@@ -143,7 +143,7 @@ def test_a_point_before_three_digits_is_read_as_decimal_and_said():
 def test_english_units_are_the_exact_decimals_of_their_definitions():
     # NIST SP 811 (2008), B.8: 1 in = 0.0254 m and 1 ft = 0.3048 m exactly (1959 agreement), so
     # 1 mil = 2.54e-5 m, 1 in² = 6.4516e-4 m², 1 ft² = 9.290304e-2 m² exactly. units.py writes them as
-    # relations (MIL = INCH * 1e-3, INCH * INCH, FOOT * FOOT); each must give the float of the exact
+    # relations (MIL = INCH * 1e-3, INCH * INCH, 0.3048 * 0.3048); each must give the float of the exact
     # decimal, not one a last bit away (INCH / 1000 would be 2.5399999999999997e-05), so that sizes in
     # mil and in² read the same as before and in both runtimes. Tolerance: none (the same float).
     assert UNITS["in"][1] == 0.0254 and UNITS["ft"][1] == 0.3048

@@ -17,9 +17,8 @@ import math
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.numfmt import format_number
 from conductor_atlas.core.typed_text import normalise_text, space_end
-from conductor_atlas.core.units import parse_quantity, recall_field, remember_field
+from conductor_atlas.core.units import INCH, parse_quantity, recall_field, remember_field
 
-INCH = 0.0254  # m, exact by definition (1959 international yard and pound agreement)
 
 # IEC 60228:2004 Table 1/2 nominal cross-sectional areas, mm² (the standard specifies a maximum
 # resistance per size, not an exact area; the nominal area is a label).

@@ -41,9 +41,10 @@ SI_UNIT = {
 
 # The international yard and pound agreement (1959) defines the inch as 0.0254 m and the foot as 0.3048 m
 # exactly; the other English units are written from them (each product gives the same float as the
-# exact decimal: 0.0254 * 1e-3 is 2.54e-5, 0.0254^2 is 0.00064516, 0.3048^2 is 0.09290304).
+# exact decimal: 0.0254 * 1e-3 is 2.54e-5, 0.0254^2 is 0.00064516, 0.3048^2 is 0.09290304). The inch
+# is the one home of that number (core.geometry's AWG diameters read it from here); the foot stays a
+# literal in the table below (a module-level name is one more export in every page's bundle).
 INCH = 0.0254  # [m]
-FOOT = 0.3048  # [m] 12 in
 MIL = INCH * 1e-3  # [m] 0.001 in
 CIRCULAR_MIL = math.pi / 4.0 * MIL * MIL  # [m^2] the area of a circle one mil across
 
@@ -56,7 +57,7 @@ UNITS = {
     "mm": ["length", 0.001, 0.0],
     "um": ["length", 1e-6, 0.0],
     "nm": ["length", 1e-9, 0.0],
-    "ft": ["length", FOOT, 0.0],
+    "ft": ["length", 0.3048, 0.0],
     "in": ["length", INCH, 0.0],
     "mil": ["length", MIL, 0.0],
     # area
@@ -65,7 +66,7 @@ UNITS = {
     "mm2": ["area", 1e-6, 0.0],
     "um2": ["area", 1e-12, 0.0],
     "in2": ["area", INCH * INCH, 0.0],
-    "ft2": ["area", FOOT * FOOT, 0.0],
+    "ft2": ["area", 0.3048 * 0.3048, 0.0],
     "cmil": ["area", CIRCULAR_MIL, 0.0],
     "kcmil": ["area", 1000.0 * CIRCULAR_MIL, 0.0],
     "mcm": ["area", 1000.0 * CIRCULAR_MIL, 0.0],
