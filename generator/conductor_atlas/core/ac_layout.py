@@ -72,9 +72,30 @@ def parse_arrangement(text, field):
     raise CoreError("type single, '3 bars, gap 10 mm' or 'pair, 30 mm'", field)
 
 
+def add_ratio_result(outcome, ratio):
+    """The "ac_dc_ratio" result: 5 significant digits, unless a solution that did not settle to 0.1 %
+    has put its own there (3 digits after "≈": _note_solution, _round_pair_ratio).
+
+    >>> outcome = {"results": {}}
+    >>> add_ratio_result(outcome, 1.198178)
+    >>> outcome["results"]["ac_dc_ratio"]["text"]
+    '1.1982'
+    """
+    if "ac_dc_ratio" in outcome["results"]:
+        return
+    add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
+
+
+def _unsettled_ratio(outcome, ratio):
+    # an answer not settled to 0.1 % is shown to 3 significant digits after "≈" (its warning says why)
+    add_result(outcome, "ac_dc_ratio", ratio, "", "≈ " + format_number(ratio, 3))
+
+
 def _note_solution(outcome, solution, what):
     n = solution["filaments"]
     add_result(outcome, "ac_method", n, "", "filament solver, " + str(n) + " filaments (" + what + ")")
+    if not solution["converged"]:
+        _unsettled_ratio(outcome, solution["ratio"])
     if solution["change"] >= 1.0:
         add_warning(outcome, "the filament solution could not be refined within the page's budget (" + str(n)
                     + " filaments, the conductor is many skin depths across): its accuracy is not established")
@@ -99,6 +120,7 @@ def _round_pair_ratio(outcome, radius, spacing, rho, f, mu_r):
                format_number(solution["ratio"] / solution["isolated"], 4)
                + " (the same wire alone: AC/DC " + format_number(solution["isolated"], 5, True) + ")")
     if not solution["converged"]:
+        _unsettled_ratio(outcome, solution["ratio"])
         add_warning(outcome, "the pair's harmonic series did not settle within " + str(solution["harmonics"])
                     + " harmonics (the wires nearly touch): read the AC/DC ratio to about "
                     + format_number(100.0 * solution["change"], 2) + " %")

@@ -14,7 +14,7 @@ from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, 
                                               warn_if_fusing)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 from conductor_atlas.core.clad_layers import clad_layers_at
-from conductor_atlas.core.ac_layout import ac_ratio_for
+from conductor_atlas.core.ac_layout import ac_ratio_for, add_ratio_result
 
 NAME = "resistance"
 TITLE = "Resistance of a conductor run"
@@ -152,7 +152,7 @@ def calculate(inputs, catalogue):
         if len(m["mu_source"]) > 0:
             add_sources(outcome, [m["mu_source"]])
         warn_if_anomalous(outcome, recorded_mean_free_path(m, rho, t)[0], delta)
-        add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
+        add_ratio_result(outcome, ratio)
         add_result(outcome, "resistance_ac", r * ratio, "Ω", format_si(r * ratio, "Ω", 4))
         if current is not None:
             p_ac = dc.power_loss(r * ratio, current)

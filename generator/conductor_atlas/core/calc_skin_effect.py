@@ -12,7 +12,7 @@ from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_siz
 from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, material_at_temperature,
                                               recorded_mean_free_path, warn_if_anomalous)
 from conductor_atlas.core.clad_layers import CLAD_BAR_MESSAGE, clad_layers_at
-from conductor_atlas.core.ac_layout import ARRANGEMENT_HINT, ac_ratio_for, parse_arrangement
+from conductor_atlas.core.ac_layout import ARRANGEMENT_HINT, ac_ratio_for, add_ratio_result, parse_arrangement
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "skin-effect"
@@ -150,7 +150,7 @@ def calculate(inputs, catalogue):
             shown = format_number(area * 1e6, 4) + " mm² (" + str(arrangement[1]) + " bars of " + size["label"] + ")"
         add_result(outcome, "area", area, "m²", shown)
         add_result(outcome, "resistance", r, "Ω/m", format_si(r, "Ω", 4) + " per metre")
-        add_result(outcome, "ac_dc_ratio", ratio, "", format_number(ratio, 5, True))
+        add_ratio_result(outcome, ratio)
         add_result(outcome, "resistance_ac", r * ratio, "Ω/m", format_si(r * ratio, "Ω", 4) + " per metre")
         depth = half_thickness(size) / delta
         add_result(outcome, "depth_ratio", depth, "", format_number(depth, 4))
