@@ -8,6 +8,7 @@ from conductor_atlas.core.carriers import relaxation_time
 from conductor_atlas.core.material_models import resistivity_at, resistivity_or_none
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import add_error, add_sources, add_warning, has_errors
+from conductor_atlas.core.units import INCH
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_temperature
 
 
@@ -54,7 +55,7 @@ def material_resistivity(outcome, m, t, inputs):
 # 80.0 A/mm^1.5 (W. H. Preece, Proc. R. Soc. London 36, 464, 1884; constant from memory of the paper's
 # table). Used for every material as a marker of "far past fusing": copper has the highest constant of
 # the common conductor metals, so for others the warning comes late, never early.
-PREECE_COPPER = 10244.0 / math.pow(0.0254, 1.5)  # [A/m^1.5]
+PREECE_COPPER = 10244.0 / math.pow(INCH, 1.5)  # [A/m^1.5]
 
 
 def warn_if_fusing(outcome, current, area):
