@@ -41,10 +41,10 @@ EXAMPLES_REQUIRED = {
     "calc_temperature_rise": ["material_k"],
     "calc_compare": ["add_bar_width", "add_standard_sizes"],
     "ac_layout": ["add_ratio_result"],
-    "filament_inductance": ["rectangle_log_gmd_exact", "rectangle_log_gmd_far", "rectangle_log_gmd", "annulus_log_gmd"],
+    "filament_inductance": None,
     "filament_mesh": None, "filament_matrix": None,
     "filament_solver": ["bar_group_solution", "bar_pair_solution", "round_layers_solution"],
-    "complex_linear": ["packed_index", "solve_complex_symmetric", "back_substitute"],
+    "complex_linear": None,
 }
 
 # A unit in brackets: after a space, a parenthesis or the line start, no space inside. Data-shape

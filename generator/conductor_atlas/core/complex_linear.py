@@ -31,6 +31,16 @@ def solve_complex(ar, ai, br, bi, n):
     Row pivoting on the largest modulus in the column (Golub & Van Loan, Matrix Computations,
     4th ed., 2013, algorithm 3.4.1); about (8/3) n^3 real multiplications and additions. Raises
     CoreError for a matrix that is singular to working precision.
+
+    Examples
+    --------
+    diag(1 + i, 2) x = (2, 4i) gives x = (1 - i, 2i); the swap matrix [[0, 1], [1, 0]] needs the
+    row pivot and gives x = (5, 3) for (3, 5):
+
+    >>> solve_complex([1.0, 0.0, 0.0, 2.0], [1.0, 0.0, 0.0, 0.0], [2.0, 0.0], [0.0, 4.0], 2)
+    [[1.0, 0.0], [-1.0, 2.0]]
+    >>> solve_complex([0.0, 1.0, 1.0, 0.0], [0.0, 0.0, 0.0, 0.0], [3.0, 5.0], [0.0, 0.0], 2)[0]
+    [5.0, 3.0]
     """
     for k in range(n):
         # pivot: largest |a_ik| for i >= k
