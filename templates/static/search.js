@@ -52,8 +52,17 @@ function loadIndex() {
   return indexPromise;
 }
 
+// A changed text goes into the text node already shown (no new node to style and lay out); empty
+// text removes it, so :empty rules still hold.
 function setText(node, text) {
-  if (node.textContent !== text) node.textContent = text;
+  const first = node.firstChild;
+  if (first !== null && first === node.lastChild && first.nodeType === Node.TEXT_NODE) {
+    if (first.data === text) return;
+    if (text !== '') { first.data = text; return; }
+  } else if (first === null && text === '') {
+    return;
+  }
+  node.textContent = text;
 }
 
 function setAttribute(node, name, value) {
@@ -131,10 +140,10 @@ class SearchBox {
     this.input.removeAttribute('aria-activedescendant');
     const count = outcome.results.length;
     outcome.results.forEach((result, i) => this.fill(this.option(i), result));
-    if (count !== this.shown) {
-      this.list.replaceChildren(...this.pool.slice(0, count));
-      this.shown = count;
-    }
+    // places are added or dropped at the end only; the items and their text nodes are kept in the
+    // pool, so typing again refills them in place
+    while (this.shown < count) this.list.appendChild(this.pool[this.shown++]);
+    while (this.shown > count) this.pool[--this.shown].remove();
     const lines = [];
     for (const problem of outcome.errors) lines.push(problem);
     for (const f of outcome.filters) lines.push('Filter: ' + f.text);

@@ -147,3 +147,27 @@ def test_search_works_from_file_urls(browser, built_site):
     assert plain.locator("#materials a[href*='materials/']").count() >= count
     plain.context.close()
     context.close()
+
+
+def test_typing_after_clearing_refills_the_same_list_in_place(page, served_site):
+    """After the box is emptied (the list's items go), the next query's results go into the
+    items and text nodes already made, with the core's titles and no item left over from before."""
+    focus_search(page, served_site)
+    page.keyboard.type("copper")
+    page.wait_for_selector(OPTIONS)
+    page.evaluate("() => { window.firstTitle = document.querySelector("
+                  "'form[data-search=popup] [role=option] .site-search-title').firstChild; }")
+    page.fill(BOX, "")
+    assert page.locator(OPTIONS).count() == 0
+    page.fill(BOX, "nickl chrom")
+    page.wait_for_selector(OPTIONS)
+    shown = titles(page)
+    assert shown[0] == "Nickel-chromium 80/20 heating alloy"
+    assert page.evaluate("() => document.querySelector("
+                         "'form[data-search=popup] [role=option] .site-search-title').firstChild === window.firstTitle")
+    page.fill(BOX, "C17200")
+    page.wait_for_selector(OPTIONS)
+    assert titles(page)[0] == "Beryllium copper (C17200, Cu-2Be)"
+    assert len(titles(page)) == page.evaluate("() => document.querySelectorAll("
+                                              "'form[data-search=popup] .site-search-results > li').length")
+    assert page.errors == []

@@ -101,8 +101,12 @@ def snippet_for(index, record, field, filters, query_words):
     return record[E_SUMMARY]
 
 
+# The outcome is read by key only (by the core, the page and JSON): in JS a plain object (the jsiter
+# region), not a Transcrypt dict, made afresh on every keystroke.
+# __pragma__ ('jsiter')
 def new_outcome(query):
     return {"query": query, "results": [], "total": 0, "filters": [], "errors": [], "note": ""}
+# __pragma__ ('nojsiter')
 
 
 def filter_columns(index, filters):

@@ -103,11 +103,22 @@ def osa_distance(a, b, limit):
 
     Counts insertions, deletions, substitutions and swaps of two adjacent characters. Plain
     comparisons instead of min(): the browser runs this for every index word a query word meets.
+    Only the band of cells within ``limit`` of the diagonal is worked out (Ukkonen): a cell farther
+    off is at least its distance from the diagonal, more than ``limit``, so the band's edges are
+    held at limit + 1, which changes no answer up to ``limit``.
+
+    By hand: one letter dropped; one swap; a swap and a dropped letter; no letter in common (over the limit):
+
+    >>> osa_distance("copper", "coper", 1), osa_distance("nickle", "nickel", 1)
+    (1, 1)
+    >>> osa_distance("copper", "cpoer", 2), osa_distance("chrom", "brass", 2)
+    (2, 3)
     """
     la = len(a)
     lb = len(b)
     if abs(la - lb) > limit:
         return limit + 1
+    over = limit + 1
     # three rows of the table, made once and reused in turn (no new list per row)
     before = []
     previous = []
@@ -120,7 +131,15 @@ def osa_distance(a, b, limit):
         ca = a[i - 1]
         current[0] = i
         row_min = i
-        for j in range(1, lb + 1):
+        low = i - limit
+        if low < 1:
+            low = 1
+        high = i + limit
+        if high > lb:
+            high = lb
+        if low > 1:
+            current[low - 1] = over
+        for j in range(low, high + 1):
             cb = b[j - 1]
             best = previous[j - 1]
             if ca != cb:
@@ -134,6 +153,8 @@ def osa_distance(a, b, limit):
             current[j] = best
             if best < row_min:
                 row_min = best
+        if high < lb:
+            current[high + 1] = over
         if row_min > limit:
             return limit + 1
         spare = before
