@@ -4,7 +4,7 @@ from conductor_atlas.core import conformance as cf
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+from conductor_atlas.core.outcome import (keyed_record, add_error, add_result, add_sources, add_warning, check_finite_results,
                                           has_errors, new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, note_point_reading, read_quantity, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature, material_resistivity
@@ -177,7 +177,7 @@ def calculate(inputs, catalogue):
             field = "resistance"
         add_error(outcome, field, problem.message)
     if has_errors(outcome):
-        outcome["results"] = {}
+        outcome["results"] = keyed_record()
     return outcome
 
 

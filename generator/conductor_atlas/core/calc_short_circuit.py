@@ -6,7 +6,7 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import next_metric_size
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO, resistivity_at, resistivity_value
 from conductor_atlas.core.numfmt import celsius_text, format_fixed, format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+from conductor_atlas.core.outcome import (keyed_record, add_error, add_result, add_sources, add_warning, check_finite_results,
                                           has_errors, new_outcome)
 from conductor_atlas.core.calc_inputs import (field_text, read_material, read_quantity, read_size,
                                               read_temperature_or_empty, require_positive)
@@ -252,7 +252,7 @@ def calculate(inputs, catalogue):
         if len(field) == 0 or field == "temperature":
             field = "final"
         add_error(outcome, field, problem.message)
-        outcome["results"] = {}
+        outcome["results"] = keyed_record()
         return outcome
     if has_errors(outcome):
         return outcome
@@ -289,7 +289,7 @@ def compute(outcome, m, model, current, duration, size, t_i, t_f, cv, cap, iec):
         if theta < 0:
             add_error(outcome, "current", "the conductor would pass " + celsius_text(cap) + " (" + limit_name(m)
                       + ") before the fault ends: it fuses; enter a larger cross-section or a shorter time")
-            outcome["results"] = {}
+            outcome["results"] = keyed_record()
             return -1.0
         worst = theta
         add_result(outcome, "final_temperature", theta, "K", temperature_text(theta))

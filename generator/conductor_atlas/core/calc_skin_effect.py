@@ -5,7 +5,7 @@ from conductor_atlas.core import carriers as fe
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
+from conductor_atlas.core.outcome import (keyed_record, add_error, add_result, add_sources, add_warning, check_finite_results,
                                           new_outcome)
 from conductor_atlas.core.geometry import area_text
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
@@ -121,7 +121,7 @@ def calculate(inputs, catalogue):
         rs = skin.surface_resistance(rho, f, mu_r)
     except CoreError as problem:
         add_error(outcome, "frequency", problem.message)
-        outcome["results"] = {}
+        outcome["results"] = keyed_record()
         return outcome
     ratio = 0.0
     if size is not None:

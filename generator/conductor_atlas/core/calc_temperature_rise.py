@@ -5,7 +5,7 @@ from conductor_atlas.core import practice
 from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.numfmt import celsius_text, format_fixed, format_number, temperature_text
-from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results, has_errors,
+from conductor_atlas.core.outcome import (keys_of, add_error, add_result, add_sources, add_warning, check_finite_results, has_errors,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_quantity, require_positive
 from conductor_atlas.core.typed_text import parse_number, normalise_text
@@ -170,7 +170,7 @@ def calculate(inputs, catalogue):
         add_error(outcome, "coolant", "must be above absolute zero (−273.15 °C)")
         coolant = None
     coolant_bad = "coolant" in outcome["errors"]
-    for field in outcome["errors"].keys():
+    for field in keys_of(outcome["errors"]):
         if field != "coolant":
             return outcome
     if k is None:

@@ -16,12 +16,21 @@ the fields are in core.calc_inputs).
 # literals in this jsiter region are not Transcrypt dicts, whose eighteen hidden methods cost more
 # to attach than the rest of storing a result (measured in node: dict creation was over a third of a
 # thin-film update). In CPython they are ordinary dicts. Never call keys()/items() on them in the
-# core: "results" and "errors", which the core walks with keys(), stay Transcrypt dicts.
+# core: walk them with keys_of. "results" and "errors" are such records too (keyed_record).
 # __pragma__ ('jsiter')
 # __pragma__ ('nokwargs')
 def keyed_record():
     """An empty record filled and read by key only ({} in CPython, a plain object in JS)."""
     return {}
+
+
+def keys_of(record):
+    """The keys of a keyed record, in the order they were stored (a list; in JS the loop is a
+    plain for-in over the object's own keys, which this region gives)."""
+    found = []
+    for key in record:
+        found.append(key)
+    return found
 
 
 def outcome_record(name, inputs):
@@ -42,8 +51,8 @@ def new_outcome(name, inputs):
     for key in inputs.keys():
         copied[key] = inputs[key]
     outcome = outcome_record(name, copied)
-    outcome["results"] = {}
-    outcome["errors"] = {}
+    outcome["results"] = keyed_record()
+    outcome["errors"] = keyed_record()
     return outcome
 
 
@@ -84,7 +93,7 @@ def add_sources(outcome, keys):
 
 
 def has_errors(outcome):
-    return len(outcome["errors"].keys()) > 0
+    return len(keys_of(outcome["errors"])) > 0
 # __pragma__ ('kwargs')
 
 
@@ -94,12 +103,12 @@ def check_finite_results(outcome, field, causes=None):
     names it through ``causes`` (result name -> input field; ``field`` for any result not listed).
     E.g. with a finite resistance, an infinite voltage drop comes from the current."""
     culprit = ""
-    for key in outcome["results"].keys():
+    for key in keys_of(outcome["results"]):
         v = outcome["results"][key]["value"]
         if len(culprit) == 0 and not (v - v == 0):
             culprit = field
             if causes is not None and key in causes:
                 culprit = causes[key]
     if len(culprit) > 0:
-        outcome["results"] = {}
+        outcome["results"] = keyed_record()
         add_error(outcome, culprit, "the inputs are too extreme to compute a finite result; check the values")

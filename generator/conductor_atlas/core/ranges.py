@@ -13,7 +13,7 @@ record and the catalogue for each end: the copies cost about a fifth of a ranged
 """
 
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import add_warning
+from conductor_atlas.core.outcome import add_warning, keys_of
 
 RELATIVE_EPSILON = 1e-12  # a result that moves less than this between the runs has no range
 
@@ -137,12 +137,12 @@ def mu_changes(m, mu):
 def usable(outcome):
     """True when the outcome has results to give ranges to (an error under an optional field that
     drops only its own results, SIDE_FIELDS, leaves the others standing and ranged)."""
-    return len(outcome["results"]) > 0 and len(outcome["material"]) > 0
+    return len(keys_of(outcome["results"])) > 0 and len(outcome["material"]) > 0
 
 
 def new_problems(run, outcome):
     """True when a run at a range end has a problem the outcome itself does not have."""
-    for key in run["errors"].keys():
+    for key in keys_of(run["errors"]):
         if not (key in outcome["errors"]):
             return True
     return False
@@ -164,7 +164,7 @@ def add_permeability_range(outcome, calculate, inputs, catalogue):
     if new_problems(low, outcome) or new_problems(high, outcome):
         return
     moved = False
-    for key in outcome["results"].keys():
+    for key in keys_of(outcome["results"]):
         if not (key in low["results"] and key in high["results"]):
             continue
         entry = outcome["results"][key]
@@ -226,7 +226,7 @@ def add_material_range(outcome, calculate, inputs, catalogue):
             return
         runs.append(run)
     moved = False
-    for key in outcome["results"].keys():
+    for key in keys_of(outcome["results"]):
         entry = outcome["results"][key]
         lo = entry
         hi = entry
