@@ -422,6 +422,7 @@ def model_cases():
     for t in (363.15, 4.2, 0.0, 293.15, 1e4):
         cases.append(("conductor_atlas.core.numfmt", "temperature_text", [t]))
         cases.append(("conductor_atlas.core.numfmt", "celsius_text", [t]))
+        cases.append(("conductor_atlas.core.numfmt", "temperature_span_text", [t, t + 200.0]))
     for inputs, field in (({"length": " 1,5 m "}, "length"), ({"length": None}, "length"), ({}, "length"),
                           ({"size": "2.5\u00a0mm²"}, "size")):
         cases.append(("conductor_atlas.core.calc_inputs", "field_text", [inputs, field]))

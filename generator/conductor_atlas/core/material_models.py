@@ -17,7 +17,7 @@ range; else the nearest model with a warning. Never silent outside a model's ran
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import resistance as dc
 from conductor_atlas.core import temperature_models as tm
-from conductor_atlas.core.numfmt import format_number, temperature_text
+from conductor_atlas.core.numfmt import format_number, temperature_span_text, temperature_text
 
 MODEL_LABELS = {
     "linear": "linear temperature-coefficient model",
@@ -66,8 +66,8 @@ def in_matthiessen_span(m, t):
 
 def matthiessen_label(m):
     """"estimated by Matthiessen's rule from <base> (<span>)"."""
-    return (MODEL_LABELS["matthiessen"] + " from " + m["mt_base"] + ", valid " + temperature_text(m["mt_t"][0]) + " to "
-            + temperature_text(m["mt_t"][len(m["mt_t"]) - 1]))
+    return (MODEL_LABELS["matthiessen"] + " from " + m["mt_base"] + ", valid "
+            + temperature_span_text(m["mt_t"][0], m["mt_t"][len(m["mt_t"]) - 1]))
 
 
 def has_layers(m):
@@ -81,8 +81,8 @@ def in_layers_span(m, t):
 def layers_label(m):
     """"layers in parallel: 20.3 % <outer> by area over a core of <core>, valid <span>"."""
     return (MODEL_LABELS["layers"] + ": " + format_number(m["cl_fraction"] * 100.0, 3) + " % " + m["cl_names"][0]
-            + " by area over a core of " + m["cl_names"][1] + ", valid " + temperature_text(m["cl_t"][0]) + " to "
-            + temperature_text(m["cl_t"][len(m["cl_t"]) - 1]))
+            + " by area over a core of " + m["cl_names"][1] + ", valid "
+            + temperature_span_text(m["cl_t"][0], m["cl_t"][len(m["cl_t"]) - 1]))
 
 
 def in_linear_span(m, t):
@@ -326,15 +326,15 @@ def model_rho(m, t, key, model):
                             "model")
         if not in_matthiessen_span(m, t):
             raise CoreError("the estimate for " + m["name"] + " by Matthiessen's rule spans only "
-                            + temperature_text(m["mt_t"][0]) + " to " + temperature_text(m["mt_t"][len(m["mt_t"]) - 1])
+                            + temperature_span_text(m["mt_t"][0], m["mt_t"][len(m["mt_t"]) - 1])
                             + " (the base metal's sourced table)", "temperature")
         return m["rho_ref"] + tm.interpolate_table(t, m["mt_t"], m["mt_drho"])
     if key == "layers":
         if not has_layers(m):
             raise CoreError(m["name"] + " is not a clad wire with its layers on record", "model")
         if not in_layers_span(m, t):
-            raise CoreError("the parallel-layer model of " + m["name"] + " spans only " + temperature_text(m["cl_t"][0])
-                            + " to " + temperature_text(m["cl_t"][len(m["cl_t"]) - 1])
+            raise CoreError("the parallel-layer model of " + m["name"] + " spans only "
+                            + temperature_span_text(m["cl_t"][0], m["cl_t"][len(m["cl_t"]) - 1])
                             + " (where both layers' own models hold)", "temperature")
         return tm.interpolate_table(t, m["cl_t"], m["cl_rho"])
     if key == "reference":
@@ -355,16 +355,15 @@ def model_warnings(m, t, key):
     if key == "linear":
         if not in_linear_span(m, t):
             warnings.append("temperature " + temperature_text(t) + " is outside the span where the linear model holds for "
-                            + m["name"] + " (" + temperature_text(m["valid_from"]) + " to "
-                            + temperature_text(m["valid_to"]) + ")")
+                            + m["name"] + " (" + temperature_span_text(m["valid_from"], m["valid_to"]) + ")")
     elif key == "table":
         for w in tm.table_warnings(t, m["table_t"]):
             warnings.append("ρ(T) table of " + m["name"] + ": " + w)
     elif key == "bloch-gruneisen":
         if not in_bg_range(m, t):
             warnings.append("temperature " + temperature_text(t) + " is outside the range the Bloch–Grüneisen fit of "
-                            + m["name"] + " was fitted over (" + temperature_text(m["bg_t_min"]) + " to "
-                            + temperature_text(m["bg_t_max"]) + ")")
+                            + m["name"] + " was fitted over (" + temperature_span_text(m["bg_t_min"], m["bg_t_max"])
+                            + ")")
     elif key == "callendar-van-dusen":
         for w in tm.cvd_warnings(t):
             warnings.append(w)

@@ -269,4 +269,15 @@ def temperature_text(t):
     '90.0 °C (363.15 K)'
     """
     return celsius_text(t) + " (" + format_fixed(t, 2) + " K)"
+
+
+def temperature_span_text(t_low, t_high):
+    """A span of temperatures [K] as a person reads it: temperature_text of both ends, "to" between.
+
+    Examples
+    --------
+    >>> temperature_span_text(223.15, 423.15)
+    '−50.0 °C (223.15 K) to 150.0 °C (423.15 K)'
+    """
+    return temperature_text(t_low) + " to " + temperature_text(t_high)
 # __pragma__ ('kwargs')
