@@ -5,7 +5,7 @@ caution), the calculators in the registry's order, and the material choices of t
 from __future__ import annotations
 
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, CALCULATORS
-from conductor_atlas.core.lookup import TRADE_WORDS
+from conductor_atlas.core.trade_words import TRADE_WORDS
 from conductor_atlas.core.material_models import MODEL_CHOICES, MODEL_LABELS, MODEL_NEEDS
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.derive import MaterialView
@@ -48,7 +48,7 @@ def ordered_calculators() -> list[str]:
 
 def material_choices(views: list[MaterialView]) -> list[tuple[str, str]]:
     """(value, label) for the material datalist: every id, then every alias, each with the name of the
-    material it gives; a trade word ("copper") with the grade it gives (lookup.TRADE_WORDS)."""
+    material it gives; a trade word ("copper") with the grade it gives (core.trade_words)."""
     names = {v.material.id: v.material.name for v in views}
     out = []
     for v in views:

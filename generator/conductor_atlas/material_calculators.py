@@ -10,7 +10,7 @@ runs the same core the pages run, on the material page's own catalogue.
 from __future__ import annotations
 
 from conductor_atlas.core.calculators import CALCULATOR_MODULES, calculate
-from conductor_atlas.core.lookup import TRADE_WORDS
+from conductor_atlas.core.trade_words import link_text
 
 # the fields whose problems mean "this material cannot be used here"
 MATERIAL_FIELDS = ("material", "model")
@@ -37,6 +37,4 @@ def link_key(material_id: str) -> str:
     """What a link to a calculator page puts in ?material= for this material: its id, except for a
     pure metal whose trade word means the conductor grade ("copper" is standard annealed copper), which
     is linked by its chemical symbol ("Cu") so the calculator page opens on the same material."""
-    if material_id in TRADE_WORDS:
-        return TRADE_WORDS[material_id][2]
-    return material_id
+    return link_text(material_id)

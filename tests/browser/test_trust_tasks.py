@@ -175,3 +175,20 @@ def test_a_model_in_the_address_is_read_in_any_case(tablet_page, served_site, ca
     assert pg.input_value("#in-resistance-model") == "cubic"
     assert pg.text_content("[data-result=resistance]") == "—"
     assert pg.errors == []
+
+
+def test_a_size_searched_with_copper_opens_the_calculator_on_the_conductor_grade(tablet_page, served_site, catalogue):
+    """"4/0 copper" in the search listed Copper-nickel 55/45 first (the size's digits matched its name).
+    Now the size answers first and opens the resistance calculator with 4/0 AWG and standard annealed
+    copper (the trade word as the calculators read it), and the page computes what the core computes."""
+    pg = tablet_page
+    pg.goto(f"{served_site}/search/index.html?q=4%2F0%20copper")
+    first = pg.locator("form[data-search=page] [role=option]").first
+    assert "4/0 AWG: 107.2 mm²" in first.inner_text() and "Standard annealed copper" in first.inner_text()
+    first.click()
+    pg.wait_for_selector("html.calc-ready")
+    assert pg.input_value("#in-resistance-size") == "4/0 AWG"
+    assert pg.input_value("#in-resistance-material") == "copper-annealed"
+    inputs = {name: pg.input_value(f"#in-resistance-{name}") for name in ("material", "length", "size", "temperature")}
+    assert_page_matches_core(pg, catalogue, inputs)
+    assert pg.errors == []

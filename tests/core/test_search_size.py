@@ -11,7 +11,8 @@ import math
 import pytest
 
 from conductor_atlas.core.search import search_entries
-from conductor_atlas.core.search_size import size_result
+from conductor_atlas.core.search_size import size_result, size_split
+from conductor_atlas.core.trade_words import link_text
 
 ENTRIES = [
     {"id": "cu-ni-55-45", "kind": "material", "title": "Copper-nickel 55/45 resistance alloy",
@@ -45,7 +46,7 @@ def test_the_printed_values_follow_from_the_standard_diameters():
 @pytest.mark.parametrize("typed", ["copper", "12", "", "   ", "iacs > 90", "4/0 copper", "0 AWG x", "1e400 mm²"])
 def test_anything_else_gives_no_size(typed):
     """A bare number is a gauge to some and mm² to others (the calculators refuse it and say so); a
-    size with other words, a filter or an unreadable size are searched as text."""
+    filter or an unreadable size is searched as text; a size with other words is split first (below)."""
     assert size_result(typed) is None
 
 
@@ -66,3 +67,57 @@ def test_the_size_counts_within_the_limit():
 def test_a_name_with_digits_is_still_a_name():
     outcome = search_entries(ENTRIES, "55/45", 8)
     assert outcome["results"][0]["id"] == "cu-ni-55-45"
+
+
+@pytest.mark.parametrize("typed, parts", [
+    ("4/0 copper", ["4/0", "copper"]),
+    ("copper 4/0", ["4/0", "copper"]),
+    ("12 AWG aluminium", ["12 AWG", "aluminium"]),
+    ("copper wire 2.5 mm²", ["2.5 mm²", "copper wire"]),
+    ("100 x 10 mm aluminium", ["100 x 10 mm", "aluminium"]),
+    ("4/0", ["4/0", ""]),
+    ("aluminium 6101", None),   # a designation's number is not a size (no unit)
+    ("cu-ni 55/45", None),
+    ("copper", None),
+])
+def test_a_size_typed_with_other_words_is_split_off(typed, parts):
+    assert size_split(typed) == parts
+
+
+@pytest.fixture(scope="module")
+def shipped_entries():
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.derive import derive
+    from conductor_atlas.load import load_dataset
+    from conductor_atlas.search_index_file import build_index
+    dataset = load_dataset(data_folders())
+    return build_index(dataset, derive(dataset), {})["entries"]
+
+
+@pytest.mark.parametrize("typed, material", [
+    ("4/0 copper", "copper-annealed"),        # the trade word, read as the calculators read it (core.trade_words)
+    ("copper 4/0", "copper-annealed"),
+    ("2.5 mm² aluminium", "aluminium-1350"),
+    ("100 x 10 mm oxygen-free copper", "copper-oxygen-free"),  # not a trade word: the best hit
+    ("12 AWG tinned copper", None),
+])
+def test_a_size_with_a_material_opens_the_calculator_with_both(shipped_entries, typed, material):
+    """Before: "4/0 copper" listed Copper-nickel 55/45 first (the size's digits matched its name) and
+    "2.5 mm² copper" found only that alloy. Now the size comes first, the rest is searched alone, and the
+    size result opens the calculator with the material (named in its text)."""
+    outcome = search_entries(shipped_entries, typed, 6)
+    size = outcome["results"][0]
+    assert size["kind"] == "size"
+    assert outcome["results"][1]["id"] != "cu-ni-55-45"
+    rest = size_split(typed)[1]
+    assert [r["id"] for r in outcome["results"][1:]] == [r["id"] for r in search_entries(shipped_entries, rest, 5)["results"]]
+    if material is None:
+        material = outcome["results"][1]["id"]
+    assert size["url"].endswith("&material=" + link_text(material))
+    title = [e["title"] for e in shipped_entries if e["id"] == material][0]
+    assert title in size["snippet"]
+
+
+def test_words_that_name_no_material_first_leave_the_calculators_default(shipped_entries):
+    outcome = search_entries(shipped_entries, "4/0 AWG wire", 6)
+    assert outcome["results"][0]["url"] == "calculators/resistance/index.html?size=4/0 AWG"

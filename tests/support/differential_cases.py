@@ -151,6 +151,7 @@ def calculator_cases():
         cases.append(("conductor_atlas.core.lookup", "trade_word_note", [catalogue, text]))
     for material_id in ("copper", "aluminium", "copper-annealed", "silver"):
         cases.append(("conductor_atlas.core.lookup", "lookup_text", [catalogue, material_id]))
+        cases.append(("conductor_atlas.core.trade_words", "link_text", [material_id]))
     # the pruned nearest-name search: unknown names typed a keystroke at a time, several counts
     for text in ("1", "13", "135", "1485.001", "cooper", "alumin", "c1720", "zzzzzzzzzzzzzzzz", "  ni ", "ÅÄ"):
         for count in (0, 1, 5, 12):

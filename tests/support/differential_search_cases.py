@@ -6,7 +6,7 @@ from __future__ import annotations
 
 
 SEARCH_QUERIES = [
-    "4/0", "12 AWG", "100 x 10 mm", "copper", "Copper", "COPPER", "cooper", "coper", "nickle", "aluminum", "alumínium", "ALUMINIUM", "aluminim",
+    "4/0", "12 AWG", "100 x 10 mm", "4/0 copper", "copper wire 2.5 mm²", "4/0 AWG wire", "cu-ni 55/45", "copper", "Copper", "COPPER", "cooper", "coper", "nickle", "aluminum", "alumínium", "ALUMINIUM", "aluminim",
     "tungsten", "wolfram", "w", "c", "n", "s", "7", "cu", "A91350", "uns a91350", "c17200", "C172", "cca 10", "CCA-10", "2.4869",
     "skin depth", "skin", "resistivity temperature", "debye", "mean free path", "calculator", "resistance calculator",
     "references", "gold film", "copper alloy", "the", "   ", "", "Ωµ²·", "crème brûlée", "zzzz qqqq",
@@ -52,6 +52,10 @@ def search_cases():
     for text in ["4/0", "12 AWG", "#12", "2.5 mm²", "250 kcmil", "100 x 10 mm", "d 1.6 mm", "12", "copper", "4/0 copper",
                  "1e400 mm²", "0 AWG", "50 AWG"]:
         cases.append(("conductor_atlas.core.search_size", "size_result", [text]))
+        cases.append(("conductor_atlas.core.search_size", "size_split", [text]))
+    for text in ["copper wire 2.5 mm²", "100 x 10 mm aluminium", "aluminium 6101", "4/0 AWG wire"]:
+        cases.append(("conductor_atlas.core.search_size", "size_split", [text]))
+    cases.append(("conductor_atlas.core.search_size", "size_result", ["4/0", ["copper-annealed", "Standard annealed copper"]]))
     for word in ["copper", "c17200", "", "zz9"]:
         cases.append(("conductor_atlas.core.search_format", "letter_mask", [word]))
     hits = [[2, 1.5, 0, "Copper", "copper", 0, -1], [2, 1.5, 1, "Copper", "copper-table", 3, -1],

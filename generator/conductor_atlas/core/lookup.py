@@ -9,6 +9,7 @@ by search_text.osa_distance.
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.search_text import cached_tokens, osa_distance, tokens
 from conductor_atlas.core.text_match import name_key
+from conductor_atlas.core.trade_words import TRADE_WORDS
 
 
 # A limit above any distance between an id or alias and typed text (no pruning yet)
@@ -162,14 +163,6 @@ def materials_used_for(catalogue, text, count):
     return found
 
 
-# The plain words a practitioner types for conductor metal mean the conductor grade that is bought
-# and measured, not the high-purity element (common practice (no source)); the chemical symbol keeps
-# meaning the element. word -> [grade id, the element's id, the element's symbol]
-TRADE_WORDS = {
-    "copper": ["copper-annealed", "copper", "Cu"],
-    "aluminium": ["aluminium-1350", "aluminium", "Al"],
-    "aluminum": ["aluminium-1350", "aluminium", "Al"],
-}
 
 
 def trade_word_grade(catalogue, wanted):

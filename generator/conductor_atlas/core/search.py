@@ -51,7 +51,9 @@ from conductor_atlas.core.search_format import (E_ALIASES, E_CLASS, E_FACTS, E_I
 from conductor_atlas.core.search_text import compact, STOP_WORDS, tokens, word_match
 from conductor_atlas.core.search_filters import find_operator, parse_filter, passes, split_clauses
 from conductor_atlas.core.search_prepare import prepare_index
-from conductor_atlas.core.search_size import size_result
+from conductor_atlas.core.search_size import size_result, size_split
+from conductor_atlas.core.text_match import name_key
+from conductor_atlas.core.trade_words import TRADE_WORDS
 from conductor_atlas.core.search_rank import (best_field, gather, keep_hit, KIND_BONUS, KIND_ORDER, merge_sort,
                                               score_bound, score_entry, word_marks, word_qualities, word_score,
                                               words_matched)
@@ -189,6 +191,10 @@ def search(index, query, limit):
     text = str(query).strip()
     if len(text) == 0:
         return outcome
+    # a size typed with other words ("4/0 copper"): the rest is searched alone (core.search_size)
+    sized = size_split(text)
+    if sized is not None and len(sized[1]) > 0 and find_operator(sized[1]) is None:
+        text = sized[1]
     query_words = []
     filters = []
     for clause in split_clauses(text):
@@ -289,7 +295,9 @@ def search(index, query, limit):
     if limit <= 0:
         top = merge_sort(top)
     # a query that reads as a conductor size answers with the size first (core.search_size)
-    size = size_result(text) if len(filters) == 0 else None
+    size = None
+    if sized is not None and len(filters) == 0:
+        size = size_result(sized[0], sized_material(entries, kinds, top, sized[1]) if len(sized[1]) > 0 else None)
     if size is not None:
         outcome["results"].append(size)
         total += 1
@@ -319,6 +327,28 @@ def search(index, query, limit):
         extra = unknown_note(unknown, filters)
         outcome["note"] = extra if len(outcome["note"]) == 0 else outcome["note"] + " " + extra
     return outcome
+
+
+def sized_material(entries, kinds, top, words):
+    """[id, title] of the material typed beside a size: a trade word ("copper") is its conductor grade,
+    as in the calculators (core.trade_words); other words give the best hit when it is a material."""
+    key = name_key(words)
+    if key in TRADE_WORDS:
+        for record in entries:
+            if record[E_ID] == TRADE_WORDS[key][0] and kinds[record[E_KIND]] == "material":
+                return [record[E_ID], record[E_TITLE]]
+    return first_material(entries, kinds, top)
+
+
+def first_material(entries, kinds, top):
+    """[id, title] of the best hit when it is a material, or None (the words typed beside a size named no
+    material first, e.g. "wire": the calculator keeps its own default rather than a guess)."""
+    if len(top) == 0:
+        return None
+    record = entries[top[0][5]]
+    if kinds[record[E_KIND]] != "material":
+        return None
+    return [record[E_ID], record[E_TITLE]]
 
 
 # (positional arguments only, as above)

@@ -7,11 +7,17 @@ search answers first with one result of kind "size": its area and diameter (AWG:
 diameter; a bar: width x thickness), linking to the resistance calculator with the size filled in.
 Anything else (no digit, a filter, a bare number such as "12", which is a gauge to some and mm² to
 others) gives no size result and the search goes on as before.
+
+A size with a material ("4/0 copper", "copper wire 2.5 mm²", "100 x 10 mm aluminium"): ``size_split``
+finds the size at the start or the end of the query; the search then looks for the rest alone (the
+size's digits matched "Copper-nickel 55/45" first) and the size result names the first material found
+and opens the calculator with both.
 """
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import area_text, parse_size
 from conductor_atlas.core.numfmt import format_number
+from conductor_atlas.core.trade_words import link_text
 
 DIGITS = "0123456789"
 # characters that would end or split the query part of the calculator's address: written as %XX
@@ -66,11 +72,51 @@ def size_title(size, typed):
     return size["label"] + ": " + area + ", " + diameter
 
 
-def size_result(text):
+def size_split(text):
+    """[size text, rest] when the query is a size, or a size followed or preceded by other words; else None.
+
+    The whole query is tried first, then its leading words (longest first), then its trailing words.
+
+    >>> size_split("4/0 copper")
+    ['4/0', 'copper']
+    >>> size_split("copper wire 2.5 mm²")
+    ['2.5 mm²', 'copper wire']
+    >>> size_split("12 AWG")
+    ['12 AWG', '']
+    >>> size_split("aluminium 6101") is None
+    True
+    """
+    typed = str(text).strip()
+    if len(typed) == 0 or not has_digit(typed):
+        return None
+    if _reads_as_size(typed):
+        return [typed, ""]
+    words = typed.split()
+    for cut in range(len(words) - 1, 0, -1):
+        head = " ".join(words[:cut])
+        if has_digit(head) and _reads_as_size(head):
+            return [head, " ".join(words[cut:])]
+    for cut in range(1, len(words)):
+        tail = " ".join(words[cut:])
+        if has_digit(tail) and _reads_as_size(tail):
+            return [tail, " ".join(words[:cut])]
+    return None
+
+
+def _reads_as_size(text):
+    try:
+        parse_size(text, SEARCH_FIELD)
+    except CoreError:
+        return False
+    return True
+
+
+def size_result(text, material=None):
     """The "size" search result for a query that reads as a conductor size, or None.
 
     Returns {"id", "title", "url" (from the site root), "kind": "size", "snippet", "score"}, the
-    shape of the search's other results. ASTM B258: AWG 4/0 is 0.4600 in = 11.684 mm across,
+    shape of the search's other results. ``material``: [id, title] of a material typed with the size
+    (the calculator opens with it, named as core.trade_words.link_text writes it), or None. ASTM B258: AWG 4/0 is 0.4600 in = 11.684 mm across,
     107.2 mm²:
 
     >>> size_result("4/0")["title"]
@@ -86,7 +132,12 @@ def size_result(text):
     except CoreError:
         return None
     label = size["label"] if size["shape"] != "area" else typed
-    return {"id": "size", "title": size_title(size, typed), "url": CALCULATOR_URL + address_text(label), "kind": "size",
+    url = CALCULATOR_URL + address_text(label)
+    opens = "this size"
+    if material is not None:
+        url = url + "&material=" + address_text(link_text(material[0]))
+        opens = "this size and " + material[1]
+    return {"id": "size", "title": size_title(size, typed), "url": url, "kind": "size",
             "snippet": "Cross-section " + area_text(size, size["area"]) + ". Open the resistance calculator with "
-                       "this size; each material page has the size tables.",
+                       + opens + "; each material page has the size tables.",
             "score": 0.0}
