@@ -132,3 +132,61 @@ def test_command_line_json():
     assert bad.returncode == 1
     assert "--k: in kelvin is ambiguous" in bad.stderr
     assert "Traceback" not in bad.stderr
+
+
+# --- a material whose ρ(T) is not linear over the span: its own model, inverted (core.winding_temperature)
+
+# Nickel's resistivity table as the data file records it (CRC Handbook, "Electrical resistivity of pure
+# metals", row Ni, from memory): T [K] -> ρ [µΩ·cm]
+NICKEL_CRC = [(293, 6.93), (298, 7.12), (300, 7.2), (400, 11.8), (500, 17.7), (600, 25.5), (700, 32.1), (800, 35.5),
+              (900, 38.6)]
+
+
+def test_nickel_far_above_its_linear_span_reads_its_table(catalogue):
+    """Before: R2/R1 = 3 from 20 °C read 377.1 °C by k = 1/α − 20 (α = 0.0056 /K, the slope at 20 °C), while
+    nickel's own table puts that ratio near 267 °C (the table bends below the Curie point, 627 K).
+    Expected by hand with numpy's piecewise-linear interpolation of the CRC points (the model is piecewise
+    linear too, so agreement is to the bisection's 1e-7 K)."""
+    import numpy as np
+    temps, rhos = zip(*NICKEL_CRC)
+    start = np.interp(T0 + 20.0, temps, rhos)
+    expected = np.interp(3.0 * start, rhos, temps)      # ρ rises with T here, so the table inverts
+    assert expected == pytest.approx(539.83, abs=0.01)
+    out = run(catalogue, material="Ni", resistance_cold="1 ohm", resistance_hot="3 ohm")
+    assert value(out, "temperature_hot") == pytest.approx(expected, rel=0, abs=1e-6)
+    assert "k" not in out["results"]
+    assert "table" in out["model"] and "ρ(t2) = (R2/R1) ρ(t1)" in out["model"]
+    assert any("would give 377.1 °C" in w for w in out["warnings"])  # the linear method, shown beside it
+
+
+def test_a_platinum_sensor_reads_the_iec_60751_curve(catalogue):
+    """IEC 60751 Table 1 (from memory): a Pt100 reads 138.5055 Ω at 100 °C over 100 Ω at 0 °C."""
+    out = run(catalogue, material="Pt385", resistance_cold="100 ohm", temperature_cold="0 °C",
+              resistance_hot="138.5055 ohm")
+    assert value(out, "temperature_hot") == pytest.approx(T0 + 100.0, rel=0, abs=1e-3)
+    assert "Callendar" in out["model"]
+
+
+def test_inside_the_linear_span_the_k_method_stays(catalogue):
+    # nickel, R2/R1 = 1.3: k = 1/0.0056 − 20 = 158.571 -> t2 = 1.3 · 178.571 − 158.571 = 73.571 °C, inside −50..150 °C
+    out = run(catalogue, material="Ni", resistance_cold="1 ohm", resistance_hot="1.3 ohm")
+    k = 1.0 / 0.0056 - 20.0
+    assert value(out, "k") == pytest.approx(k, rel=1e-12)
+    assert value(out, "temperature_hot") == pytest.approx(1.3 * (k + 20.0) - k + T0, rel=1e-12)
+
+
+def test_beyond_the_table_it_falls_back_and_says_so(catalogue):
+    # nickel's table ends at 900 K (38.6 µΩ·cm, 5.6 times its 20 °C value): R2/R1 = 7 cannot be read from it
+    out = run(catalogue, material="Ni", resistance_cold="1 ohm", resistance_hot="7 ohm")
+    assert any("beyond the span" in w and "extrapolation" in w for w in out["warnings"])
+    assert "k" in out["results"]
+
+
+@pytest.mark.parametrize("material, r2", [("cu-ni-55-45", "13 ohm"), ("", "300 ohm")])
+def test_a_ratio_no_solid_winding_can_reach_is_refused(catalogue, material, r2):
+    """Before: a resistance alloy (α 1e-5 /K) with R2/R1 = 1.3 read 30 020 °C. Above tungsten's melting point
+    (3422 °C, the highest of the metals; CRC Handbook, from memory) no winding is solid: refused under R2."""
+    out = run(catalogue, material=material, k="234.5" if material == "" else "", resistance_cold="10 ohm",
+              resistance_hot=r2)
+    assert "melting point" in out["errors"]["resistance_hot"]
+    assert out["results"] == {}

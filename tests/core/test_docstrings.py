@@ -26,6 +26,7 @@ EXAMPLES_REQUIRED = {
     "size_effect": None, "carriers": None, "skin_effect": None, "kelvin_functions": None,
     "temperature_models": None, "layered_round": None, "clad_layers": None, "search_size": None,
     "round_pair": None, "errors": None, "trade_words": None,
+    "winding_temperature": ["temperature_for_ratio"],
     "geometry": ["awg_number", "awg_name", "awg_diameter_exact", "awg_diameter", "awg_area", "round_area",
                  "diameter_from_area", "next_metric_size", "next_awg", "parse_size", "size_from_text"],
     "material_models": ["cvd_ratio", "choose_model", "resistivity_or_none", "within_model", "resistivity_at",

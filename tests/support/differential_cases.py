@@ -204,6 +204,19 @@ def new_calculator_cases(catalogue):
                                     ("10 ohm", "20 °C", "1 ohm", ""), ("0 ohm", "", "-1 ohm", "abc")):
             add("temperature_rise", "", {"material": material, "k": k, "resistance_cold": r1, "temperature_cold": t1,
                                          "resistance_hot": r2, "coolant": coolant})
+    # a curved ρ(T) read backwards (core.winding_temperature): inside and beyond the linear span, the
+    # table's end, a sensor curve, an estimate, a ratio no solid winding reaches
+    for material in ("ni", "Pt385", "W", "Ag", "phosphor-bronze", "CCS-40", "cu-ni-55-45", "Fe"):
+        for r2 in ("1.3 ohm", "3 ohm", "7 ohm", "0.5 ohm", "1 ohm"):
+            add("temperature_rise", "", {"material": material, "k": "", "resistance_cold": "1 ohm",
+                                         "temperature_cold": "20 °C", "resistance_hot": r2, "coolant": ""})
+    wt = "conductor_atlas.core.winding_temperature"
+    for material_id in ("nickel", "platinum-pt385", "phosphor-bronze", "copper-annealed"):
+        m = catalogue["materials"][material_id]
+        cases.append((wt, "curved_model", [m, 293.15]))
+        for key in ("table", "callendar-van-dusen", "matthiessen"):
+            for ratio in (0.5, 1.0, 1.3, 3.0, 7.0):
+                cases.append((wt, "temperature_for_ratio", [m, 293.15, ratio, key]))
     for pair in (("IACS", "1350"), ("Cu", "Ag"), ("IACS", "cca-10"), ("1350", "IACS"), ("IACS", "IACS"),
                  ("IACS", "chromium-zirconium-copper"), ("IACS", "6101"), ("IACS", "xx"), ("", "")):
         for size, t in (("", ""), ("35 mm2", "90 °C"), ("4/0 AWG", ""), ("2000 mm2", ""), ("d 2 mm", "77 K"),

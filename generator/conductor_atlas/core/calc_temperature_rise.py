@@ -10,6 +10,8 @@ from conductor_atlas.core.outcome import (keys_of, add_error, add_result, add_so
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_quantity, require_positive
 from conductor_atlas.core.typed_text import parse_number, normalise_text
 from conductor_atlas.core.units import normalise_unit, parse_quantity
+from conductor_atlas.core.material_models import choose_model, in_linear_span, MODEL_LABELS, resistivity_at
+from conductor_atlas.core.winding_temperature import curved_model, temperature_for_ratio
 
 NAME = "temperature-rise"
 TITLE = "Winding temperature by the resistance method"
@@ -36,6 +38,11 @@ SIDE_FIELDS = {"coolant": ["temperature_rise"]}
 CAUTION = ("The resistance method gives the mean winding temperature; hot spots run hotter. Measure R1 with the "
            "winding at a uniform, known temperature and R2 as soon as possible after switching off.")
 
+SMALL_CHANGE = ("the resistance of {name} changes little with temperature (α below 0.001 /K), so small measurement "
+                "errors in R1 and R2 give large temperature errors")
+# [K] tungsten's melting point, the highest of the metals (3422 °C; CRC Handbook, melting points of
+# the elements, from memory): no winding is solid above it, whatever the material's record lacks
+HIGHEST_MELTING_POINT = 3695.15
 # span where the linear R(T) behind the method is good for copper and aluminium (core.practice)
 LINEAR_FROM = ZERO_CELSIUS - 50.0
 LINEAR_TO = ZERO_CELSIUS + 200.0
@@ -135,9 +142,65 @@ def material_k(outcome, m, catalogue):
                 + format_number(m["alpha"], 4) + " /K at " + celsius_text(m["t_ref"])
                 + "): k = 1/α − t_ref; the standards give k for copper and aluminium only")
     if m["alpha"] < 1e-3:
-        add_warning(outcome, "the resistance of " + m["name"] + " changes little with temperature (α below 0.001 /K), "
-                             "so small measurement errors in R1 and R2 give large temperature errors")
+        add_warning(outcome, SMALL_CHANGE.replace("{name}", m["name"]))
     return k
+
+
+def add_temperatures(outcome, t1, t2, r1, r2, coolant, coolant_bad):
+    """The hot temperature, the rise (over the coolant, or over t1 without one) and R2/R1."""
+    base = t1
+    if coolant is not None:
+        base = coolant
+    rise = t2 - base
+    add_result(outcome, "temperature_hot", t2, "K", temperature_text(t2))
+    if coolant is not None:
+        add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the coolant ("
+                   + celsius_text(coolant) + ")")
+    elif not coolant_bad:  # (a bad coolant leaves the rise out; the message is under the field)
+        add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the cold temperature ("
+                   + celsius_text(t1) + ")")
+    add_result(outcome, "resistance_ratio", r2 / r1, "", format_number(r2 / r1, 5))
+
+
+def by_material_curve(outcome, m, t1, r1, r2, coolant, coolant_bad):
+    """The answer by the material's own curved ρ(T) (core.winding_temperature) for a material the
+    standards give no k for, where its linear model (k = 1/α − t_ref) does not hold at both ends (as
+    the resistivity calculator's "auto" would not use it); True when it answered, False to go on with
+    k from α (a warning says why when the material has a curve that does not reach)."""
+    if m["alpha"] > 0 and choose_model(m, t1) == "linear":
+        # inside the temperature coefficient's span at both ends the k method is the material's own
+        # linear model (what the resistivity calculator uses there too)
+        k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
+        if in_linear_span(m, practice.resistance_method_temperature(r1, t1, r2, k)):
+            return False
+    key = curved_model(m, t1)
+    if len(key) == 0:
+        return False
+    label = MODEL_LABELS[key]
+    t2 = temperature_for_ratio(m, t1, r2 / r1, key)
+    if t2 is None:
+        add_warning(outcome, "R2/R1 = " + format_number(r2 / r1, 4) + " reaches beyond the span of " + m["name"]
+                    + "'s " + label + ": the linear method with k from α is used instead, an extrapolation")
+        return False
+    outcome["material"] = m["id"]
+    outcome["model"] = "resistance method by the material's ρ(T): ρ(t2) = (R2/R1) ρ(t1), " + label
+    add_temperatures(outcome, t1, t2, r1, r2, coolant, coolant_bad)
+    add_sources(outcome, m["rho_sources"])
+    for note in resistivity_at(m, t2, key)["warnings"]:
+        add_warning(outcome, note)  # the model's standing note (an estimate), if any
+    if m["alpha"] > 0:
+        k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
+        linear = practice.resistance_method_temperature(r1, t1, r2, k)
+        if abs(linear - t2) >= 0.5:
+            add_warning(outcome, "the linear method with k = " + format_number(k, 4) + " from α (the slope at "
+                        + celsius_text(m["t_ref"]) + ") would give " + celsius_text(linear) + "; " + m["name"]
+                        + "'s " + label + " gives " + celsius_text(t2))
+    if abs(t2 - t1) > 0 and abs(r2 / r1 - 1.0) / abs(t2 - t1) < 1e-3:
+        add_warning(outcome, SMALL_CHANGE.replace("{name}", m["name"]))
+    if r2 < r1:
+        add_warning(outcome, "R2 is below R1: the winding was colder at the second measurement")
+    check_finite_results(outcome, "resistance_hot")
+    return True
 
 
 def calculate(inputs, catalogue):
@@ -173,6 +236,10 @@ def calculate(inputs, catalogue):
     for field in keys_of(outcome["errors"]):
         if field != "coolant":
             return outcome
+    if k is None and not is_copper(m, catalogue) and not is_ec_aluminium(m, catalogue):
+        curved = by_material_curve(outcome, m, t1, r1, r2, coolant, coolant_bad)
+        if curved:
+            return outcome
     if k is None:
         k = material_k(outcome, m, catalogue)
         if k is None:
@@ -195,21 +262,18 @@ def calculate(inputs, catalogue):
         add_error(outcome, "resistance_hot", "R2/R1 = " + format_number(r2 / r1, 4) + " would put the winding below "
                   "absolute zero; check the two resistances and their units")
         return outcome
-    base = t1
-    if coolant is not None:
-        base = coolant
-    rise = t2 - base
+    melting = HIGHEST_MELTING_POINT
+    what = "any metal (tungsten, "
+    if m is not None and m["melting_point"] > 0:
+        melting = m["melting_point"]
+        what = m["name"] + " ("
+    if t2 > melting:
+        add_error(outcome, "resistance_hot", "R2/R1 = " + format_number(r2 / r1, 4) + " would put the winding at "
+                  + celsius_text(t2) + ", above the melting point of " + what + celsius_text(melting)
+                  + "): check the two resistances, their units and the material")
+        return outcome
     outcome["model"] = "resistance method, t2 = (R2/R1)(k + t1) − k"
-    add_result(outcome, "temperature_hot", t2, "K", temperature_text(t2))
-    if coolant is not None:
-        add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the coolant ("
-                   + celsius_text(coolant) + ")")
-    elif coolant_bad:
-        pass  # the rise needs the coolant typed: it is left out, the message is under the field
-    else:
-        add_result(outcome, "temperature_rise", rise, "K", format_fixed(rise, 1) + " K over the cold temperature ("
-                   + celsius_text(t1) + ")")
-    add_result(outcome, "resistance_ratio", r2 / r1, "", format_number(r2 / r1, 5))
+    add_temperatures(outcome, t1, t2, r1, r2, coolant, coolant_bad)
     add_result(outcome, "k", k, "K", format_number(k, 5) + " (inferred zero at " + format_number(-k, 5) + " °C)")
     if t2 < LINEAR_FROM or t2 > LINEAR_TO:
         add_warning(outcome, "the hot temperature lies outside −50 to 200 °C, where the linear R(T) behind the method "
