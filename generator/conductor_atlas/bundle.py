@@ -17,6 +17,13 @@ the import closes a cycle (the exporting module has not run yet); that case is r
 ``import * as ns`` across a cycle is fine (the namespace is live). A named import whose name the
 module's code never mentions is left out (``words_of``).
 
+A bundle can be split in two: a base bundle that publishes its modules' namespaces
+(``publishes``: ``globalThis.conductorAtlasModules``, path -> namespace, set once per page) and a
+part loaded later (``linked``: the paths the base holds), which leaves those modules out and takes
+their namespaces from the base, so both share one instance of every module (one runtime, one
+CoreError class, one registry of the AC part: core.ac_part). A part run on a page without its base
+throws an Error naming the module it missed.
+
 Pure function: files in, bytes out; writes nothing.
 """
 
@@ -99,14 +106,15 @@ def resolve(importer: str, spec: str) -> str:
 
 
 def evaluation_order(entry: str, modules: dict[str, Module]) -> list[str]:
-    """Depth-first post-order from the entry, imports in source order: a browser's order."""
+    """Depth-first post-order from the entry, imports in source order: a browser's order (modules
+    not in ``modules``, those a base bundle has run already, are skipped)."""
     order: list[str] = []
     seen: set[str] = set()
 
     def visit(path: str) -> None:
         seen.add(path)
         for target, _ in modules[path].imports:
-            if target not in seen:
+            if target not in seen and target in modules:
                 visit(target)
         order.append(path)
 
@@ -114,45 +122,65 @@ def evaluation_order(entry: str, modules: dict[str, Module]) -> list[str]:
     return order
 
 
-def load_graph(files: dict[str, bytes], entry: str, parsed: dict[str, Module] | None = None) -> dict[str, Module]:
-    """The modules ``entry`` reaches; ``parsed`` (path -> Module) is shared between bundles of one
-    file set so each module is read once (modules are not changed after parsing)."""
+def load_graph(files: dict[str, bytes], entry: str, parsed: dict[str, Module] | None = None,
+               linked: frozenset[str] = frozenset()) -> dict[str, Module]:
+    """The modules ``entry`` reaches, but not through or into ``linked`` (modules a base bundle holds);
+    ``parsed`` (path -> Module) is shared between bundles of one file set so each module is read once
+    (modules are not changed after parsing)."""
     parsed = {} if parsed is None else parsed
     modules: dict[str, Module] = {}
     pending = [entry]
     while pending:
         path = pending.pop()
-        if path in modules:
+        if path in modules or path in linked:
             continue
-        if path not in files:
-            raise BuildError(f"classic bundle of {entry}: {path} is imported but is not a file of the site")
-        if path not in parsed:
-            parsed[path] = parse_module(path, files[path].decode("utf-8"))
-        modules[path] = parsed[path]
+        modules[path] = parsed_module(files, path, entry, parsed)
         pending.extend(target for target, _ in modules[path].imports)
     return modules
 
 
-def bundle(files: dict[str, bytes], entry: str, parsed: dict[str, Module] | None = None) -> bytes:
+def parsed_module(files: dict[str, bytes], path: str, entry: str, parsed: dict[str, Module]) -> Module:
+    if path not in files:
+        raise BuildError(f"classic bundle of {entry}: {path} is imported but is not a file of the site")
+    if path not in parsed:
+        parsed[path] = parse_module(path, files[path].decode("utf-8"))
+    return parsed[path]
+
+
+PUBLISHED = "conductorAtlasModules"  # the global a base bundle publishes its namespaces under
+
+
+def bundle(files: dict[str, bytes], entry: str, parsed: dict[str, Module] | None = None,
+           linked: frozenset[str] = frozenset(), publishes: bool = False) -> bytes:
     """One classic script that runs ``entry`` (a site path such as "static/calc.js") and its imports.
 
-    ``parsed``: modules already parsed from the same ``files`` (see ``load_graph``)."""
-    modules = load_graph(files, entry, parsed)
+    ``parsed``: modules already parsed from the same ``files`` (see ``load_graph``). ``linked``: the
+    modules of a base bundle this one is a part of (left out, taken from the base's published
+    namespaces); ``publishes``: publish this bundle's namespaces for its parts."""
+    parsed = {} if parsed is None else parsed
+    modules = load_graph(files, entry, parsed, linked)
     order = evaluation_order(entry, modules)
     position = {path: i for i, path in enumerate(order)}
+    needed = sorted({target for path in order for target, _ in modules[path].imports if target in linked})
     out = [f"// Conductor Atlas: {entry} and the modules it imports, joined by the build into one classic",
            "// script so the page also works when opened from a file. Generated; edit the modules instead.",
            "(function () {",
            "'use strict';",
-           f"const {PREFIX}ns = {json.dumps(order)}.map(() => Object.create(null));",
-           f"function {PREFIX}export(ns, getters) {{",
-           "  for (const name of Object.keys(getters).sort()) {",
-           "    Object.defineProperty(ns, name, {get: getters[name], enumerable: true});",
-           "  }",
-           "  Object.defineProperty(ns, Symbol.toStringTag, {value: 'Module'});",
-           "  Object.preventExtensions(ns);",
-           "}",
-           f"const {PREFIX}modules = [];"]
+           f"const {PREFIX}ns = {json.dumps(order)}.map(() => Object.create(null));"]
+    if needed:
+        out += [f"const {PREFIX}linked = globalThis.{PUBLISHED} || {{}};",
+                f"for (const path of {json.dumps(needed)}) {{",
+                f"  if (!{PREFIX}linked[path]) throw new Error({json.dumps(entry + ' needs ')} + path + "
+                f"{json.dumps(' from the calculator script of the page, which has not run')});",
+                "}"]
+    out += [f"function {PREFIX}export(ns, getters) {{",
+            "  for (const name of Object.keys(getters).sort()) {",
+            "    Object.defineProperty(ns, name, {get: getters[name], enumerable: true});",
+            "  }",
+            "  Object.defineProperty(ns, Symbol.toStringTag, {value: 'Module'});",
+            "  Object.preventExtensions(ns);",
+            "}",
+            f"const {PREFIX}modules = [];"]
     for path in order:
         module = modules[path]
         me = position[path]
@@ -162,24 +190,33 @@ def bundle(files: dict[str, bytes], entry: str, parsed: dict[str, Module] | None
         out.append(f"{PREFIX}export({PREFIX}ns[{me}], {{{getters}}});")
         out.append("yield;")
         for target, what in module.imports:
-            source = position[target]
+            if target in linked:
+                namespace = f"{PREFIX}linked[{json.dumps(target)}]"
+                exported = parsed_module(files, target, entry, parsed).exports
+            else:
+                namespace = f"{PREFIX}ns[{position[target]}]"
+                exported = modules[target].exports
             if isinstance(what, str):
-                out.append(f"const {what} = {PREFIX}ns[{source}];")
+                out.append(f"const {what} = {namespace};")
                 continue
-            if source >= me:
+            if target not in linked and position[target] >= me:
                 raise BuildError(f"{path}: a named import from {target} closes an import cycle; "
                                  f"the classic bundle supports only `import * as` across a cycle")
             for outer, _ in what:
-                if outer not in modules[target].exports:
+                if outer not in exported:
                     raise BuildError(f"{path}: imports {outer!r} from {target}, which does not export it")
             kept = [(outer, local) for outer, local in what if local in words_of(module)]
             if kept:
                 names = ", ".join(outer if outer == local else f"{outer}: {local}" for outer, local in kept)
-                out.append(f"const {{{names}}} = {PREFIX}ns[{source}];")
+                out.append(f"const {{{names}}} = {namespace};")
         out.extend(module.body)
         out.append("});")
     out.append(f"const {PREFIX}running = {PREFIX}modules.map((make) => make());")
     out.append(f"for (const module of {PREFIX}running) module.next();")
+    if publishes:
+        # published after linking, before evaluating: a part is only ever loaded after the page has run
+        table = ", ".join(f"{json.dumps(path)}: {PREFIX}ns[{i}]" for i, path in enumerate(order))
+        out.append(f"Object.defineProperty(globalThis, {json.dumps(PUBLISHED)}, {{value: Object.freeze({{{table}}})}});")
     out.append(f"for (const module of {PREFIX}running) module.next();")
     out.append("})();")
     return ("\n".join(compact_lines(out)) + "\n").encode("utf-8")

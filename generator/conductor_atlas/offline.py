@@ -3,7 +3,9 @@
 ``add_offline_files(files)`` takes the finished site (path -> bytes) and returns it with:
 
 - ``static/<name>.classic.js`` for every ES-module script in static/ (see bundle.py): one classic
-  script that also runs on a page opened from a file, where browsers refuse module scripts;
+  script that also runs on a page opened from a file, where browsers refuse module scripts (a part,
+  ``PARTS``: the AC part of the calculators, loaded by material pages when a frequency is typed, is
+  linked to its base's script instead of carrying its modules again);
 - ``site.webmanifest``: name, start page and icons, so a tablet can install the site;
 - ``sw.js`` (from templates/sw.js.j2): a service worker that, on the first served visit, stores
   every other file of the site (but search-index.js, which only pages opened from files use) in one
@@ -23,7 +25,7 @@ import struct
 import jinja2
 
 from conductor_atlas import __version__
-from conductor_atlas.bundle import bundle
+from conductor_atlas.bundle import bundle, load_graph
 from conductor_atlas.cache import files_key
 from conductor_atlas.atlas_errors import BuildError
 from conductor_atlas.paths import TEMPLATES_DIR
@@ -44,12 +46,28 @@ def classic_name(path: str) -> str:
     return path[: -len(".js")] + ".classic.js"
 
 
+# part script -> the base script whose page loads it later: the part's twin leaves out every module
+# of the base's twin and links to the base's (bundle.py), the base's twin publishes its modules
+PARTS = {"static/calc-ac.js": "static/calc-resistance.js"}
+
+
 def classic_bundles(files: dict[str, bytes]) -> dict[str, bytes]:
-    """A classic-script twin for every module script in static/ (module = has import/export lines)."""
+    """A classic-script twin for every module script in static/ (module = has import/export lines);
+    a part (``PARTS``) is linked to its base's twin."""
     entries = [p for p in sorted(files) if p.startswith("static/") and p.endswith(".js")
                and not p.endswith(".classic.js") and MODULE_LINE.search(files[p])]
     parsed: dict = {}  # each module parsed once for all bundles
-    return {classic_name(p): bundle(files, p, parsed) for p in entries}
+    bases = {base for part, base in PARTS.items() if part in files}
+    out = {}
+    for p in entries:
+        if p in PARTS:
+            if PARTS[p] not in files:
+                raise BuildError(f"{p} is a part of {PARTS[p]}, which is not a file of the site")
+            linked = frozenset(load_graph(files, PARTS[p], parsed))
+            out[classic_name(p)] = bundle(files, p, parsed, linked=linked)
+        else:
+            out[classic_name(p)] = bundle(files, p, parsed, publishes=p in bases)
+    return out
 
 
 def png_size(data: bytes, path: str) -> tuple[int, int]:

@@ -1,10 +1,12 @@
 // Conductor Atlas: the compare page. Every calculator as on the calculator pages, plus a chart of
-// ρ(T) for the two materials being compared, drawn from the same core models the tables use.
-import {calculate} from '../js/conductor_atlas.core.calculators.js';
+// ρ(T) for the two materials being compared, drawn from the same core models the tables use. The AC
+// part of the core (calc-ac.js) is in the same script.
+import {calculate, needs_live_solver} from '../js/conductor_atlas.core.calculators.js';
 import {find_material} from '../js/conductor_atlas.core.lookup.js';
 import {resistivity_at} from '../js/conductor_atlas.core.material_models.js';
 import {format_number} from '../js/conductor_atlas.core.numfmt.js';
 import {dict} from '../js/org.transcrypt.__runtime__.js';
+import * as acPart from './calc-ac.js';
 import {start} from './calc-form.js';
 
 const SVG = 'http://www.w3.org/2000/svg';
@@ -124,4 +126,4 @@ start((name, inputs, catalogue) => {
     else chartTimer = setTimeout(() => chartFor(wanted, catalogue), CHART_PAUSE_MS);
   }
   return outcome;
-}, dict);
+}, dict, needs_live_solver);

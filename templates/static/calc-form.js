@@ -92,7 +92,7 @@ function viewOf(form) {
     warningsNode: section.querySelector('.calc-warnings'),
     modelNode: section.querySelector('[data-model]'), materialNode: section.querySelector('[data-material]'), used: null,
     sourcesNode: section.querySelector('[data-sources]'),
-    busyNode: section.querySelector('[data-busy]'), busy: '', slow: false, ran: false, solveTimer: 0, solved: null,
+    busyNode: section.querySelector('[data-busy]'), busy: '', slow: false, ran: false, solveTimer: 0, solved: null, awaiting: null,
     // the model list, found once; modelsFor: the material its options were last marked for
     modelSelect: form.querySelector('select[name=model]'), modelsFor: null,
   };
@@ -268,7 +268,7 @@ function inputsOf(view) {
   return view.inputs;
 }
 
-function run(view, catalogue) {
+function run(view, catalogue, live) {
   const inputs = inputsOf(view);
   const started = performance.now();
   let outcome;
@@ -277,19 +277,22 @@ function run(view, catalogue) {
   } catch (problem) {
     outcome = {results: {}, warnings: ['The calculator hit an internal problem: ' + String(problem && problem.message || problem)], errors: {}};
   }
-  // the page's first update also compiles the core, so it does not count
-  if (view.ran) view.slow = performance.now() - started > SLOW_MS;
+  // the page's first update also compiles the core, so it does not count; nor does a solve the core
+  // said was coming (live): the measure is for updates nobody predicted to be slow
+  if (view.ran && !live) view.slow = performance.now() - started > SLOW_MS;
   view.ran = true;
   show(view, outcome);
   showModels(view, catalogue, outcome);
+  afterRun(view, catalogue, outcome);
 }
 
-// A form whose last update took longer than SLOW_MS (the skin-effect calculator's bar sizes run the
-// filament solver: tens of ms to a few hundred for one bar or a group on a tablet; any other update
-// takes a few ms, and SLOW_MS leaves room for a busy machine, so no other form waits) waits for a
-// pause in typing of SETTLE_MS before it solves again, and says so, so keystrokes never wait for the
-// solver. 50 ms is what browsers count as a long task (one that delays input). The note is painted
-// before the solve starts (the solve holds the page until it ends).
+// Typing never waits for a solve. Before an update runs, the core says whether it would run the live
+// filament solver (core.calculators.needs_live_solver: a bar size at a frequency; tens to hundreds of
+// ms on a tablet): such an update waits for a pause in typing of SETTLE_MS and says so. A form whose
+// last unpredicted update took longer than SLOW_MS is treated the same way (a fallback for anything
+// slow the core does not predict; 50 ms is what browsers count as a long task, one that delays input,
+// and every other update takes a few ms). The note is painted before the solve starts (the solve
+// holds the page until it ends). The page's first update does not wait for a pause.
 const SLOW_MS = 50;
 const SETTLE_MS = 400;
 
@@ -300,6 +303,15 @@ function setBusy(view, text) {
   if (text) view.form.dataset.solving = ''; else delete view.form.dataset.solving;
 }
 
+function wouldSolve(view, catalogue) {
+  if (needsLiveSolver === null) return false;
+  try {
+    return !!needsLiveSolver(view.form.dataset.calculator, inputsOf(view), catalogue);
+  } catch (problem) {
+    return false;  // the update itself reports what went wrong
+  }
+}
+
 function update(view, catalogue) {
   // the same inputs as the last update (e.g. the change event after typing): that update stands,
   // solved or still waiting for its pause
@@ -307,29 +319,81 @@ function update(view, catalogue) {
   if (key === view.solved) return;
   view.solved = key;
   clearTimeout(view.solveTimer);
-  if (!view.slow) {
-    run(view, catalogue);
-    setBusy(view, '');
+  const live = wouldSolve(view, catalogue);
+  if (!live && !view.slow) {
+    run(view, catalogue, false);
     return;
   }
-  setBusy(view, 'Solving when you pause typing …');
-  view.solveTimer = setTimeout(() => {
+  const solve = () => {
     setBusy(view, 'Solving …');
     requestAnimationFrame(() => {
-      view.solveTimer = setTimeout(() => { run(view, catalogue); setBusy(view, ''); }, 0);
+      view.solveTimer = setTimeout(() => run(view, catalogue, live), 0);
     });
-  }, SETTLE_MS);
+  };
+  if (!view.ran) { solve(); return; }
+  setBusy(view, 'Solving when you pause typing …');
+  view.solveTimer = setTimeout(solve, SETTLE_MS);
+}
+
+// Parts of the core a page loads only when a calculator first needs them (core.ac_part): the core
+// leaves those results out and names the part in outcome.pending; the page loads the part's script
+// (beside the page's calculator script), says so, and runs the update again. The service worker
+// stores the part with the rest of the site, so it also loads offline after one visit.
+const PART_SCRIPTS = {ac: 'calc-ac.classic.js'};
+const PART_LOADING = 'Loading the AC calculations (skin depth, AC resistance) …';
+const PART_MISSING = 'The AC calculations could not be loaded (no network, and the site is not stored on this '
+  + 'device yet): AC results are not shown.';
+const parts = {};  // name -> {state: 'loading' | 'ready' | 'failed', waiting: [callbacks]}
+let scriptBase = null;
+
+function loadPart(name, then) {
+  let part = parts[name];
+  if (!part || part.state === 'failed') {  // a part that failed is tried again on a later update
+    part = parts[name] = {state: 'loading', waiting: []};
+    const ended = (state) => {
+      part.state = state;
+      for (const waiting of part.waiting.splice(0)) waiting(state);
+    };
+    const script = document.createElement('script');
+    script.src = new URL(PART_SCRIPTS[name], scriptBase || document.baseURI).href;
+    script.onload = () => ended('ready');
+    script.onerror = () => ended('failed');
+    document.head.appendChild(script);
+  }
+  if (part.state === 'loading') part.waiting.push(then); else then(part.state);
+}
+
+function afterRun(view, catalogue, outcome) {
+  const name = outcome.pending;
+  if (!name) { setBusy(view, ''); return; }
+  // loaded, yet still pending: the part's script did not run here (never load it in a loop)
+  if (!own(PART_SCRIPTS, name) || (parts[name] && parts[name].state === 'ready')) { setBusy(view, PART_MISSING); return; }
+  setBusy(view, PART_LOADING);
+  if (view.awaiting === name) return;  // this form already waits for the part
+  view.awaiting = name;
+  loadPart(name, (state) => {
+    view.awaiting = null;
+    if (state !== 'ready') { setBusy(view, PART_MISSING); return; }
+    view.solved = null;
+    update(view, catalogue);
+  });
 }
 
 // Start every calculator form of the page. `calculateWith(name, inputs, catalogue)` is the core's
-// calculate (calc.js: all calculators) or one calculator alone (calc-resistance.js), and `makeDict`
-// the runtime's dict: the entry scripts pass both, so this file imports nothing.
+// calculate (calc.js: all calculators) or one calculator alone (calc-resistance.js), `makeDict`
+// the runtime's dict and `needsLiveSolverWith(name, inputs, catalogue)` the core's
+// calculators.needs_live_solver (or one calculator's): the entry scripts pass them, so this file
+// imports nothing.
 let calculate = null;
 let dict = null;
+let needsLiveSolver = null;
 
-export function start(calculateWith, makeDict) {
+export function start(calculateWith, makeDict, needsLiveSolverWith) {
   calculate = calculateWith;
   dict = makeDict;
+  needsLiveSolver = needsLiveSolverWith || null;
+  // the page's calculator script, while it runs: the parts it loads later sit beside it
+  if (document.currentScript && document.currentScript.src) scriptBase = document.currentScript.src;
   for (const form of document.querySelectorAll('form[data-calculator]')) {
     const catalogue = readCatalogue(form);
     fillFromQuery(form);

@@ -1,6 +1,7 @@
 // Conductor Atlas: the resistance calculator alone, for material pages, so they load only the part of
-// the core it uses (about 41 kB compressed instead of 58 kB for all calculators; see bench/).
-import {calculate as calculateResistance} from '../js/conductor_atlas.core.calc_resistance.js';
+// the core it uses; its AC part (calc-ac.js: skin depth, AC/DC ratio and the solvers under it) is
+// loaded when a frequency is first typed (calc-form.js; sizes in bench/).
+import {calculate as calculateResistance, needs_live_solver as resistanceNeedsLiveSolver} from '../js/conductor_atlas.core.calc_resistance.js';
 import {add_error, new_outcome} from '../js/conductor_atlas.core.outcome.js';
 import {dict} from '../js/org.transcrypt.__runtime__.js';
 import {start} from './calc-form.js';
@@ -10,4 +11,4 @@ start((name, inputs, catalogue) => {
   const outcome = new_outcome(name, inputs);
   add_error(outcome, 'calculator', 'this page carries only the resistance calculator');
   return outcome;
-}, dict);
+}, dict, (name, inputs, catalogue) => name === 'resistance' && resistanceNeedsLiveSolver(inputs, catalogue));

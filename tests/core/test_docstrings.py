@@ -36,7 +36,7 @@ EXAMPLES_REQUIRED = {
     "calc_common": ["material_resistivity", "warn_if_fusing", "recorded_mean_free_path",
                     "frequency_beyond_dc_conductivity"],
     "calc_short_circuit": ["iec_constants", "resistivities", "heat_integral_of", "final_temperature"],
-    "calc_resistance": ["ac_ratio"],
+    "calc_resistance_ac": ["ac_ratio"],
     "calc_skin_effect": ["half_thickness", "mean_free_path_check"],
     "calc_thin_film": ["bulk_mean_free_path"],
     "calc_temperature_rise": ["material_k"],

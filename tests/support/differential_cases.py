@@ -408,9 +408,69 @@ def filament_cases():
     return cases
 
 
+LIVE_SOLVER_EXTRA = [
+    # [calculator, inputs]: bars, groups and pairs either side of what the filament solver takes
+    ["resistance", {"material": "Cu", "length": "10 m", "size": "30 x 3 mm", "frequency": "50 Hz"}],
+    ["resistance", {"material": "Cu", "length": "10 m", "size": "30 x 3 mm", "frequency": ""}],
+    ["resistance", {"material": "Cu", "length": "-1 m", "size": "30 x 3 mm", "frequency": "50 Hz"}],
+    ["resistance", {"material": "Fe", "length": "10 m", "size": "30 x 3 mm", "frequency": "50 Hz"}],
+    ["resistance", {"material": "CCS-40", "length": "10 m", "size": "30 x 3 mm", "frequency": "50 Hz"}],
+    ["resistance", {"material": "Cu", "length": "10 m", "size": "30 x 3 mm", "frequency": "1e14 Hz"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "2 bars, gap 3 mm"}],
+    ["skin-effect", {"material": "Al", "frequency": "60 Hz", "size": "30 x 3 mm", "arrangement": "pair, 10 mm"}],
+    ["skin-effect", {"material": "Al", "frequency": "60 Hz", "size": "30 x 3 mm", "arrangement": "pair, 2 mm"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "3 bars"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "zig"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "d 20 mm", "arrangement": "pair, 30 mm"}],
+    ["skin-effect", {"material": "Fe", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
+    ["skin-effect", {"material": "CCS-40", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
+    ["skin-effect", {"material": "nonsense", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
+    ["skin-effect", {"material": "Cu", "frequency": "0 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
+    ["sizing", {"material": "Cu"}],
+]
+
+
+def live_solver_cases():
+    """calculators.needs_live_solver over every resistance and skin-effect input of the other cases
+    (through the registry or the calculator's own module) and LIVE_SOLVER_EXTRA; each case is
+    [calculator, inputs, catalogue] (tests/core/test_live_solver.py runs the updates themselves)."""
+    catalogue = shipped_catalogue()
+    found = []
+    for module, function, args in calculator_cases() + filament_cases():
+        if function != "calculate":
+            continue
+        if module == "conductor_atlas.core.calculators" and args[0] in ("resistance", "skin-effect"):
+            found.append([args[0], args[1], catalogue])
+        elif module in ("conductor_atlas.core.calc_resistance", "conductor_atlas.core.calc_skin_effect"):
+            found.append([module.rsplit("calc_", 1)[1].replace("_", "-"), args[0], catalogue])
+    for name, inputs in LIVE_SOLVER_EXTRA:
+        found.append([name, inputs, catalogue])
+    return found
+
+
+def ac_part_cases():
+    """The AC part's registry and the resistance calculator's AC results (core.ac_part,
+    core.calc_resistance_ac), and the predicate over the calculators' inputs."""
+    from conductor_atlas.core.geometry import parse_size
+    catalogue = shipped_catalogue()
+    cases = [("conductor_atlas.core.ac_part", "part_function", ["no-such-function"]),
+             ("conductor_atlas.core.ac_part", "mark_pending", [{"results": {}}])]
+    ra = "conductor_atlas.core.calc_resistance_ac"
+    for material in ("copper-annealed", "iron", "copper-clad-steel-40"):
+        m = catalogue["materials"][material]
+        for size in ("100 x 10 mm", "d 20 mm", "2.5 mm2"):
+            cases.append((ra, "live_solver_for", [m, 293.15, m["rho_ref"], 50.0, parse_size(size)]))
+    for size, f in (("d 20 mm", 50.0), ("d 2 mm", 1e5), ("10 AWG", 400.0)):
+        cases.append((ra, "ac_ratio", [{"results": {}, "warnings": [], "sources": []}, parse_size(size), 1.7241e-8, f,
+                                       1.0, None]))
+    for case in live_solver_cases():
+        cases.append(("conductor_atlas.core.calculators", "needs_live_solver", case))
+    return cases
+
+
 def all_cases():
     return (unit_cases() + geometry_cases() + numfmt_cases() + resistance_cases() + calculator_cases()
-            + search_cases() + model_cases() + physics_cases() + filament_cases())
+            + search_cases() + model_cases() + physics_cases() + filament_cases() + ac_part_cases())
 
 
 def model_cases():

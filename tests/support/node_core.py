@@ -36,6 +36,9 @@ function replacer(key, value) {
 
 RUNNER = r"""
 import {dict} from './org.transcrypt.__runtime__.js';
+// the AC part (core.ac_part), loaded as on a page that has loaded every part (CPython's calculators
+// import it themselves)
+import './conductor_atlas.core.calc_resistance_ac.js';
 const chunks = [];
 for await (const chunk of process.stdin) chunks.push(chunk);
 const calls = JSON.parse(Buffer.concat(chunks).toString('utf8'));

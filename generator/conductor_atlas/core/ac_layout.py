@@ -8,11 +8,17 @@ filament method takes the field as in free space). Each answer adds the result "
 (value: the filament count, 0 for a closed form; text: the method in words). Clad wire (a core and a
 cladding on record, core.clad_layers): the exact two-layer solution for round wire; bars refused.
 
+Part of the AC part of the core (core.ac_part): the pages load it only when a calculator needs it.
+``needs_live_solver`` says, before anything is solved, whether ``ac_ratio_for`` would run the
+filament solver (the one answer that takes longer than a keystroke: tens to hundreds of ms on a
+tablet), so a page can wait for a pause in typing first.
+
 Arrangement text (field "arrangement"): "" or "single"; "N bars, gap G" (N = 2..8 bars per
 phase side by side, wide faces facing, G the clear gap); "pair, S" or "go-and-return S" (a
 go-and-return pair at centre distance S: two bars with wide faces facing, or two round wires).
 """
 
+from conductor_atlas.core.ac_part import provide
 from conductor_atlas.core.clad_layers import clad_round_ratio
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import filament_solver as filaments
@@ -127,6 +133,46 @@ def _round_pair_ratio(outcome, radius, spacing, rho, f, mu_r):
     return solution["ratio"]
 
 
+def _finite_above(x, floor):
+    return x - x == 0 and x > floor
+
+
+def needs_live_solver(size, arrangement, rho, f, mu_r, clad):
+    """True when ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers) runs the filament
+    solver (clad: a clad wire, whose layers are never meshed); False when it answers from a closed
+    form or refuses the input. Reads no more than the arguments: cheap enough for every keystroke.
+
+    size: core.geometry.parse_size's record; arrangement: parse_arrangement's list; rho [ohm*m];
+    f [Hz]; mu_r [-]. Keep it in step with ac_ratio_for: tests/core/test_live_solver.py checks it
+    against the solver's calls over the differential cases.
+
+    Examples
+    --------
+    >>> from conductor_atlas.core.geometry import parse_size
+    >>> bar = parse_size("100 x 10 mm")
+    >>> needs_live_solver(bar, ["single"], 1.7241e-8, 50.0, 1.0, False)
+    True
+    >>> needs_live_solver(parse_size("d 20 mm"), ["single"], 1.7241e-8, 50.0, 1.0, False)
+    False
+    >>> needs_live_solver(bar, ["single"], 1.0e-7, 50.0, 200.0, False)  # magnetic: the shell approximation
+    False
+    >>> needs_live_solver(bar, ["pair", 0.005], 1.7241e-8, 50.0, 1.0, False)  # closer than the thickness: refused
+    False
+    """
+    if clad or size["shape"] != "bar" or mu_r > 1.5:
+        return False
+    if not (_finite_above(size["width"], 0.0) and _finite_above(size["thickness"], 0.0)
+            and _finite_above(rho, 0.0) and _finite_above(f, 0.0)):
+        return False
+    kind = arrangement[0]
+    if kind == "bars":
+        count = arrangement[1]
+        return count >= 1 and count <= 8 and _finite_above(arrangement[2], 0.0)
+    if kind == "pair":
+        return _finite_above(arrangement[1], size["thickness"])
+    return True
+
+
 def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
     """R_ac / R_dc of one conductor (single, pair) or of the group (bars per phase), with its method.
 
@@ -185,3 +231,7 @@ def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
         raise CoreError(problem.message, "arrangement")
     _note_solution(outcome, solution, "go-and-return pair, per conductor")
     return solution["ratio"]
+
+
+provide("ac-ratio", ac_ratio_for)
+provide("live-solver", needs_live_solver)

@@ -1,20 +1,20 @@
 """Calculator "resistance": a conductor run's resistance, voltage drop, I²R loss and AC resistance."""
 
-import math
-
-from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import resistance as dc
-from conductor_atlas.core import skin_effect as skin
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           new_outcome)
 from conductor_atlas.core.geometry import area_text
 from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_positive
-from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, material_at_temperature, recorded_mean_free_path, warn_if_anomalous,
-                                              warn_if_fusing)
+from conductor_atlas.core.calc_common import frequency_beyond_dc_conductivity, material_at_temperature, warn_if_fusing
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
-from conductor_atlas.core.clad_layers import clad_layers_at
-from conductor_atlas.core.ac_layout import ac_ratio_for, add_ratio_result
+from conductor_atlas.core.ac_part import mark_pending, part_function
+# The frequency results live in the AC part (core.ac_part), which registers them when imported. CPython
+# imports it here, so the terminal and the tables always have it; the transpiler skips the import, and
+# a material page loads the part (static/calc-ac.js) when a frequency is first typed.
+# __pragma__ ('skip')
+import conductor_atlas.core.calc_resistance_ac  # noqa: F401,E402  (registers "resistance-ac")
+# __pragma__ ('noskip')
 
 NAME = "resistance"
 TITLE = "Resistance of a conductor run"
@@ -54,29 +54,6 @@ CAUTION = ("A physics estimate, not an ampacity rating. Size real installations 
 
 
 # __pragma__ ('nokwargs')
-def ac_ratio(outcome, size, rho, f, mu_r, layers):
-    """R_ac/R_dc [-] of one isolated conductor of the size's shape at f [Hz] with resistivity rho
-    [ohm*m] and relative permeability mu_r [-], with its method in the outcome (core.ac_layout; layers:
-    core.clad_layers.clad_layers_at's list for a clad wire, else None).
-
-    Examples
-    --------
-    A solid round copper wire, d 20 mm at 50 Hz: the Kelvin ratio Re[(z/2) I0(z)/I1(z)],
-    z = (1 + j) a/δ, δ = 9.3458 mm, is 1.0267257 with scipy.special.iv; d 2 mm at 100 kHz 2.6616588:
-
-    >>> from conductor_atlas.core.outcome import new_outcome
-    >>> from conductor_atlas.core.geometry import parse_size
-    >>> outcome = new_outcome("example", {})
-    >>> round(ac_ratio(outcome, parse_size("d 20 mm"), 1.7241e-8, 50.0, 1.0, None), 7)
-    1.0267257
-    >>> round(ac_ratio(outcome, parse_size("d 2 mm"), 1.7241e-8, 1e5, 1.0, None), 7)
-    2.6616588
-    >>> outcome["results"]["ac_method"]["text"]
-    'exact Kelvin-function solution (isolated round wire)'
-    """
-    return ac_ratio_for(outcome, size, ["single"], rho, f, mu_r, layers)
-
-
 def mass_text(mass):
     if mass < 1.0:
         return format_si(mass * 1000.0, "g", 4)
@@ -134,29 +111,41 @@ def calculate(inputs, catalogue):
         add_result(outcome, "current_density", j, "A/m²", format_number(j / 1e6, 4) + " A/mm²")
         warn_if_fusing(outcome, current, area)
     if f is not None and f > 0 and not frequency_beyond_dc_conductivity(outcome, m, rho, f, "frequency"):
-        if m["mu_r"] > 1.5:
-            add_warning(outcome, "relative permeability of " + m["name"] + " is taken as " + format_number(m["mu_r"], 3)
-                        + "; in iron, steel and nickel it depends strongly on field strength and frequency")
-        layers = clad_layers_at(outcome, m, t)
-        try:
-            delta = skin.skin_depth(rho, f, m["mu_r"])
-            where = ""
-            if layers is not None:
-                delta = skin.skin_depth(layers[2], f, layers[3])
-                where = " in the " + layers[6] + " cladding"
-            ratio = ac_ratio(outcome, size, rho, f, m["mu_r"], layers)
-        except CoreError as problem:
-            add_error(outcome, "frequency", problem.message)  # the DC results stand
-            return outcome
-        add_result(outcome, "skin_depth", delta, "m", format_si(delta, "m", 4) + where)
-        if len(m["mu_source"]) > 0:
-            add_sources(outcome, [m["mu_source"]])
-        warn_if_anomalous(outcome, recorded_mean_free_path(m, rho, t)[0], delta)
-        add_ratio_result(outcome, ratio)
-        add_result(outcome, "resistance_ac", r * ratio, "Ω", format_si(r * ratio, "Ω", 4))
-        if current is not None:
-            p_ac = dc.power_loss(r * ratio, current)
-            add_result(outcome, "power_loss_ac", p_ac, "W", format_si(p_ac, "W", 4))
+        add_ac_results = part_function("resistance-ac")
+        if add_ac_results is None:
+            mark_pending(outcome)  # the page loads the AC part and runs this update again
+        elif not add_ac_results(outcome, m, t, rho, f, size, r, current):
+            return outcome  # the frequency's message is under its field; the DC results stand
     check_finite_results(outcome, "length", CAUSES)
     return outcome
+
+
+def needs_live_solver(inputs, catalogue):
+    """True when calculate(inputs, catalogue) would run the live filament solver (a bar size with a
+    frequency; core.ac_layout.needs_live_solver decides), so a page can wait for a pause in typing
+    before it runs. False while the AC part is not loaded (the update then solves nothing).
+    The fields are read in the order that leaves most keystrokes after one or two cheap checks.
+
+    Examples
+    --------
+    >>> catalogue = {"materials": {}, "aliases": {}}
+    >>> needs_live_solver({"material": "copper", "length": "1 m", "size": "100 x 10 mm", "frequency": ""}, catalogue)
+    False
+    """
+    live_solver_for = part_function("resistance-live-solver")
+    if live_solver_for is None:
+        return False
+    scratch = new_outcome(NAME, inputs)
+    f = read_quantity(scratch, inputs, "frequency", "frequency", False)
+    if f is None or not (f > 0):
+        return False
+    size = read_size(scratch, inputs, "size")
+    if size is None or size["shape"] != "bar":
+        return False
+    length_m = read_quantity(scratch, inputs, "length", "length", True)
+    require_positive(scratch, "length", length_m, "length")
+    opening = material_at_temperature(scratch, inputs, catalogue)
+    if opening is None or frequency_beyond_dc_conductivity(scratch, opening[0], opening[2], f, "frequency"):
+        return False
+    return live_solver_for(opening[0], opening[1], opening[2], f, size)
 # __pragma__ ('kwargs')

@@ -11,8 +11,9 @@ from conductor_atlas.core.geometry import area_text
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size
 from conductor_atlas.core.calc_common import (frequency_beyond_dc_conductivity, material_at_temperature,
                                               recorded_mean_free_path, warn_if_anomalous)
-from conductor_atlas.core.clad_layers import CLAD_BAR_MESSAGE, clad_layers_at
-from conductor_atlas.core.ac_layout import ARRANGEMENT_HINT, ac_ratio_for, add_ratio_result, parse_arrangement
+from conductor_atlas.core.clad_layers import CLAD_BAR_MESSAGE, clad_layers_at, is_clad
+from conductor_atlas.core.ac_layout import (ARRANGEMENT_HINT, ac_ratio_for, add_ratio_result, needs_live_solver as layout_needs_live_solver,
+                                          parse_arrangement)
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
 NAME = "skin-effect"
@@ -161,6 +162,38 @@ def calculate(inputs, catalogue):
     mean_free_path_check(outcome, m, opening[2], t, delta)
     check_finite_results(outcome, "frequency")
     return outcome
+
+
+def needs_live_solver(inputs, catalogue):
+    """True when calculate(inputs, catalogue) would run the live filament solver (a bar size;
+    core.ac_layout.needs_live_solver decides), so a page can wait for a pause in typing before it runs.
+    The fields are read in the order that leaves most keystrokes after one or two cheap checks.
+
+    Examples
+    --------
+    >>> catalogue = {"materials": {}, "aliases": {}}
+    >>> needs_live_solver({"material": "IACS", "frequency": "50 Hz", "size": "d 20 mm"}, catalogue)
+    False
+    """
+    if len(field_text(inputs, "size")) == 0:
+        return False
+    scratch = new_outcome(NAME, inputs)
+    size = read_size(scratch, inputs, "size")
+    if size is None or size["shape"] != "bar":
+        return False
+    f = read_quantity(scratch, inputs, "frequency", "frequency", True)
+    if f is None or not (f > 0):
+        return False
+    try:
+        arrangement = parse_arrangement(field_text(inputs, "arrangement"), "arrangement")
+    except CoreError:
+        return False
+    opening = material_at_temperature(scratch, inputs, catalogue)
+    if opening is None or is_clad(opening[0]):
+        return False
+    if frequency_beyond_dc_conductivity(scratch, opening[0], opening[2], f, "frequency"):
+        return False
+    return layout_needs_live_solver(size, arrangement, opening[2], f, opening[0]["mu_r"], False)
 
 
 def mean_free_path_check(outcome, m, rho, t, delta):

@@ -36,6 +36,11 @@ CALCULATORS = {}
 for _module in CALCULATOR_MODULES:
     CALCULATORS[_module.NAME] = _module
 
+# name -> needs_live_solver(inputs, catalogue) of the calculators that can run the filament solver
+LIVE_SOLVER_CHECKS = {}
+LIVE_SOLVER_CHECKS[calc_resistance.NAME] = calc_resistance.needs_live_solver
+LIVE_SOLVER_CHECKS[calc_skin_effect.NAME] = calc_skin_effect.needs_live_solver
+
 
 # __pragma__ ('nokwargs')
 def calculator_names():
@@ -60,4 +65,22 @@ def calculate(name, inputs, catalogue):
         add_material_range(outcome, module.calculate, inputs, catalogue)
     add_permeability_range(outcome, module.calculate, inputs, catalogue)
     return outcome
+
+
+def needs_live_solver(name, inputs, catalogue):
+    """True when calculate(name, inputs, catalogue) would run the live filament solver (tens to hundreds
+    of ms on a tablet), decided before solving (core.ac_layout.needs_live_solver, through the
+    calculator's own needs_live_solver): the page glue then runs that update after a pause in typing.
+    The runs over the material's recorded ρ range (core.ranges) are not looked at: a range end that
+    alone needs the solver is left to the glue's measured fallback.
+
+    Examples
+    --------
+    >>> catalogue = {"materials": {}, "aliases": {}}
+    >>> needs_live_solver("sizing", {}, catalogue), needs_live_solver("skin-effect", {"size": ""}, catalogue)
+    (False, False)
+    """
+    if name in LIVE_SOLVER_CHECKS:
+        return LIVE_SOLVER_CHECKS[name](inputs, catalogue)
+    return False
 # __pragma__ ('kwargs')

@@ -1,7 +1,8 @@
 """Entry module for the transpiler: every core module the browser needs is reached from here.
 
 conductor_atlas.transpile ships exactly the core modules imported below, directly or through other core
-modules (the calculators through the registry, core.calculators), and checks each was written.
+modules (the calculators through the registry, core.calculators), and checks each was written. The AC part
+(core.ac_part) is imported here explicitly: the resistance calculator does not import it in JS.
 """
 
 from conductor_atlas.core.calculators import calculate, CALCULATORS
@@ -22,4 +23,5 @@ from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.search import search, search_entries
 from conductor_atlas.core.search_format import INDEX_FORMAT
 from conductor_atlas.core.search_prepare import prepare_index
+from conductor_atlas.core.calc_resistance_ac import add_ac_results
 from conductor_atlas.core.filament_solver import bar_group_solution, bar_pair_solution, round_layers_solution
