@@ -115,3 +115,12 @@ def test_cautions_and_long_faults():
     assert any("longer than 5 s" in w for w in out["warnings"])
     assert any("c_p is held" in w for w in out["warnings"])
     assert "iec60949" in out["sources"] and "crc-heat-capacity-elements" in out["sources"]
+
+
+def test_a_conductor_grade_fuses_at_its_own_solidus():
+    """Standard annealed copper (C11000) stops at its solidus, 1065 °C (ASM Handbook Vol. 2, C11000 data
+    sheet, from memory): before its file had no melting point and the search ran on to 1590 °C ("the
+    search's upper bound")."""
+    out = run(size="10 mm2", current="200 kA", duration="1 s", final="")
+    assert "1065.0 °C (its melting point)" in out["errors"]["current"]
+    assert shipped_catalogue()["materials"]["copper-annealed"]["melting_point"] == pytest.approx(1065.0 + 273.15)
