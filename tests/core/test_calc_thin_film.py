@@ -117,3 +117,13 @@ def test_bad_input_names_the_field(catalogue, inputs, field, words):
     assert field in out["errors"], out["errors"]
     assert words in out["errors"][field]
     assert out["results"] == {}
+
+
+@pytest.mark.parametrize("thickness, cautioned", [("0.3 nm", True), ("4.9 nm", True), ("5 nm", False), ("20 nm", False)])
+def test_a_film_a_few_atomic_layers_thick_is_cautioned(catalogue, thickness, cautioned):
+    """Before: a 0.3 nm copper film read 56.3 µΩ·cm with no caution beyond the mean free path's scaling. Below
+    about 5 nm roughness, continuity and quantum confinement set ρ (common practice (no source); the methods
+    page says the same)."""
+    out = calculate_thin_film({"material": "Cu", "thickness": thickness}, catalogue)
+    assert out["errors"] == {}
+    assert any("few atomic layers" in w for w in out["warnings"]) == cautioned

@@ -49,6 +49,9 @@ ALPHA_CHECKED = [1e-2, 10.0]
 KAPPA_MIN = 1e-6  # below this d/l the graded panels no longer resolve the boundary layer
 THICKNESS_MIN = 1e-10  # [m] below this the thickness is refused
 ONE_LAYER = 2.0e-10  # [m] about one atomic layer: copper's (111) spacing a/√3 = 0.209 nm (a = 0.3615 nm, Kittel ch. 1)
+# [m] below a few nm the film's roughness, its continuity and quantum confinement, none of which the
+# models hold, set the resistivity: a caution from 5 nm down (common practice (no source))
+FEW_NM = 5.0e-9
 
 
 # __pragma__ ('nokwargs')
@@ -143,6 +146,10 @@ def calculate(inputs, catalogue):
         add_warning(outcome, "a film of " + format_si(d, "m", 3) + " is thinner than one atomic layer (about 0.2 nm: "
                     "the (111) layer spacing of copper is a/√3 = 0.209 nm with a = 0.3615 nm, Kittel, Introduction "
                     "to Solid State Physics, ch. 1): no continuous film and no film model holds")
+    elif d is not None and d >= ONE_LAYER and d < FEW_NM:
+        add_warning(outcome, "a film of " + format_si(d, "m", 3) + " is a few atomic layers thick: below about 5 nm its "
+                    "roughness, whether it is continuous at all and quantum confinement set the resistivity, and the "
+                    "film models hold none of them; read the result as an indication only and measure")
     p = read_fraction(outcome, inputs, "specularity", "specularity", "0")
     reflection = read_fraction(outcome, inputs, "reflection", "the reflection coefficient", "")
     grain = None
