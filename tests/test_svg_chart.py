@@ -326,12 +326,12 @@ def test_same_input_same_bytes():
     assert silver_chart()[0] == silver_chart()[0]
 
 
-def test_coordinates_have_at_most_two_decimals():
+def test_coordinates_have_at_most_one_decimal():
     svg = chart([Series("a", tuple(i / 7 for i in range(30)), tuple(math.sin(i) for i in range(30)))])
     for el in parse(svg).iter():
         for value in el.attrib.values():
             for num in re.findall(r"\d+\.\d+", value):
-                assert len(num.split(".")[1]) <= 2, value
+                assert len(num.split(".")[1]) <= 1, value
 
 
 def test_hundred_points_stay_small():

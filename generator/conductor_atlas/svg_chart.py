@@ -246,8 +246,9 @@ def _axis_title(label: str, unit: str, log: bool, prefix: bool) -> str:
 # ---------------------------------------------------------------------------- drawing
 
 def _n(v: float) -> str:
-    """A coordinate with at most two decimals, no trailing zeros, never "-0"."""
-    text = f"{v:.2f}".rstrip("0").rstrip(".")
+    """A coordinate with at most one decimal (a tenth of a CSS pixel at full size), no trailing zeros,
+    never "-0"."""
+    text = f"{v:.1f}".rstrip("0").rstrip(".")
     return "0" if text in ("-0", "") else text
 
 

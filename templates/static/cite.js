@@ -1,4 +1,4 @@
-// Conductor Atlas: the "cite" button beside a table's downloads and beside each row's "#" link
+// Conductor Atlas: the "cite" button beside a table's downloads and beside each row's "#" link (made here)
 // copies a plain-text citation: the value(s) with units and conditions, the material, the sources
 // with locators, the model, the data edition and the link. Plain script, no imports, so it runs
 // from a copied folder opened as files too; where the clipboard is refused, the text is shown,
@@ -95,6 +95,24 @@
     document.body.removeChild(area);
     return done;
   }
+
+  // Each table row's cite button is made here, after the row's "#" link (it works only with this
+  // script, so the pages do not carry 100-200 copies of it).
+  function addRowButtons() {
+    for (const cell of document.querySelectorAll('section[data-cite-material] td.row-tools')) {
+      if (cell.querySelector('button.cite')) continue;
+      const button = document.createElement('button');
+      button.type = 'button';
+      button.className = 'cite';
+      button.dataset.cite = 'row';
+      button.setAttribute('aria-label', 'Copy a citation of this row');
+      button.textContent = 'cite';
+      cell.append(' ', button);
+    }
+  }
+
+  if (document.readyState === 'loading') document.addEventListener('DOMContentLoaded', addRowButtons);
+  else addRowButtons();
 
   document.addEventListener('click', (event) => {
     const button = event.target.closest('button.cite');
