@@ -90,7 +90,8 @@ def test_a_stale_store_is_not_used(monkeypatch, capsys):
                                                   ("cartridge-brass", "40 x 10 mm", "400 Hz")])
 def test_table_equals_the_skin_effect_calculator(views, mid, size, frequency):
     """The page's table and the calculator with the same bar at 20 °C give the same ratio (same solver,
-    same budget, same ρ(20 °C))."""
+    same budget, same ρ(20 °C)): to the last digit where the calculator solves the bar, within 0.1 %
+    (the solver's settling tolerance, core.bar_ratio_lookup) where it reads the solver's tabulated grid."""
     table = bar_rows(views[mid])
     w, t = (int(x) for x in size.split(" mm")[0].split(" x "))
     row = next(r for r in table.rows if r.id == f"bar-{w}x{t}mm")
@@ -98,8 +99,13 @@ def test_table_equals_the_skin_effect_calculator(views, mid, size, frequency):
     out = calculate("skin-effect", {"material": mid, "frequency": frequency, "size": size, "arrangement": "single",
                                     "temperature": "20 °C"}, shipped_catalogue())
     assert out["errors"] == {}
-    assert row.values[column] == pytest.approx(out["results"]["ac_dc_ratio"]["value"], rel=1e-12)
-    assert str(int(row.values[column + 3])) in out["results"]["ac_method"]["text"]
+    method = out["results"]["ac_method"]
+    if "tabulated" in method["text"]:
+        assert method["value"] == 0.0
+        assert row.values[column] == pytest.approx(out["results"]["ac_dc_ratio"]["value"], rel=1e-3)
+    else:
+        assert row.values[column] == pytest.approx(out["results"]["ac_dc_ratio"]["value"], rel=1e-12)
+        assert str(int(row.values[column + 3])) in method["text"]
 
 
 def test_copper_100_x_10_at_50_hz(views):

@@ -45,7 +45,7 @@ EXAMPLES_REQUIRED = {
     "filament_inductance": None,
     "filament_mesh": None, "filament_matrix": None,
     "filament_solver": ["bar_group_solution", "bar_pair_solution", "round_layers_solution"],
-    "complex_linear": None,
+    "complex_linear": None, "bar_ratio_lookup": None,
 }
 
 # A unit in brackets: after a space, a parenthesis or the line start, no space inside. Data-shape

@@ -376,6 +376,17 @@ def filament_cases():
     cases.append((fs, "bar_pair_solution", [0.02, 0.003, 0.01, rho, 60.0]))
     cases.append((fs, "round_layers_solution", [[[9.49e-4, 2.8264e-8], [1e-3, rho]], 1e6]))
     cases.append((fs, "round_layers_solution", [[[5e-3, rho]], 50.0]))
+    # the tabulated single bar: inside the grid (power bars, a square bar, a thin strip, turned), outside
+    # it (too few or too many skin depths, too thin), an unsettled stencil, bad inputs
+    lookup = "conductor_atlas.core.bar_ratio_lookup"
+    for args in ([0.1, 0.01, rho, 50.0], [0.2, 0.01, 2.8264e-8, 60.0], [0.04, 0.005, rho, 400.0],
+                 [0.01, 0.01, rho, 2e3], [0.02, 0.0005, rho, 1e4], [0.01, 0.1, rho, 50.0], [0.002, 0.001, rho, 50.0],
+                 [0.5, 0.01, rho, 400.0], [0.1, 1e-5, rho, 50.0], [0.1, 0.01, rho, 400.0], [0.0, 0.01, rho, 50.0],
+                 [0.1, 0.01, rho, -50.0]):
+        cases.append((lookup, "tabulated_bar_ratio", args))
+    for size, f in (("100 x 10 mm", "50 Hz"), ("40 x 5 mm", "60 Hz"), ("100 x 10 mm", "400 Hz")):
+        cases.append(("conductor_atlas.core.calc_skin_effect", "calculate",
+                      [{"material": "Cu", "frequency": f, "size": size, "arrangement": "single"}, shipped_catalogue()]))
     rp = "conductor_atlas.core.round_pair"
     # a round go-and-return pair: 50 Hz to 1 MHz, far and near (D = 2.2 a), a wire of 1 mm at 1 GHz
     for args in ([0.01, 0.03, rho, 50.0], [0.01, 0.022, rho, 1e3], [0.01, 0.022, rho, 1e6], [5e-4, 2e-3, rho, 1e9],

@@ -2,11 +2,14 @@
 
 Round wire (or an area taken as round): the exact Kelvin-function solution (core.skin_effect).
 Non-magnetic bars, bar groups and go-and-return bar pairs: the filament solver
-(core.filament_solver). A go-and-return pair of non-magnetic round wires: the exact multipole
-solution (core.round_pair), with the proximity factor over the isolated wire. Magnetic bars: the shell approximation, flagged as a lower estimate (the
-filament method takes the field as in free space). Each answer adds the result "ac_method"
-(value: the filament count, 0 for a closed form; text: the method in words). Clad wire (a core and a
-cladding on record, core.clad_layers): the exact two-layer solution for round wire; bars refused.
+(core.filament_solver); a single bar inside its grid of w/delta and t/delta reads the solver's
+tabulated answers, interpolated (core.bar_ratio_lookup; 0.1 %), else it is solved. A go-and-return
+pair of non-magnetic round wires: the exact multipole solution (core.round_pair), with the
+proximity factor over the isolated wire. Magnetic bars: the shell approximation, flagged as a lower
+estimate (the filament method takes the field as in free space). Each answer adds the result
+"ac_method" (value: the filament count of a solve made for this answer, 0 for a closed form or the
+tabulated grid; text: the method in words). Clad wire (a core and a cladding on record,
+core.clad_layers): the exact two-layer solution for round wire; bars refused.
 
 Part of the AC part of the core (core.ac_part): the pages load it only when a calculator needs it.
 ``needs_live_solver`` says, before anything is solved, whether ``ac_ratio_for`` would run the
@@ -19,6 +22,7 @@ go-and-return pair at centre distance S: two bars with wide faces facing, or two
 """
 
 from conductor_atlas.core.ac_part import provide
+from conductor_atlas.core.bar_ratio_lookup import tabulated_bar_ratio
 from conductor_atlas.core.clad_layers import clad_round_ratio
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import filament_solver as filaments
@@ -31,6 +35,8 @@ from conductor_atlas.core.units import parse_quantity
 ARRANGEMENT_HINT = ("single; 3 bars, gap 10 mm (bars per phase, wide faces facing); "
                     "pair, 30 mm (go-and-return bars or round wires at a centre distance)")
 _DIGITS = "0123456789"
+TABULATED_METHOD = ("filament solver, tabulated over w/δ and t/δ and interpolated (isolated bar; within 0.1 % of "
+                    "a direct solve)")
 
 
 def _after(text, word):
@@ -208,6 +214,10 @@ def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
                              "current crowding at edges and corners: read it as a lower estimate")
         return skin.rectangular_bar_resistance_ratio(width, thickness, rho, f, mu_r)
     if kind == "single":
+        tabulated = tabulated_bar_ratio(width, thickness, rho, f)
+        if tabulated is not None:
+            add_result(outcome, "ac_method", 0.0, "", TABULATED_METHOD)
+            return tabulated[0]
         solution = filaments.bar_group_solution(width, thickness, 1, 0.0, rho, f)
         _note_solution(outcome, solution, "isolated bar")
         return solution["ratio"]
