@@ -56,19 +56,23 @@ def test_refused_nodes_are_never_settled():
 
 def test_grid_agrees_with_the_bar_tables_exact_solutions():
     """Every stored cell of the material pages' bar table (bar_ratios.json: exact solves of 12 sizes x 3
-    frequencies x 14 materials) that the grid answers: within 0.1 % (the solver's own settling tolerance,
-    which bounds how far two settled answers of it may lie apart). The cells the grid does not answer
-    (a node of the stencil not settled) are the ones the table marks ≈ or their neighbours."""
-    compared = 0
-    worst = 0.0
+    frequencies x 14 materials) that the grid answers. Where the solve settled: within 0.1 % (the
+    solver's own settling tolerance, which bounds how far two settled answers of it may lie apart;
+    measured 4.8e-5 at worst). Where it did not (10 mm bars at 400 Hz): within a quarter of the solve's
+    own estimated change (measured 0.09 of it, 1.3e-4 at most), and the grid's estimated change at least
+    the solve's, so the page's "≈" and warning never say less than a direct solve would."""
+    settled = unsettled = 0
     for key, solution in bar_table.stored_solutions().items():
         w, t, rho, f = (float(x) for x in key.split("|"))
         found = tabulated_bar_ratio(w, t, rho, f)
         if found is None:
             continue
-        compared += 1
-        worst = max(worst, abs(found[0] / solution[0] - 1.0))
-        assert found[0] == pytest.approx(solution[0], rel=1e-3), key
-        assert solution[4], key  # an answer from the grid only where the exact solve settled too
-    assert compared >= 300, compared  # most cells: all at 50 and 60 Hz, the narrower bars at 400 Hz
-    print(f"{compared} cells compared, worst {worst:.2e}")
+        if solution[4]:
+            settled += 1
+            assert found[0] == pytest.approx(solution[0], rel=1e-3), key
+        else:
+            unsettled += 1
+            assert abs(found[0] / solution[0] - 1.0) <= 0.25 * solution[3], key
+            assert found[1] >= solution[3], key
+    # every cell but those whose neighbouring nodes were solved at one level only
+    assert settled >= 400 and unsettled >= 60, (settled, unsettled)

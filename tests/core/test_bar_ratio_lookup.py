@@ -28,9 +28,10 @@ def delta_of(rho, f):
 def test_interpolation_matches_direct_solves_at_random_points():
     """Seeded random bars inside the grid (log-uniform w/δ from 1.2 to 100, t/δ from 1/13 to w/δ, random f
     and ρ between copper and brass): the tabulated ratio within 0.1 % of the filament solver's own answer
-    for the same bar, wherever both settled. 0.1 % is the solver's settling tolerance: two settled
-    answers of it (neighbouring nodes at other refinement levels) may differ by that much, and the
-    interpolation must not add more (measured: 2.3e-4 at worst, mostly 1e-5)."""
+    for the same bar. 0.1 % is the solver's settling tolerance: two settled answers of it (neighbouring
+    nodes at other refinement levels) may differ by that much, and the interpolation must not add more
+    (measured on 200 such points: 6.2e-5 at worst, median 2.4e-7). Where the direct solve did not
+    settle, the tabulated answer says so too (its change at least 0.1 %)."""
     rng = random.Random(2026)
     answered = 0
     for _ in range(24):
@@ -44,11 +45,11 @@ def test_interpolation_matches_direct_solves_at_random_points():
         if found is None:
             continue
         direct = bar_group_solution(w, t, 1, 0.0, rho, f)
-        if not direct["converged"]:
-            continue
         answered += 1
         assert found[0] == pytest.approx(direct["ratio"], rel=1e-3), (u, v, rho, f)
-    assert answered >= 12, answered  # most of them: the grid settles below t/δ of about 4
+        if not direct["converged"]:  # the page marks the tabulated answer ≈ as it marked the solve's
+            assert found[1] >= 1e-3, (u, v, rho, f)
+    assert answered >= 16, answered  # most of them (the rest: nodes solved at one level, many δ thick)
 
 
 @pytest.mark.parametrize("width, thickness, f, fem", [(0.1, 0.01, 50.0, 1.19818), (0.04, 0.005, 50.0, 1.01643),
@@ -98,14 +99,30 @@ def test_bad_inputs_get_no_answer(args):
     assert tabulated_bar_ratio(*args) is None
 
 
-def test_unsettled_region_goes_to_the_solver():
-    """100 x 10 mm copper at 400 Hz: the solver's answer there did not settle to 0.1 % (≈ 2.13, estimated
-    change 0.11 %), so neither did grid nodes near it: no tabulated answer, and the calculator shows the
-    solver's ≈ answer with its warning and filament count, as before."""
-    assert tabulated_bar_ratio(0.1, 0.01, RHO_CU, 400.0) is None
+def test_unsettled_answer_keeps_its_mark_and_warning():
+    """100 x 10 mm copper at 400 Hz: the solver's budget ends before its answer settles (≈ 2.13, estimated
+    change 0.11 %), and so did the grid's nodes around it. The grid's answer is the direct solve's to
+    1e-3 (measured 1.1e-4: interpolating the nodes' extrapolated answers), shown as "≈" with a warning
+    whose estimated change is at least the direct solve's own (here 0.15 % against 0.11 %)."""
+    found = tabulated_bar_ratio(0.1, 0.01, RHO_CU, 400.0)
+    direct = bar_group_solution(0.1, 0.01, 1, 0.0, RHO_CU, 400.0)
+    assert not direct["converged"]
+    assert found[0] == pytest.approx(direct["ratio"], rel=1e-3)
+    assert found[1] >= direct["change"]
     out = calculate_skin_effect({"material": "IACS", "frequency": "400 Hz", "size": "100 x 10 mm"},
+                                shipped_catalogue())
+    assert out["results"]["ac_method"]["text"] == TABULATED_METHOD
+    assert out["results"]["ac_dc_ratio"]["text"] == "≈ 2.13"
+    assert any("did not settle to 0.1 %" in w and "estimated change up to" in w for w in out["warnings"])
+
+
+def test_nodes_without_an_error_estimate_go_to_the_solver():
+    """10 x 10 mm copper at 100 kHz (48 skin depths square): nodes near it were solved at one level only
+    (the budget's filament count reached at once: no estimate of their error), so there is no tabulated
+    answer and the calculator solves the bar, saying how many filaments and that it could not refine."""
+    assert tabulated_bar_ratio(0.01, 0.01, RHO_CU, 1e5) is None
+    out = calculate_skin_effect({"material": "IACS", "frequency": "100 kHz", "size": "10 x 10 mm"},
                                 shipped_catalogue())
     method = out["results"]["ac_method"]
     assert method["text"] == "filament solver, " + str(int(method["value"])) + " filaments (isolated bar)"
-    assert out["results"]["ac_dc_ratio"]["text"].startswith("≈")
-    assert any("did not settle" in w for w in out["warnings"])
+    assert any("could not be refined" in w for w in out["warnings"])

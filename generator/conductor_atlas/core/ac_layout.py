@@ -3,7 +3,8 @@
 Round wire (or an area taken as round): the exact Kelvin-function solution (core.skin_effect).
 Non-magnetic bars, bar groups and go-and-return bar pairs: the filament solver
 (core.filament_solver); a single bar inside its grid of w/delta and t/delta reads the solver's
-tabulated answers, interpolated (core.bar_ratio_lookup; 0.1 %), else it is solved. A go-and-return
+tabulated answers, interpolated (core.bar_ratio_lookup; 0.1 %; an answer the solver could not
+settle keeps its "≈" and warning), else it is solved. A go-and-return
 pair of non-magnetic round wires: the exact multipole solution (core.round_pair), with the
 proximity factor over the isolated wire. Magnetic bars: the shell approximation, flagged as a lower
 estimate (the filament method takes the field as in free space). Each answer adds the result
@@ -217,6 +218,11 @@ def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
         tabulated = tabulated_bar_ratio(width, thickness, rho, f)
         if tabulated is not None:
             add_result(outcome, "ac_method", 0.0, "", TABULATED_METHOD)
+            if tabulated[1] >= filaments.TOLERANCE:
+                _unsettled_ratio(outcome, tabulated[0])
+                add_warning(outcome, "the tabulated filament solutions around this bar did not settle to 0.1 % within "
+                            "the page's budget (estimated change up to " + format_number(100.0 * tabulated[1], 2)
+                            + " %): the bar is many skin depths thick; read the AC/DC ratio to about that")
             return tabulated[0]
         solution = filaments.bar_group_solution(width, thickness, 1, 0.0, rho, f)
         _note_solution(outcome, solution, "isolated bar")
