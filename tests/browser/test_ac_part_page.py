@@ -1,7 +1,8 @@
 """In Chromium: a material page loads the AC part of the calculators (static/calc-ac.classic.js) only
 when a frequency is typed, says it is loading it meanwhile, then shows the Python core's AC results
 (to 1e-12); after one served visit the part also loads with the network cut (service worker). A bar
-size at a frequency is solved after a pause in typing, announced before it runs. Page weight is
+the solver's tabulated grid answers is answered at once; one it does not is solved after a pause in
+typing, announced before it runs. Page weight is
 measured in bench/ (`bench/run.py --only weight`), never here."""
 
 from __future__ import annotations
@@ -92,8 +93,13 @@ def test_the_ac_part_loads_when_a_frequency_is_typed(page, served_site):
     assert state["busy"] == "" and state["ratio"] is not None, state
     assert_core_values(pg)
 
-    # a bar at a frequency runs the filament solver: it waits for a pause in typing and says so
+    # a bar inside the solver's tabulated grid (core.bar_ratio_lookup): answered at once
     state = pg.evaluate(TYPE_AND_LOOK, [FORM, "size", "60 x 6 mm"])
+    assert not state["solving"] and state["busy"] == "" and state["ratio"] is not None, state
+    assert_core_values(pg)
+    # a bar under 1.2 skin depths wide is outside it and runs the filament solver: it waits for a
+    # pause in typing and says so
+    state = pg.evaluate(TYPE_AND_LOOK, [FORM, "size", "3 x 1 mm"])
     assert state["solving"] and "Solving when you pause typing" in state["busy"], state
     assert_core_values(pg)
     assert len(requested) == 1

@@ -437,6 +437,13 @@ LIVE_SOLVER_EXTRA = [
     ["skin-effect", {"material": "CCS-40", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
     ["skin-effect", {"material": "nonsense", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
     ["skin-effect", {"material": "Cu", "frequency": "0 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
+    # single bars outside the tabulated grid (core.bar_ratio_lookup): 48 δ square, under 1.2 δ wide
+    ["skin-effect", {"material": "Cu", "frequency": "100 kHz", "size": "10 x 10 mm", "arrangement": "single"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "2 x 1 mm", "arrangement": "single"}],
+    ["resistance", {"material": "Cu", "length": "10 m", "size": "10 x 10 mm", "frequency": "100 kHz"}],
+    ["resistance", {"material": "Cu", "length": "10 m", "size": "2 x 1 mm", "frequency": "50 Hz"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "20 x 0.1 mm", "arrangement": "single"}],
+    ["skin-effect", {"material": "Al", "frequency": "50 Hz", "size": "100 x 10 mm", "arrangement": "2 bars, gap 10 mm"}],
     ["sizing", {"material": "Cu"}],
 ]
 

@@ -4,13 +4,13 @@ Round wire (or an area taken as round): the exact Kelvin-function solution (core
 Non-magnetic bars, bar groups and go-and-return bar pairs: the filament solver
 (core.filament_solver); a single bar inside its grid of w/delta and t/delta reads the solver's
 tabulated answers, interpolated (core.bar_ratio_lookup; 0.1 %; an answer the solver could not
-settle keeps its "≈" and warning), else it is solved. A go-and-return
-pair of non-magnetic round wires: the exact multipole solution (core.round_pair), with the
-proximity factor over the isolated wire. Magnetic bars: the shell approximation, flagged as a lower
-estimate (the filament method takes the field as in free space). Each answer adds the result
-"ac_method" (value: the filament count of a solve made for this answer, 0 for a closed form or the
-tabulated grid; text: the method in words). Clad wire (a core and a cladding on record,
-core.clad_layers): the exact two-layer solution for round wire; bars refused.
+settle keeps its "≈" and warning), else it is solved. A go-and-return pair of non-magnetic round
+wires: the exact multipole solution (core.round_pair), with the proximity factor over the isolated
+wire. Magnetic bars: the shell approximation, flagged as a lower estimate (the filament method
+takes the field as in free space). Each answer adds the result "ac_method" (value: the filament
+count of a solve made for this answer, 0 for a closed form or the tabulated grid; text: the method
+in words). Clad wire (a core and a cladding on record, core.clad_layers): the exact two-layer
+solution for round wire; bars refused.
 
 Part of the AC part of the core (core.ac_part): the pages load it only when a calculator needs it.
 ``needs_live_solver`` says, before anything is solved, whether ``ac_ratio_for`` would run the
@@ -157,7 +157,11 @@ def needs_live_solver(size, arrangement, rho, f, mu_r, clad):
     --------
     >>> from conductor_atlas.core.geometry import parse_size
     >>> bar = parse_size("100 x 10 mm")
-    >>> needs_live_solver(bar, ["single"], 1.7241e-8, 50.0, 1.0, False)
+    >>> needs_live_solver(bar, ["single"], 1.7241e-8, 50.0, 1.0, False)  # read from the tabulated grid
+    False
+    >>> needs_live_solver(parse_size("10 x 10 mm"), ["single"], 1.7241e-8, 1e5, 1.0, False)  # 48 δ square
+    True
+    >>> needs_live_solver(bar, ["bars", 2, 0.01], 1.7241e-8, 50.0, 1.0, False)
     True
     >>> needs_live_solver(parse_size("d 20 mm"), ["single"], 1.7241e-8, 50.0, 1.0, False)
     False
@@ -177,7 +181,7 @@ def needs_live_solver(size, arrangement, rho, f, mu_r, clad):
         return count >= 1 and count <= 8 and _finite_above(arrangement[2], 0.0)
     if kind == "pair":
         return _finite_above(arrangement[1], size["thickness"])
-    return True
+    return tabulated_bar_ratio(size["width"], size["thickness"], rho, f) is None
 
 
 def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):

@@ -95,8 +95,10 @@ def live_solver_for(m, t, rho, f, size):
     --------
     >>> from conductor_atlas.core.geometry import parse_size
     >>> copper = {"name": "copper", "mu_r": 1.0, "layer_share": 0.0}
-    >>> live_solver_for(copper, 293.15, 1.7241e-8, 50.0, parse_size("100 x 10 mm"))
+    >>> live_solver_for(copper, 293.15, 1.7241e-8, 1e5, parse_size("10 x 10 mm"))  # 48 δ square: solved
     True
+    >>> live_solver_for(copper, 293.15, 1.7241e-8, 50.0, parse_size("100 x 10 mm"))  # the tabulated grid
+    False
     >>> live_solver_for(copper, 293.15, 1.7241e-8, 50.0, parse_size("d 20 mm"))
     False
     """
