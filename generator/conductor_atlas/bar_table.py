@@ -1,8 +1,10 @@
 """The material pages' table of AC/DC ratios of single flat bars, solved by the core's filament solver.
 
 Every cell is ``core.filament_solver.bar_group_solution(w, t, 1, 0, ρ(20 °C), f)``: the same call, the
-same budget and the same 0.1 % settling rule as the skin-effect calculator with that bar size, so the
-table and the calculator give the same number. A solve takes CPython 0.05 s to 11 s (a wide 10 mm bar
+same budget and the same 0.1 % settling rule as the skin-effect calculator with that bar size. The
+calculator reads most single bars from that solver's answers tabulated over w/δ and t/δ (bar_grid.py,
+core.bar_ratio_lookup), so the table and the calculator agree within 0.1 % (measured 1.3e-4 at most
+over the shipped cells: tests/test_bar_grid.py), and to the last digit where the calculator solves. A solve takes CPython 0.05 s to 11 s (a wide 10 mm bar
 at 400 Hz: bench/filament_speed.py), about 35 s for one material's 36 cells, so:
 
 - the table is made only for the classes bars are made of (``BAR_CLASSES``), non-magnetic (μr = 1: the
