@@ -523,6 +523,7 @@ def model_cases():
     # a keyed record's keys in the order stored (result and field names, not sorted)
     for record in ({}, {"resistance": 1.0, "area": 2.0, "mass": 3.0, "skin_depth": 4.0}, {"z": 0, "a": 1}):
         cases.append(("conductor_atlas.core.outcome", "keys_of", [record]))
+        cases.append(("conductor_atlas.core.outcome", "has_keys", [record]))
     for how in ("rho-lambda", "record"):
         cases.append(("conductor_atlas.core.calc_common", "mean_free_path_origin", [{"mean_free_path_how": how}]))
     cases.append(("conductor_atlas.core.calc_inputs", "read_temperature",

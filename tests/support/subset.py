@@ -197,10 +197,10 @@ def nokwargs_lines(source: str) -> set[int]:
     return pragma_lines(source, "nokwargs", "kwargs")
 
 
-# The one loop allowed in a jsiter region: outcome.keys_of walks a keyed record (a dict in CPython,
-# a plain object in JS), where Python's ``for key in record`` and JS's for-in give the same keys in
-# the same order; a differential case checks it.
-KEY_WALKERS = {("core/outcome.py", "keys_of")}
+# The loops allowed in a jsiter region: outcome.keys_of and outcome.has_keys walk a keyed record (a
+# dict in CPython, a plain object in JS), where Python's ``for key in record`` and JS's for-in give
+# the same keys in the same order; differential cases check both.
+KEY_WALKERS = {("core/outcome.py", "keys_of"), ("core/outcome.py", "has_keys")}
 
 
 def key_walker_loops(tree: ast.AST, filename: str) -> set[int]:

@@ -196,22 +196,26 @@ def judge(outcome, inputs, catalogue, m, r_t, t, rho_t, sample, size, klass):
     found = standard_limit(outcome, catalogue, m, size, klass)
     if has_errors(outcome):
         return
+    # each number is formatted once, however many results quote it
+    per_m_text = per_km_text(per_m)
+    expected_per_km_text = per_km_text(expected)
     if found is not None:
         limit = found[0]
+        limit_text = per_km_text(limit)
         margin = cf.margin_to_limit(per_m, limit)
         verdict = "PASS"
         how = format_fixed(margin * 100.0, 2) + " % below"
         if margin < 0:
             verdict = "FAIL"
             how = format_fixed(-margin * 100.0, 2) + " % above"
-        add_result(outcome, "verdict", margin, "", verdict + ": " + per_km_text(per_m) + " is " + how + " the maximum "
-                   + per_km_text(limit) + " of " + found[1])
-        add_result(outcome, "limit_per_km", limit * 1000.0, "Ω/km", per_km_text(limit) + " (" + found[1] + ")")
+        add_result(outcome, "verdict", margin, "", verdict + ": " + per_m_text + " is " + how + " the maximum "
+                   + limit_text + " of " + found[1])
+        add_result(outcome, "limit_per_km", limit * 1000.0, "Ω/km", limit_text + " (" + found[1] + ")")
     add_result(outcome, "resistance_20", r_20, "Ω", format_si(r_20, "Ω", 4))
-    add_result(outcome, "resistance_per_km_20", per_m * 1000.0, "Ω/km", per_km_text(per_m))
-    expected_text = per_km_text(expected) + " for " + m["name"] + " at " + mm2_text(area)
+    add_result(outcome, "resistance_per_km_20", per_m * 1000.0, "Ω/km", per_m_text)
+    expected_text = expected_per_km_text + " for " + m["name"] + " at " + mm2_text(area)
     deviation = cf.relative_deviation(per_m, expected)
-    deviation_text = signed_percent(deviation) + " against " + per_km_text(expected)
+    deviation_text = signed_percent(deviation) + " against " + expected_per_km_text
     if has_range:
         low = expected * m["rho_low_ratio"]
         high = expected * m["rho_high_ratio"]

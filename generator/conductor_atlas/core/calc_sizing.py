@@ -7,7 +7,7 @@ from conductor_atlas.core import practice
 from conductor_atlas.core.geometry import awg_area, awg_name, next_awg, next_metric_size
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
-from conductor_atlas.core.outcome import (keys_of, add_error, add_result, add_warning, check_finite_results, has_errors,
+from conductor_atlas.core.outcome import (has_keys, add_error, add_result, add_warning, check_finite_results, has_errors,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_quantity, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature, warn_if_fusing
@@ -211,7 +211,7 @@ def calculate(inputs, catalogue):
                                                    "included)")
     add_warning(outcome, SAFETY)
     check_finite_results(outcome, "length")
-    if len(keys_of(outcome["results"])) == 0:
+    if not has_keys(outcome["results"]):
         outcome["warnings"] = []
     return outcome
 # __pragma__ ('kwargs')

@@ -33,6 +33,13 @@ def keys_of(record):
     return found
 
 
+def has_keys(record):
+    """True when a keyed record holds anything (stops at the first key; builds no list)."""
+    for key in record:
+        return True
+    return False
+
+
 def outcome_record(name, inputs):
     """The outcome's own record; "results" and "errors" are set by new_outcome."""
     return {"calculator": name, "material": "", "inputs": inputs, "results": None, "warnings": [],
@@ -93,7 +100,7 @@ def add_sources(outcome, keys):
 
 
 def has_errors(outcome):
-    return len(keys_of(outcome["errors"])) > 0
+    return has_keys(outcome["errors"])
 # __pragma__ ('kwargs')
 
 

@@ -13,7 +13,7 @@ record and the catalogue for each end: the copies cost about a fifth of a ranged
 """
 
 from conductor_atlas.core.numfmt import format_number
-from conductor_atlas.core.outcome import add_warning, keys_of
+from conductor_atlas.core.outcome import add_warning, has_keys, keys_of
 
 RELATIVE_EPSILON = 1e-12  # a result that moves less than this between the runs has no range
 
@@ -137,7 +137,7 @@ def mu_changes(m, mu):
 def usable(outcome):
     """True when the outcome has results to give ranges to (an error under an optional field that
     drops only its own results, SIDE_FIELDS, leaves the others standing and ranged)."""
-    return len(keys_of(outcome["results"])) > 0 and len(outcome["material"]) > 0
+    return len(outcome["material"]) > 0 and has_keys(outcome["results"])
 
 
 def new_problems(run, outcome):
