@@ -71,8 +71,11 @@ function writeQuery(form) {
     if (input.value.trim() !== '') params.set(input.name, input.value);
   }
   const query = params.toString();
-  const url = window.location.pathname + (query ? '?' + query : '') + window.location.hash;
-  window.history.replaceState(null, '', url);
+  const search = query ? '?' + query : '';
+  // the address already says this (the change event after a pause, or typing back to the same text):
+  // replaceState is a same-document navigation, a few ms on a tablet, so it is skipped
+  if (search === window.location.search) return;
+  window.history.replaceState(null, '', window.location.pathname + search + window.location.hash);
 }
 
 // The page parts one form writes, found once: a calculator update then only compares and writes.

@@ -46,6 +46,29 @@ def test_typed_inputs_match_python(page, served_site, catalogue, material_id, in
     assert page.errors == []
 
 
+def test_the_address_is_written_once_per_pause(page, served_site):
+    # replaceState is a same-document navigation (it held a throttled tablet page for several ms):
+    # leaving the field after the pause, or typing back to what the address says, writes nothing more
+    page.goto(f"{served_site}/materials/copper-annealed/index.html")
+    page.wait_for_selector("html.calc-ready")
+    page.evaluate("""() => { window.addressWrites = 0; const replace = history.replaceState.bind(history);
+                             history.replaceState = (...args) => { window.addressWrites += 1; replace(...args); }; }""")
+    page.fill("input[name=length]", "35 m")
+    page.wait_for_timeout(600)  # the address follows 250 ms after the last keystroke
+    assert "length=35+m" in page.url
+    assert page.evaluate("window.addressWrites") == 1
+    page.locator("input[name=length]").blur()  # the change event: the same address
+    page.fill("input[name=length]", "36 m")
+    page.fill("input[name=length]", "35 m")  # back to what the address says
+    page.wait_for_timeout(600)
+    page.locator("input[name=length]").blur()
+    assert page.evaluate("window.addressWrites") == 1
+    page.fill("input[name=length]", "40 m")
+    page.wait_for_timeout(600)
+    assert "length=40+m" in page.url and page.evaluate("window.addressWrites") == 2
+    assert page.errors == []
+
+
 def test_permalink_reopens_the_calculation(page, served_site, catalogue):
     inputs = {"length": "35 m", "size": "2.5 mm2", "temperature": "90 °C", "current": "16 A"}
     query = "&".join(f"{k}={quote(v)}" for k, v in inputs.items())
