@@ -1,15 +1,15 @@
 """core.calculators.needs_live_solver, the page's advance notice that an update would run the live
 filament solver (calc-form.js then waits for a pause in typing), against what the update does: over
 every resistance and skin-effect input of the differential cases, the predicate is true exactly when
-the update (core.calculators.calculate, with its ρ and μr range runs) calls the filament solver, and
-then the AC method shown is the filament solver's. Node agrees with CPython on the predicate through
+the update (core.calculators.calculate, with its ρ and μr range runs) calls the filament solver or
+the round pair's harmonic series, and then the AC method shown is one of theirs. Node agrees with CPython on the predicate through
 the differential cases (tests/support/differential_cases.py: ac_part_cases)."""
 
 from __future__ import annotations
 
 import pytest
 
-from conductor_atlas.core import ac_part, calc_resistance, calculators, filament_solver
+from conductor_atlas.core import ac_layout, ac_part, calc_resistance, calculators, filament_solver
 from tests.support.differential_cases import live_solver_cases
 
 
@@ -17,11 +17,20 @@ def test_predicate_is_true_exactly_when_the_update_solves(monkeypatch):
     solves = []
     refine = filament_solver._refine
 
-    def counted(*args):
+    def counted(*args):  # a solve that ran (a refused input raises before solving and is not counted)
+        found = refine(*args)
         solves.append(1)
-        return refine(*args)
+        return found
 
     monkeypatch.setattr(filament_solver, "_refine", counted)
+    pair = ac_layout.round_pair_solution
+
+    def counted_pair(*args):
+        found = pair(*args)
+        solves.append(1)
+        return found
+
+    monkeypatch.setattr(ac_layout, "round_pair_solution", counted_pair)
     cases = live_solver_cases()
     wrong = []
     live_count = 0
@@ -36,7 +45,7 @@ def test_predicate_is_true_exactly_when_the_update_solves(monkeypatch):
                           inputs.get("arrangement"), predicted, solved))
         method = outcome["results"].get("ac_method")
         if predicted and method is not None:
-            assert method["text"].startswith("filament solver"), (name, inputs, method)
+            assert method["text"].startswith(("filament solver", "exact multipole solution")), (name, inputs, method)
     assert wrong == [], f"{len(wrong)} of {len(cases)} updates not predicted: {wrong[:10]}"
     # the cases hold both answers in numbers (a predicate that is always False would fail above)
     assert live_count >= 10 and len(cases) - live_count >= 100, live_count

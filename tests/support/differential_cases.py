@@ -420,7 +420,7 @@ def filament_cases():
 
 
 LIVE_SOLVER_EXTRA = [
-    # [calculator, inputs]: bars, groups and pairs either side of what the filament solver takes
+    # [calculator, inputs]: bars, groups and pairs either side of what the live solvers take
     ["resistance", {"material": "Cu", "length": "10 m", "size": "30 x 3 mm", "frequency": "50 Hz"}],
     ["resistance", {"material": "Cu", "length": "10 m", "size": "30 x 3 mm", "frequency": ""}],
     ["resistance", {"material": "Cu", "length": "-1 m", "size": "30 x 3 mm", "frequency": "50 Hz"}],
@@ -433,6 +433,9 @@ LIVE_SOLVER_EXTRA = [
     ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "3 bars"}],
     ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "zig"}],
     ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "d 20 mm", "arrangement": "pair, 30 mm"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "d 20 mm", "arrangement": "pair, 15 mm"}],
+    ["skin-effect", {"material": "Fe", "frequency": "50 Hz", "size": "d 20 mm", "arrangement": "pair, 30 mm"}],
+    ["skin-effect", {"material": "Cu", "frequency": "50 Hz", "size": "70 mm2", "arrangement": "pair, 30 mm"}],
     ["skin-effect", {"material": "Fe", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
     ["skin-effect", {"material": "CCS-40", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],
     ["skin-effect", {"material": "nonsense", "frequency": "50 Hz", "size": "30 x 3 mm", "arrangement": "single"}],

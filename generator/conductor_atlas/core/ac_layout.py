@@ -13,9 +13,9 @@ in words). Clad wire (a core and a cladding on record, core.clad_layers): the ex
 solution for round wire; bars refused.
 
 Part of the AC part of the core (core.ac_part): the pages load it only when a calculator needs it.
-``needs_live_solver`` says, before anything is solved, whether ``ac_ratio_for`` would run the
-filament solver (the one answer that takes longer than a keystroke: tens to hundreds of ms on a
-tablet), so a page can wait for a pause in typing first.
+``needs_live_solver`` says, before anything is solved, whether ``ac_ratio_for`` would run a live
+solve (the filament solver, or the round pair's harmonic series: the answers that take longer than a
+keystroke, tens to hundreds of ms on a tablet), so a page can wait for a pause in typing first.
 
 Arrangement text (field "arrangement"): "" or "single"; "N bars, gap G" (N = 2..8 bars per
 phase side by side, wide faces facing, G the clear gap); "pair, S" or "go-and-return S" (a
@@ -145,13 +145,16 @@ def _finite_above(x, floor):
 
 
 def needs_live_solver(size, arrangement, rho, f, mu_r, clad):
-    """True when ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers) runs the filament
-    solver (clad: a clad wire, whose layers are never meshed); False when it answers from a closed
-    form or refuses the input. Reads no more than the arguments: cheap enough for every keystroke.
+    """True when ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers) runs a live solve: the
+    filament solver (bars, bar groups, go-and-return bar pairs) or the harmonic series of a
+    go-and-return pair of round wires (core.round_pair: a dense system of up to 128 harmonics), each
+    tens to hundreds of ms on a tablet; clad: a clad wire, whose layers are never meshed. False when
+    it answers from a closed form or refuses the input. Reads no more than the arguments: cheap
+    enough for every keystroke.
 
     size: core.geometry.parse_size's record; arrangement: parse_arrangement's list; rho [ohm*m];
     f [Hz]; mu_r [-]. Keep it in step with ac_ratio_for: tests/core/test_live_solver.py checks it
-    against the solver's calls over the differential cases.
+    against the solvers' calls over the differential cases.
 
     Examples
     --------
@@ -165,17 +168,21 @@ def needs_live_solver(size, arrangement, rho, f, mu_r, clad):
     True
     >>> needs_live_solver(parse_size("d 20 mm"), ["single"], 1.7241e-8, 50.0, 1.0, False)
     False
+    >>> needs_live_solver(parse_size("d 20 mm"), ["pair", 0.03], 1.7241e-8, 50.0, 1.0, False)
+    True
     >>> needs_live_solver(bar, ["single"], 1.0e-7, 50.0, 200.0, False)  # magnetic: the shell approximation
     False
     >>> needs_live_solver(bar, ["pair", 0.005], 1.7241e-8, 50.0, 1.0, False)  # closer than the thickness: refused
     False
     """
-    if clad or size["shape"] != "bar" or mu_r > 1.5:
-        return False
-    if not (_finite_above(size["width"], 0.0) and _finite_above(size["thickness"], 0.0)
-            and _finite_above(rho, 0.0) and _finite_above(f, 0.0)):
+    if clad or mu_r > 1.5 or not (_finite_above(rho, 0.0) and _finite_above(f, 0.0)):
         return False
     kind = arrangement[0]
+    if size["shape"] != "bar":
+        return kind == "pair" and _finite_above(size["diameter"], 0.0) and _finite_above(arrangement[1],
+                                                                                       size["diameter"])
+    if not (_finite_above(size["width"], 0.0) and _finite_above(size["thickness"], 0.0)):
+        return False
     if kind == "bars":
         count = arrangement[1]
         return count >= 1 and count <= 8 and _finite_above(arrangement[2], 0.0)

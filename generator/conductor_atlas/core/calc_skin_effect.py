@@ -165,8 +165,9 @@ def calculate(inputs, catalogue):
 
 
 def needs_live_solver(inputs, catalogue):
-    """True when calculate(inputs, catalogue) would run the live filament solver (a bar size;
-    core.ac_layout.needs_live_solver decides), so a page can wait for a pause in typing before it runs.
+    """True when calculate(inputs, catalogue) would run a live solve (a bar size, or a go-and-return
+    pair of round wires; core.ac_layout.needs_live_solver decides), so a page can wait for a pause in
+    typing before it runs.
     The fields are read in the order that leaves most keystrokes after one or two cheap checks.
 
     Examples
@@ -177,16 +178,16 @@ def needs_live_solver(inputs, catalogue):
     """
     if len(field_text(inputs, "size")) == 0:
         return False
-    scratch = new_outcome(NAME, inputs)
-    size = read_size(scratch, inputs, "size")
-    if size is None or size["shape"] != "bar":
-        return False
-    f = read_quantity(scratch, inputs, "frequency", "frequency", True)
-    if f is None or not (f > 0):
-        return False
     try:
         arrangement = parse_arrangement(field_text(inputs, "arrangement"), "arrangement")
     except CoreError:
+        return False
+    scratch = new_outcome(NAME, inputs)
+    size = read_size(scratch, inputs, "size")
+    if size is None or (size["shape"] != "bar" and arrangement[0] != "pair"):
+        return False  # one round wire: a closed form (core.ac_layout)
+    f = read_quantity(scratch, inputs, "frequency", "frequency", True)
+    if f is None or not (f > 0):
         return False
     opening = material_at_temperature(scratch, inputs, catalogue)
     if opening is None or is_clad(opening[0]):
