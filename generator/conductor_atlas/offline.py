@@ -34,7 +34,7 @@ from conductor_atlas.search_index_file import INDEX_SCRIPT_PATH
 APP_NAME = "Conductor Atlas"
 SHORT_NAME = "Atlas"
 ICON_SVG = "icons/atlas.svg"          # under static/
-ICON_SIZES = (192, 512)               # PNGs at static/icons/atlas-<size>.png, rendered from the SVG
+ICON_SIZES = (32, 192, 512)           # PNGs at static/icons/atlas-<size>.png, rendered from the SVG (32: the tab icon)
 THEME_COLOUR = "#9a4a1c"              # the icon's background, the site's accent
 BACKGROUND_COLOUR = "#fbfaf7"         # style.css --paper
 WORKER = "sw.js"
