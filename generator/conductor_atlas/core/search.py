@@ -192,7 +192,9 @@ def search(index, query, limit):
     if len(text) == 0:
         return outcome
     # a size typed with other words ("4/0 copper"): the rest is searched alone (core.search_size)
-    sized = size_split(text)
+    sized = None
+    if find_operator(text) is None:  # a size has no <, > or =; a filter query skips the size reading
+        sized = size_split(text)
     if sized is not None and len(sized[1]) > 0 and find_operator(sized[1]) is None:
         text = sized[1]
     query_words = []
