@@ -134,11 +134,25 @@ def build_section(tmp: Path, reps: int) -> dict:
         out["changed_scope"] = "no build cache: every page is rendered again"
     else:
         materials = [label for label in remade if not label.startswith(AGGREGATE_PREFIX)]
-        out["changed_scope_ok"] = all(label.endswith(f":{CHANGED_ID}") for label in materials) and len(remade) > 0
+        allowed = dependents_of(CHANGED_ID)
+        out["changed_scope_ok"] = all(label.split(":", 1)[-1] in allowed for label in materials) and len(remade) > 0
         out["changed_scope"] = (f"{len(materials)} material part(s) ({', '.join(materials) or 'none'}) + "
                                 f"{len(remade) - len(materials)} site-wide part(s) remade, "
                                 f"{changed[-1].get('reused', 0)} reused")
     return out
+
+
+def dependents_of(material_id: str) -> set[str]:
+    """``material_id`` and the shipped materials whose values are made from it: a temperature base
+    (Matthiessen's rule) or a clad wire's layers. Their pages change with it, so a rebuild remakes them."""
+    from conductor_atlas.build import data_folders
+    from conductor_atlas.load import load_dataset
+    found = {material_id}
+    for m in load_dataset(data_folders()).materials:
+        layers = [m.layers.core_id, m.layers.cladding_id] if m.layers is not None else []
+        if m.temperature_base_id == material_id or material_id in (*m.clad_layer_ids, *layers):
+            found.add(m.id)
+    return found
 
 
 # ---------------------------------------------------------------- whole process

@@ -50,3 +50,17 @@ def test_quick_benchmark_runs_and_reports_every_figure(tmp_path):
         calculators = [row for row in data["figures"] if row["figure"].startswith("calculator ")]
         assert len(calculators) == 1 and calculators[0]["value"] is not None, calculators
         assert data["browser"]["weight"]["first"]["requests"] >= 3
+
+
+def test_the_rebuild_scope_counts_the_materials_made_from_the_edited_one():
+    """Phosphor bronze and beryllium copper take ρ(T) from copper by Matthiessen's rule (temperature_base
+    in their files), and the clad wires from their layers: editing copper.toml rightly remakes them, and the
+    bench's "only what depends on it" check called that a MISS."""
+    sys.path.insert(0, str(PROJECT_ROOT / "bench"))
+    try:
+        import run as bench_run
+    finally:
+        sys.path.pop(0)
+    assert bench_run.dependents_of("copper") == {"copper", "phosphor-bronze", "beryllium-copper"}
+    assert {"copper-clad-steel-40", "copper-clad-aluminium-10"} <= bench_run.dependents_of("copper-annealed")
+    assert bench_run.dependents_of("silver") == {"silver"}
