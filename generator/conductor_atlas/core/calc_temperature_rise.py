@@ -167,11 +167,14 @@ def by_material_curve(outcome, m, t1, r1, r2, coolant, coolant_bad):
     standards give no k for, where its linear model (k = 1/α − t_ref) does not hold at both ends (as
     the resistivity calculator's "auto" would not use it); True when it answered, False to go on with
     k from α (a warning says why when the material has a curve that does not reach)."""
-    if m["alpha"] > 0 and choose_model(m, t1) == "linear":
+    k = None
+    linear = None
+    if m["alpha"] > 0:
+        k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
+        linear = practice.resistance_method_temperature(r1, t1, r2, k)
         # inside the temperature coefficient's span at both ends the k method is the material's own
         # linear model (what the resistivity calculator uses there too)
-        k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
-        if in_linear_span(m, practice.resistance_method_temperature(r1, t1, r2, k)):
+        if choose_model(m, t1) == "linear" and in_linear_span(m, linear):
             return False
     key = curved_model(m, t1)
     if len(key) == 0:
@@ -188,9 +191,7 @@ def by_material_curve(outcome, m, t1, r1, r2, coolant, coolant_bad):
     add_sources(outcome, m["rho_sources"])
     for note in resistivity_at(m, t2, key)["warnings"]:
         add_warning(outcome, note)  # the model's standing note (an estimate), if any
-    if m["alpha"] > 0:
-        k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
-        linear = practice.resistance_method_temperature(r1, t1, r2, k)
+    if linear is not None:
         if abs(linear - t2) >= 0.5:
             add_warning(outcome, "the linear method with k = " + format_number(k, 4) + " from α (the slope at "
                         + celsius_text(m["t_ref"]) + ") would give " + celsius_text(linear) + "; " + m["name"]

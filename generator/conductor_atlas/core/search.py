@@ -195,7 +195,7 @@ def search(index, query, limit):
     sized = None
     if find_operator(text) is None:  # a size has no <, > or =; a filter query skips the size reading
         sized = size_split(text)
-    if sized is not None and len(sized[1]) > 0 and find_operator(sized[1]) is None:
+    if sized is not None and len(sized[1]) > 0:
         text = sized[1]
     query_words = []
     filters = []
