@@ -190,3 +190,18 @@ def test_a_ratio_no_solid_winding_can_reach_is_refused(catalogue, material, r2):
               resistance_hot=r2)
     assert "melting point" in out["errors"]["resistance_hot"]
     assert out["results"] == {}
+
+
+@pytest.mark.parametrize("material, k, t1, limit", [
+    ("Ni", "", "1500 °C", "1454.9 °C"),  # nickel: 1728 K in data/materials/nickel.toml (CRC Handbook, from memory)
+    ("", "234.5", "4000 °C", "3422.0 °C"),  # no material: tungsten's 3422 °C, the highest of the metals (CRC, from memory)
+])
+def test_a_cold_temperature_above_melting_is_refused_under_that_field(catalogue, material, k, t1, limit):
+    """Before: nickel with t1 = 1500 °C was refused under R2 ("would put the winding at ... °C"), which
+    sent the user to the wrong field; the mistake is the cold temperature."""
+    out = run(catalogue, material=material, k=k, temperature_cold=t1, resistance_cold="1 ohm",
+              resistance_hot="1 ohm")
+    assert "melting point" in out["errors"]["temperature_cold"]
+    assert limit in out["errors"]["temperature_cold"]
+    assert "resistance_hot" not in out["errors"]
+    assert out["results"] == {}

@@ -162,6 +162,22 @@ def add_temperatures(outcome, t1, t2, r1, r2, coolant, coolant_bad):
     add_result(outcome, "resistance_ratio", r2 / r1, "", format_number(r2 / r1, 5))
 
 
+def melting_limit(m):
+    """[K] The highest temperature a solid winding of material ``m`` can have: its melting point
+    (solidus) on record, else tungsten's, the highest of the metals (``m`` None or without one)."""
+    if m is not None and m["melting_point"] > 0:
+        return m["melting_point"]
+    return HIGHEST_MELTING_POINT
+
+
+def melting_text(m):
+    """The melting point ``melting_limit`` uses, as the refusals name it: "Nickel (high purity),
+    1454.9 °C" or "any metal, tungsten's 3422 °C"."""
+    if m is not None and m["melting_point"] > 0:
+        return m["name"] + ", " + celsius_text(m["melting_point"])
+    return "any metal, tungsten's " + celsius_text(HIGHEST_MELTING_POINT)
+
+
 def by_material_curve(outcome, m, t1, r1, r2, coolant, coolant_bad):
     """The answer by the material's own curved ρ(T) (core.winding_temperature) for a material the
     standards give no k for, where its linear model (k = 1/α − t_ref) does not hold at both ends (as
@@ -226,6 +242,9 @@ def calculate(inputs, catalogue):
     t1 = read_quantity(outcome, inputs, "temperature_cold", "temperature", True)
     if t1 is not None and not (t1 > 0):
         add_error(outcome, "temperature_cold", "must be above absolute zero (−273.15 °C)")
+    elif t1 is not None and t1 > melting_limit(m):
+        add_error(outcome, "temperature_cold", "is above the melting point of " + melting_text(m)
+                  + ": a winding is solid metal; check the temperature and its unit")
     r2 = read_quantity(outcome, inputs, "resistance_hot", "resistance", True)
     require_positive(outcome, "resistance_hot", r2, "the hot resistance")
     # the coolant temperature feeds only the rise: a problem in it is shown under it (SIDE_FIELDS)
@@ -263,15 +282,10 @@ def calculate(inputs, catalogue):
         add_error(outcome, "resistance_hot", "R2/R1 = " + format_number(r2 / r1, 4) + " would put the winding below "
                   "absolute zero; check the two resistances and their units")
         return outcome
-    melting = HIGHEST_MELTING_POINT
-    what = "any metal (tungsten, "
-    if m is not None and m["melting_point"] > 0:
-        melting = m["melting_point"]
-        what = m["name"] + " ("
-    if t2 > melting:
+    if t2 > melting_limit(m):
         add_error(outcome, "resistance_hot", "R2/R1 = " + format_number(r2 / r1, 4) + " would put the winding at "
-                  + celsius_text(t2) + ", above the melting point of " + what + celsius_text(melting)
-                  + "): check the two resistances, their units and the material")
+                  + celsius_text(t2) + ", above the melting point of " + melting_text(m)
+                  + ": check the two resistances, their units and the material")
         return outcome
     outcome["model"] = "resistance method, t2 = (R2/R1)(k + t1) − k"
     add_temperatures(outcome, t1, t2, r1, r2, coolant, coolant_bad)
