@@ -45,6 +45,24 @@ def keep_units(text: str) -> str:
     return re.sub(r"(?<=\d) (?=\S)", "\u00a0", text)
 
 
+# Elements whose text is shown (or run) as typed, so their lines keep their leading white space
+AS_TYPED = re.compile(r"<(pre|textarea|script)\b.*?</\1>", re.S | re.I)
+INDENT = re.compile(r"\n[ \t]+")
+
+
+def drop_indentation(html: str) -> str:
+    """The page without the templates' indentation: the spaces at the start of each line are
+    white space a browser collapses and never shows (about 0.1 kB compressed on a material page),
+    except inside <pre>, <textarea> and <script>, which are left as they are."""
+    out, start = [], 0
+    for kept in AS_TYPED.finditer(html):
+        out.append(INDENT.sub("\n", html[start:kept.start()]))
+        out.append(kept.group(0))
+        start = kept.end()
+    out.append(INDENT.sub("\n", html[start:]))
+    return "".join(out)
+
+
 @dataclass
 class RenderedPages:
     """What a render call returns: every file's bytes by path, and each HTML page's title (as its
@@ -80,7 +98,7 @@ class Renderer:
         context.setdefault("fmt", format_number)
         html = self.env.get_template(template).render(root=root, site_name=SITE_NAME, page_path=path, title=title,
                                                       version=self.version, edition=EDITION_TOKEN, **context)
-        out.files[path] = html.encode("utf-8")
+        out.files[path] = drop_indentation(html).encode("utf-8")
         out.titles[path] = title
 
     def render_site(self, dataset: DataSet, views: list[MaterialView]) -> RenderedPages:

@@ -29,6 +29,14 @@
     return parts.join('; ');
   }
 
+  // "<model>. <validity>": the table's model paragraph ("Model: <model>. <validity>. Sources: …"), so
+  // the page carries that text once
+  function modelOf(section) {
+    const text = cellText(section.querySelector('p.model'));
+    const end = text.lastIndexOf(' Sources: ');
+    return text.slice('Model: '.length, end < 0 ? text.length : end).replace(/\.$/, '');
+  }
+
   function link(id) {
     const here = window.location.href.split('#')[0];
     return here + '#' + id;
@@ -47,7 +55,7 @@
       lines.push(what + ' (' + table.tBodies[0].rows.length + ' rows; columns: ' +
         heads.filter((h) => h.label).map((h) => h.label + (h.unit ? ' [' + h.unit + ']' : '')).join(', ') + ')');
     }
-    lines.push('Model: ' + section.dataset.citeModel);
+    lines.push('Model: ' + modelOf(section));
     lines.push('Sources: ' + section.dataset.citeSources);
     lines.push('Conductor Atlas, data edition ' + (edition ? edition.dataset.edition : 'unknown'));
     lines.push('Link: ' + link(row ? row.id : section.id));

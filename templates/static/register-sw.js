@@ -1,20 +1,50 @@
 // Conductor Atlas: keep the whole site on this device for reading offline (see sw.js), and say how
-// that goes. Runs in <head>: it marks <html> at once, so the notes for a copy opened from a file
-// (html.from-file) and for one served over plain http from another machine (html.not-secure: no
-// browser keeps such a copy) show without a flash, then registers the service worker after load.
+// that goes. Runs in <head>: it marks <html> at once (html.from-file: a copy opened from a file;
+// html.not-secure: one served over plain http from another machine, which no browser keeps) and
+// writes the note for that case (only this script ever shows them, so the pages do not carry their
+// text), then registers the service worker after load.
 // The worker's messages ({type: 'offline-progress' | 'offline-saved' | 'offline-failed'}) become
 // one line in #offline-status: "Saving for offline use: 120 of 748 files", then "Saved for offline
 // use, edition …".
 (function () {
   'use strict';
   var root = document.documentElement;
+  var FROM_FILE_NOTE = 'This copy is open from files: every page reads, but to keep the site on this device '
+    + 'for use without a network, serve the folder (run <code>conductor-atlas serve</code> in it, or any static '
+    + 'web server) and open it once over http.';
+  var NOT_SECURE_NOTE = '<strong>Not kept for offline use.</strong> This copy comes over plain http from '
+    + 'another machine, and browsers keep a site for use without a network only when it is served over https '
+    + '(or from this device itself). To keep it: serve it over https (<code>conductor-atlas serve --host '
+    + '0.0.0.0 --cert FILE --key FILE</code>, see the README), or copy the site folder onto this device and '
+    + 'open its <code>index.html</code>, which reads fully from files.';
+
+  // Put a note (fixed text above) first in the element ``where`` as soon as the parser has made that
+  // element: a MutationObserver runs before the browser paints again, so the note is there from the
+  // first paint that shows its place and nothing below it jumps.
+  function addNote(where, className, html) {
+    function place() {
+      var box = document.querySelector(where);
+      if (!box) return false;
+      var note = document.createElement('p');
+      note.className = className;
+      note.innerHTML = html;
+      box.insertBefore(note, box.firstChild);
+      return true;
+    }
+    if (place()) return;
+    var watch = new MutationObserver(function () { if (place()) watch.disconnect(); });
+    watch.observe(root, {childList: true, subtree: true});
+  }
+
   if (window.location.protocol === 'file:') {
     root.classList.add('from-file');
+    addNote('footer.colophon', 'from-file-note', FROM_FILE_NOTE);
     return;
   }
   if (!window.isSecureContext || !('serviceWorker' in navigator)) {
     // plain http from another machine (localhost counts as secure): no service worker at all
     root.classList.add('not-secure');
+    addNote('.site-status', 'not-secure-note', NOT_SECURE_NOTE);
     return;
   }
   if (!document.currentScript) return;

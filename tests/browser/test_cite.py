@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import json
 import re
 
 import pytest
@@ -56,3 +57,18 @@ def test_row_citation_from_a_copied_folder(browser, built_site):
     check_row_citation(text, edition_of(built_site), "file://")
     assert page.errors == []
     context.close()
+
+
+def test_the_model_line_is_the_tables_model_and_validity(page, served_site, built_site):
+    """cite.js reads the model from the table's model paragraph (the page carries it once): the line
+    equals the model and validity the table's JSON download gives, for every table of the page."""
+    page.goto(f"{served_site}/materials/aluminium/index.html", wait_until="load")
+    ids = page.eval_on_selector_all("section[data-cite-material]", "els => els.map(e => e.id)")
+    assert len(ids) >= 5
+    for table_id in ids:
+        page.click(f"#{table_id} button.cite[data-cite='table']")
+        text = page.eval_on_selector("#cite-output", "e => e.value")
+        data = json.loads((built_site / "materials" / "aluminium" / f"{table_id}.json").read_text(encoding="utf-8"))
+        expected = " ".join(f"Model: {data['model']}. {data['validity']}".split())
+        assert expected in text.splitlines(), (table_id, text)
+    assert page.errors == []
