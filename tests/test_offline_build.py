@@ -185,6 +185,20 @@ def test_worker_lists_every_file_and_only_those():
     assert MANIFEST in listed
 
 
+def test_the_worker_stores_the_scripts_a_material_page_loads_later(built_site):
+    """A material page fetches its calculator script only when the calculator is about to be used
+    (calc-loader.js), and the AC part after that: the shipped worker stores all three, so a stored
+    copy calculates offline however late they are asked for; the page's data-load names a real file."""
+    listed = json.loads((built_site / WORKER).read_text(encoding="utf-8").split("const FILES = ", 1)[1]
+                        .split(";\n", 1)[0])
+    for path in ("static/calc-loader.js", "static/calc-resistance.classic.js", "static/calc-ac.classic.js"):
+        assert path in listed and (built_site / path).is_file(), path
+    for page in sorted((built_site / "materials").glob("*/index.html")):
+        html = page.read_text(encoding="utf-8")
+        assert '<script defer src="../../static/calc-loader.js" data-load="calc-resistance.classic.js">' in html, page
+        assert html.count("calc-resistance.classic.js") == 1, page  # never also as a script of its own
+
+
 def test_cache_version_follows_content():
     base = add_offline_files(small_site())
     same = add_offline_files(small_site())

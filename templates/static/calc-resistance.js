@@ -1,6 +1,7 @@
 // Conductor Atlas: the resistance calculator alone, for material pages, so they load only the part of
 // the core it uses; its AC part (calc-ac.js: skin depth, AC/DC ratio and the solvers under it) is
-// loaded when a frequency is first typed (calc-form.js; sizes in bench/).
+// loaded when a frequency is first typed (calc-form.js; sizes in bench/). A material page itself adds
+// this script's twin only when its calculator is about to be used (calc-loader.js).
 import {calculate as calculateResistance, needs_live_solver as resistanceNeedsLiveSolver} from '../js/conductor_atlas.core.calc_resistance.js';
 import {add_error, new_outcome} from '../js/conductor_atlas.core.outcome.js';
 import {dict} from '../js/org.transcrypt.__runtime__.js';

@@ -30,3 +30,11 @@ def tablet_page(browser):
     context, pg = open_page(browser, 834, 1112)
     yield pg
     context.close()
+
+
+def start_calculator(pg, timeout: float = 30000) -> None:
+    """Scroll the page's calculator into view and wait until it has started. A material page loads its
+    calculator's script only when the calculator comes near the view (static/calc-loader.js), as a
+    reader scrolling to it does; a calculator page has it from the start."""
+    pg.locator("section.calculator").first.scroll_into_view_if_needed()
+    pg.wait_for_selector("html.calc-ready", state="attached", timeout=timeout)

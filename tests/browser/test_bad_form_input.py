@@ -14,6 +14,7 @@ from __future__ import annotations
 import pytest
 
 from conductor_atlas.core.calc_resistance import SIDE_FIELDS
+from tests.browser.conftest import start_calculator
 
 pytestmark = pytest.mark.browser
 
@@ -42,7 +43,7 @@ def visible_text_without(pg, typed):
 
 def test_bad_text_in_each_field_names_that_field(page, served_site):
     page.goto(f"{served_site}/materials/copper-annealed/index.html")
-    page.wait_for_selector("html.calc-ready")
+    start_calculator(page)
     fields = page.eval_on_selector_all(f"{FORM} input[type=text][name]",
                                        "els => els.map(e => [e.name, e.id, e.value])")
     assert len(fields) >= 4

@@ -7,6 +7,7 @@ from urllib.parse import quote
 import pytest
 
 from conductor_atlas.core.calculators import calculate
+from tests.browser.conftest import start_calculator
 
 pytestmark = pytest.mark.browser
 
@@ -26,7 +27,7 @@ CASES = [
 @pytest.mark.parametrize("material_id, inputs", CASES)
 def test_typed_inputs_match_python(page, served_site, catalogue, material_id, inputs):
     page.goto(f"{served_site}/materials/{material_id}/index.html")
-    page.wait_for_selector("html.calc-ready")
+    start_calculator(page)
     for name, text in inputs.items():
         page.fill(f"input[name={name}]", text)
     expected = calculate("resistance", {**inputs, "material": material_id}, catalogue)
@@ -50,7 +51,7 @@ def test_the_address_is_written_once_per_pause(page, served_site):
     # replaceState is a same-document navigation (it held a throttled tablet page for several ms):
     # leaving the field after the pause, or typing back to what the address says, writes nothing more
     page.goto(f"{served_site}/materials/copper-annealed/index.html")
-    page.wait_for_selector("html.calc-ready")
+    start_calculator(page)
     page.evaluate("""() => { window.addressWrites = 0; const replace = history.replaceState.bind(history);
                              history.replaceState = (...args) => { window.addressWrites += 1; replace(...args); }; }""")
     page.fill("input[name=length]", "35 m")
@@ -82,7 +83,7 @@ def test_permalink_reopens_the_calculation(page, served_site, catalogue):
 
 def test_bad_input_names_the_field(page, served_site):
     page.goto(f"{served_site}/materials/copper-annealed/index.html")
-    page.wait_for_selector("html.calc-ready")
+    start_calculator(page)
     page.fill("input[name=size]", "5 kg")
     page.locator("input[name=size]").blur()  # judged on leaving the field (or after a pause)
     assert "unknown unit" in page.text_content("#in-resistance-size-error")

@@ -67,6 +67,9 @@ def test_the_model_line_is_the_tables_model_and_validity(page, served_site, buil
     assert len(ids) >= 5
     for table_id in ids:
         page.click(f"#{table_id} button.cite[data-cite='table']")
+        # the citation is written once the clipboard has answered (asynchronous)
+        page.wait_for_function("(id) => { const out = document.getElementById('cite-output');"
+                               " return out && out.value.endsWith('#' + id); }", arg=table_id)
         text = page.eval_on_selector("#cite-output", "e => e.value")
         data = json.loads((built_site / "materials" / "aluminium" / f"{table_id}.json").read_text(encoding="utf-8"))
         expected = " ".join(f"Model: {data['model']}. {data['validity']}".split())

@@ -12,6 +12,7 @@ import pytest
 from conductor_atlas.offline import ICON_SIZES, WORKER, service_worker
 from conductor_atlas.publish import MARKER
 from conductor_atlas.serve import make_server
+from tests.browser.conftest import start_calculator
 from tests.support.icons import render
 
 pytestmark = pytest.mark.browser
@@ -185,7 +186,7 @@ def test_every_page_reads_from_file_urls(browser, built_site):
         assert page.locator(".from-file-note").is_visible(), f"{path}: no note about serving the site"
         assert page.locator("script[type=module]").count() == 0, f"{path}: a module script cannot run from file://"
         if page.locator("form[data-calculator]").count():
-            page.wait_for_selector("html.calc-ready", timeout=10_000)
+            start_calculator(page, timeout=10_000)
             assert not page.locator(".calculator .needs-server").first.is_visible()
             calculators += 1
     context.close()

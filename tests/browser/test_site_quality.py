@@ -21,6 +21,7 @@ from urllib.parse import unquote, urlsplit
 
 import pytest
 
+from tests.browser.conftest import start_calculator
 from tests.conftest import IN_CI
 
 pytestmark = pytest.mark.browser
@@ -282,7 +283,7 @@ def test_page_calculators_match_the_calc_command(browser, served_site, built_sit
         for path in chosen or paths[:1]:
             for case in CALC_CASES.get(name, [{}]):
                 page.goto(f"{served_site}/{path}")
-                page.wait_for_selector("html.calc-ready")
+                start_calculator(page)
                 form = page.locator(f"form[data-calculator={name}]").first
                 for field_name, text in case.items():
                     box = form.locator(f"[name={field_name}]")

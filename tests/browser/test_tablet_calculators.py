@@ -8,7 +8,7 @@ from __future__ import annotations
 
 import pytest
 
-from tests.browser.conftest import open_page
+from tests.browser.conftest import open_page, start_calculator
 
 pytestmark = pytest.mark.browser
 
@@ -48,7 +48,7 @@ def test_key_results_stay_in_view_with_the_focused_field(browser, served_site, b
     problems, checked = [], 0
     for path in calculator_paths(built_site):
         pg.goto(f"{served_site}/{path}")
-        pg.wait_for_selector("html.calc-ready")
+        start_calculator(pg)
         inputs = pg.locator("form[data-calculator] input[type=text]")
         for i in range(inputs.count()):
             box = inputs.nth(i)
@@ -78,7 +78,7 @@ def test_key_results_stay_in_view_with_the_focused_field(browser, served_site, b
 def test_key_results_show_values_on_the_default_inputs(tablet_page, served_site, built_site):
     for path in calculator_paths(built_site):
         tablet_page.goto(f"{served_site}/{path}")
-        tablet_page.wait_for_selector("html.calc-ready")
+        start_calculator(tablet_page)
         shown = tablet_page.eval_on_selector_all("[data-key-result]", "els => els.map(e => e.textContent)")
         assert shown and shown[0] != "—", f"{path}: the first key result is empty on the default inputs: {shown}"
 
