@@ -338,6 +338,24 @@ function update(view, catalogue) {
   view.solveTimer = setTimeout(solve, SETTLE_MS);
 }
 
+// The first run of a path through the core costs several times its later runs (the browser makes
+// the code ready on first use): at ×4 CPU throttling the first keystroke that made a bar answer on
+// the skin-effect page held the page 20-35 ms, against 5-15 ms for the next ones. So once the form
+// has its first answer, the core's warm-up inputs for the calculator (core.calculators.warm_up_inputs:
+// a bar size) go through the same calls a keystroke makes, and the outcome is dropped: nothing on
+// the page changes. A warm-up that would solve is skipped, and a problem in it is ignored (the
+// person's own updates report theirs).
+function warmUp(view, catalogue) {
+  if (warmUpInputs === null) return;
+  const name = view.form.dataset.calculator;
+  try {
+    const inputs = warmUpInputs(name, inputsOf(view));
+    if (inputs && !(needsLiveSolver && needsLiveSolver(name, inputs, catalogue))) calculate(name, inputs, catalogue);
+  } catch (problem) {
+    // nothing to show: the warm-up's outcome is never shown
+  }
+}
+
 // Parts of the core a page loads only when a calculator first needs them (core.ac_part): the core
 // leaves those results out and names the part in outcome.pending; the page loads the part's script
 // (beside the page's calculator script), says so, and runs the update again. The service worker
@@ -384,17 +402,19 @@ function afterRun(view, catalogue, outcome) {
 
 // Start every calculator form of the page. `calculateWith(name, inputs, catalogue)` is the core's
 // calculate (calc.js: all calculators) or one calculator alone (calc-resistance.js), `makeDict`
-// the runtime's dict and `needsLiveSolverWith(name, inputs, catalogue)` the core's
-// calculators.needs_live_solver (or one calculator's): the entry scripts pass them, so this file
-// imports nothing.
+// the runtime's dict, `needsLiveSolverWith(name, inputs, catalogue)` the core's
+// calculators.needs_live_solver (or one calculator's) and `warmUpInputsWith(name, inputs)` the
+// core's calculators.warm_up_inputs: the entry scripts pass them, so this file imports nothing.
 let calculate = null;
 let dict = null;
 let needsLiveSolver = null;
+let warmUpInputs = null;
 
-export function start(calculateWith, makeDict, needsLiveSolverWith) {
+export function start(calculateWith, makeDict, needsLiveSolverWith, warmUpInputsWith) {
   calculate = calculateWith;
   dict = makeDict;
   needsLiveSolver = needsLiveSolverWith || null;
+  warmUpInputs = warmUpInputsWith || null;
   // the page's calculator script, while it runs: the parts it loads later sit beside it
   if (document.currentScript && document.currentScript.src) scriptBase = document.currentScript.src;
   for (const form of document.querySelectorAll('form[data-calculator]')) {
@@ -423,6 +443,7 @@ export function start(calculateWith, makeDict, needsLiveSolverWith) {
     form.addEventListener('focusout', (event) => { const field = fieldOf(event.target); if (field) judge(field); });
     form.addEventListener('submit', (event) => event.preventDefault());
     update(view, catalogue);
+    warmUp(view, catalogue);
   }
   document.documentElement.classList.add('calc-ready');
 }

@@ -97,3 +97,24 @@ def test_bar_solves_wait_for_a_pause_and_say_so(tablet_page, served_site, catalo
     assert pg.get_attribute(form, "data-solving") is None
     assert_core_values(pg, catalogue)
     assert pg.errors == []
+
+
+def test_the_warm_up_changes_nothing_on_the_page(page, served_site, catalogue):
+    # calc-form.js runs the core's warm-up inputs (a bar size: core.calculators.warm_up_inputs) once
+    # when the form starts and drops the outcome: the page shows the answer for its own fields, the
+    # address stays as opened, and the next keystroke is answered for what the fields hold
+    pg = page
+    pg.goto(f"{served_site}/calculators/skin-effect/index.html")
+    pg.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
+    assert pg.evaluate("() => window.location.search") == ""
+    assert form_inputs(pg)["size"] == "240 mm2"
+    assert_core_values(pg, catalogue)
+    assert pg.get_attribute("[data-result=bar_share]", "data-value") is None
+    method = pg.text_content("[data-result=ac_method]")
+    assert "Kelvin" in method, method
+    pg.fill("form[data-calculator=skin-effect] [name=frequency]", "60 Hz")
+    assert_core_values(pg, catalogue)
+    assert "Kelvin" in pg.text_content("[data-result=ac_method]")
+    pg.wait_for_timeout(400)  # the address follows 250 ms after the last keystroke
+    assert "size=240+mm2" in pg.evaluate("() => window.location.search")
+    assert pg.errors == []

@@ -486,6 +486,14 @@ def ac_part_cases():
                                        1.0, None]))
     for case in live_solver_cases():
         cases.append(("conductor_atlas.core.calculators", "needs_live_solver", case))
+    # the inputs a page warms a calculator with (calc-form.js warmUp), and the update they make
+    for name in ("skin-effect", "resistance", "sizing"):
+        cases.append(("conductor_atlas.core.calculators", "warm_up_inputs", [name, {"material": "IACS", "size": "240 mm2"}]))
+    for name, inputs in (("skin-effect", {"material": "IACS", "frequency": "50 Hz", "size": "100 x 10 mm",
+                                          "arrangement": "single", "temperature": "20 °C", "model": "auto"}),
+                         ("resistance", {"material": "copper-annealed", "length": "100 m", "size": "100 x 10 mm",
+                                         "temperature": "20 °C", "current": "", "frequency": "50 Hz", "model": "auto"})):
+        cases.append(("conductor_atlas.core.calculators", "calculate", [name, inputs, catalogue]))
     return cases
 
 

@@ -41,6 +41,14 @@ LIVE_SOLVER_CHECKS = {}
 LIVE_SOLVER_CHECKS[calc_resistance.NAME] = calc_resistance.needs_live_solver
 LIVE_SOLVER_CHECKS[calc_skin_effect.NAME] = calc_skin_effect.needs_live_solver
 
+# name -> the fields a page sets for one throwaway update soon after it opens (warm_up_inputs): the
+# calculators whose defaults never take the path that a bar size takes (arrangement, bar size, the
+# tabulated grid), so that the first bar a person types does not also wait for that code to be made
+# ready (in a browser, a path's first run costs several times its later runs)
+WARM_UP_FIELDS = {}
+WARM_UP_FIELDS[calc_resistance.NAME] = {"size": "100 x 10 mm", "frequency": "50 Hz"}
+WARM_UP_FIELDS[calc_skin_effect.NAME] = {"size": "100 x 10 mm", "arrangement": "single"}
+
 
 # __pragma__ ('nokwargs')
 def calculator_names():
@@ -83,4 +91,27 @@ def needs_live_solver(name, inputs, catalogue):
     if name in LIVE_SOLVER_CHECKS:
         return LIVE_SOLVER_CHECKS[name](inputs, catalogue)
     return False
+
+
+def warm_up_inputs(name, inputs):
+    """A copy of ``inputs`` with calculator ``name``'s WARM_UP_FIELDS over them, or None when it has
+    none. A page runs them once, off the keystroke path (needs_live_solver, then calculate unless it
+    would solve), and drops the outcome.
+
+    Examples
+    --------
+    >>> warm_up_inputs("skin-effect", {"material": "IACS", "size": "240 mm2"})["size"]
+    '100 x 10 mm'
+    >>> warm_up_inputs("sizing", {"material": "IACS"}) is None
+    True
+    """
+    if not (name in WARM_UP_FIELDS):
+        return None
+    fields = WARM_UP_FIELDS[name]
+    out = {}
+    for key in inputs.keys():
+        out[key] = inputs[key]
+    for key in fields.keys():
+        out[key] = fields[key]
+    return out
 # __pragma__ ('kwargs')
