@@ -40,6 +40,7 @@ TABULATED_METHOD = ("filament solver, tabulated over w/δ and t/δ and interpola
                     "a direct solve)")
 
 
+# __pragma__ ('nokwargs')
 def _after(text, word):
     # the text after the first occurrence of word, without separators
     at = text.find(word)
@@ -258,6 +259,9 @@ def ac_ratio_for(outcome, size, arrangement, rho, f, mu_r, layers):
         raise CoreError(problem.message, "arrangement")
     _note_solution(outcome, solution, "go-and-return pair, per conductor")
     return solution["ratio"]
+
+
+# __pragma__ ('kwargs')
 
 
 provide("ac-ratio", ac_ratio_for)

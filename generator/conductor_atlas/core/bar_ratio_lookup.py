@@ -37,6 +37,7 @@ UNREFINED = 1.0  # the change of a node solved at one level only (or refused): n
 _LN2 = math.log(2.0)
 
 
+# __pragma__ ('nokwargs')
 def _node(a, b):
     # [ratio, change] of the node at u = a, v = b steps; the grid holds v <= u (swap: same bar turned)
     if b > a:
@@ -114,3 +115,4 @@ def tabulated_bar_ratio(width, thickness, rho, f):
             logs.append(math.log(node[0] - 1.0))
         along_v.append(_cubic(logs[0], logs[1], logs[2], logs[3], r))
     return [1.0 + math.exp(_cubic(along_v[0], along_v[1], along_v[2], along_v[3], s)), worst]
+# __pragma__ ('kwargs')

@@ -45,6 +45,7 @@ CAUTION = ("Equal resistance at equal length and temperature only: current ratin
            "practice.")
 
 
+# __pragma__ ('nokwargs')
 def calculate(inputs, catalogue):
     """Equal-resistance comparison of a reference material and another one.
 
@@ -162,3 +163,4 @@ def add_bar_width(outcome, size, area_ratio):
     add_warning(outcome, "the equal-resistance bar matches at DC only: at AC a bar's resistance rises by its own "
                          "AC/DC ratio, which differs between the two bars (their widths and resistivities differ); "
                          "the skin-effect calculator gives it for each bar at your frequency")
+# __pragma__ ('kwargs')
