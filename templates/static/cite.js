@@ -1,4 +1,4 @@
-// Conductor Atlas: the "cite" button beside a table's downloads and beside each row's "#" link (made here)
+// Conductor Atlas: the "cite" button beside a table's downloads and beside each row's "#" link (both made here)
 // copies a plain-text citation: the value(s) with units and conditions, the material, the sources
 // with locators, the model, the data edition and the link. Plain script, no imports, so it runs
 // from a copied folder opened as files too; where the clipboard is refused, the text is shown,
@@ -104,23 +104,42 @@
     return done;
   }
 
-  // Each table row's cite button is made here, after the row's "#" link (it works only with this
-  // script, so the pages do not carry 100-200 copies of it).
-  function addRowButtons() {
-    for (const cell of document.querySelectorAll('section[data-cite-material] td.row-tools')) {
-      if (cell.querySelector('button.cite')) continue;
-      const button = document.createElement('button');
-      button.type = 'button';
-      button.className = 'cite';
-      button.dataset.cite = 'row';
-      button.setAttribute('aria-label', 'Copy a citation of this row');
-      button.textContent = 'cite';
-      cell.append(' ', button);
+  // Each data table row's last cell, its "#" link to the row and its cite button, is made here, with
+  // the column's heading: the pages do not carry 100-200 copies of them (the bench's page weight);
+  // without scripts a row is still reached by its id (tables.js lands a row link's target).
+  function addRowTools() {
+    for (const table of document.querySelectorAll('section[data-cite-material] table.data')) {
+      const head = table.tHead && table.tHead.rows[0];
+      if (!head || head.querySelector('th.link-col')) continue;
+      const th = document.createElement('th');
+      th.scope = 'col';
+      th.className = 'link-col';
+      const hidden = document.createElement('span');
+      hidden.className = 'visually-hidden';
+      hidden.textContent = 'Link';
+      th.appendChild(hidden);
+      head.appendChild(th);
+      for (const row of table.tBodies[0].rows) {
+        const cell = row.insertCell();
+        cell.className = 'row-tools link-cell';
+        const link = document.createElement('a');
+        link.className = 'row-link';
+        link.href = '#' + row.id;
+        link.setAttribute('aria-label', 'Link to this row');
+        link.textContent = '#';
+        const button = document.createElement('button');
+        button.type = 'button';
+        button.className = 'cite';
+        button.dataset.cite = 'row';
+        button.setAttribute('aria-label', 'Copy a citation of this row');
+        button.textContent = 'cite';
+        cell.append(link, ' ', button);
+      }
     }
   }
 
-  if (document.readyState === 'loading') document.addEventListener('DOMContentLoaded', addRowButtons);
-  else addRowButtons();
+  if (document.readyState === 'loading') document.addEventListener('DOMContentLoaded', addRowTools);
+  else addRowTools();
 
   document.addEventListener('click', (event) => {
     const button = event.target.closest('button.cite');

@@ -75,3 +75,24 @@ def test_the_model_line_is_the_tables_model_and_validity(page, served_site, buil
         expected = " ".join(f"Model: {data['model']}. {data['validity']}".split())
         assert expected in text.splitlines(), (table_id, text)
     assert page.errors == []
+
+
+def test_every_row_gets_its_link_and_cite_cell(page, served_site):
+    """cite.js makes each data row's last cell ("#" link to the row, cite button) and its column's
+    heading, which the page does not carry: every row then has as many cells as the heading row, and
+    its link points at the row itself."""
+    page.goto(f"{served_site}/materials/aluminium/index.html", wait_until="load")
+    found = page.evaluate("""() => [...document.querySelectorAll('section[data-cite-material] table.data')].map((t) => {
+        const heads = t.tHead.rows[0].cells.length;
+        const bad = [...t.tBodies[0].rows].filter((r) => {
+          const last = r.cells[r.cells.length - 1];
+          const link = last.querySelector('a.row-link');
+          return r.cells.length !== heads || !link || link.getAttribute('href') !== '#' + r.id
+            || link.getAttribute('aria-label') !== 'Link to this row' || !last.querySelector('button.cite[data-cite=row]');
+        }).map((r) => r.id);
+        return [t.closest('section').id, t.tBodies[0].rows.length, t.tHead.rows[0].lastElementChild.className, bad];
+    })""")
+    assert len(found) >= 5
+    for table_id, rows, last_head, bad in found:
+        assert rows > 0 and last_head == "link-col" and bad == [], (table_id, bad[:5])
+    assert page.errors == []
