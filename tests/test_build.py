@@ -216,3 +216,17 @@ def test_leftover_clean_up_matches_only_its_own_folder(tmp_path):
     publish(SITE, tmp_path / "x[ab]")
     assert all((folder / "keep").is_file() for folder in others)
     assert not (tmp_path / ".x[ab].new-99999").exists() and not (tmp_path / ".x[ab].old-99999").exists()
+
+
+def test_every_source_a_page_cites_is_listed_on_it(built_site):
+    """Before: the "Sources used on this page" list held only the material record's sources, so a
+    table's own source (ASTM B258 for the AWG table on every page; IEC 60028 and others on some) was
+    linked beside the table but missing from the page's list a reader copies into a design note."""
+    import re
+    for page in sorted((built_site / "materials").glob("*/index.html")):
+        html = page.read_text(encoding="utf-8")
+        body, _, listed_part = html.partition('<section id="sources"')
+        assert listed_part, f"{page}: no sources section"
+        cited = set(re.findall(r'references/index\.html#src-([\w.-]+)"', body))
+        listed = set(re.findall(r'references/index\.html#src-([\w.-]+)"', listed_part))
+        assert cited <= listed, f"{page.parent.name}: cited but not listed: {sorted(cited - listed)}"

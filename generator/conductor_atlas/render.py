@@ -113,7 +113,9 @@ class Renderer:
         out = RenderedPages()
         m = view.material
         base = f"materials/{m.id}"
-        used = [dataset.sources[k] for k in m.source_keys()]
+        # the record's sources and those the derived tables cite (ASTM B258 for the AWG sizes, ...)
+        keys = set(m.source_keys()) | {k for table in view.tables for k in table.sources if k in dataset.sources}
+        used = [dataset.sources[k] for k in sorted(keys)]
         value_statuses = statuses(dataset, m, dataset.verification or EMPTY_RECORD)
         cite_sources = {}
         for table in view.tables:
