@@ -9,25 +9,35 @@
 (function () {
   'use strict';
   var root = document.documentElement;
-  var FROM_FILE_NOTE = 'This copy is open from files: every page reads, but to keep the site on this device '
-    + 'for use without a network, serve the folder (run <code>conductor-atlas serve</code> in it, or any static '
-    + 'web server) and open it once over http.';
-  var NOT_SECURE_NOTE = '<strong>Not kept for offline use.</strong> This copy comes over plain http from '
+  // Each note is a list of parts: plain text, or [tag, text] for a <code> or <strong> inside it
+  // (built with textContent: the page glue never writes markup from strings).
+  var FROM_FILE_NOTE = ['This copy is open from files: every page reads, but to keep the site on this device '
+    + 'for use without a network, serve the folder (run ', ['code', 'conductor-atlas serve'], ' in it, or any static '
+    + 'web server) and open it once over http.'];
+  var NOT_SECURE_NOTE = [['strong', 'Not kept for offline use.'], ' This copy comes over plain http from '
     + 'another machine, and browsers keep a site for use without a network only when it is served over https '
-    + '(or from this device itself). To keep it: serve it over https (<code>conductor-atlas serve --host '
-    + '0.0.0.0 --cert FILE --key FILE</code>, see the README), or copy the site folder onto this device and '
-    + 'open its <code>index.html</code>, which reads fully from files.';
+    + '(or from this device itself). To keep it: serve it over https (',
+    ['code', 'conductor-atlas serve --host 0.0.0.0 --cert FILE --key FILE'], ', see the README), or copy the '
+    + 'site folder onto this device and open its ', ['code', 'index.html'], ', which reads fully from files.'];
 
-  // Put a note (fixed text above) first in the element ``where`` as soon as the parser has made that
+  // Put a note (fixed parts above) first in the element ``where`` as soon as the parser has made that
   // element: a MutationObserver runs before the browser paints again, so the note is there from the
   // first paint that shows its place and nothing below it jumps.
-  function addNote(where, className, html) {
+  function addNote(where, className, parts) {
     function place() {
       var box = document.querySelector(where);
       if (!box) return false;
       var note = document.createElement('p');
       note.className = className;
-      note.innerHTML = html;
+      parts.forEach(function (part) {
+        if (typeof part === 'string') {
+          note.appendChild(document.createTextNode(part));
+        } else {
+          var inner = document.createElement(part[0]);
+          inner.textContent = part[1];
+          note.appendChild(inner);
+        }
+      });
       box.insertBefore(note, box.firstChild);
       return true;
     }
