@@ -36,8 +36,9 @@ def test_packed_index_counts_the_upper_triangle_row_by_row():
     assert [packed_index(i, j, n) for i, j in order] == list(range(n * (n + 1) // 2))
 
 
-# odd and even orders: the elimination takes its pivots two at a time (a last one alone when n is odd)
-@pytest.mark.parametrize("n, seed", [(1, 0), (2, 4), (7, 1), (8, 5), (60, 2), (150, 3)])
+# every remainder of n / 4: the elimination takes its pivots four at a time (the last block holds
+# n % 4 of them when that is not 0)
+@pytest.mark.parametrize("n, seed", [(1, 0), (2, 4), (5, 6), (6, 7), (7, 1), (8, 5), (60, 2), (150, 3)])
 def test_symmetric_solver_matches_lapack(n, seed):
     # tolerance 1e-12 relative to the largest component: LDL^T without pivoting on this class has a
     # growth factor below 3 (Higham 1998), measured error 1.5e-14 at n = 120
@@ -62,3 +63,11 @@ def test_symmetric_solver_refuses_a_zero_second_pivot():
     # [[1, 1], [1, 1]] is singular: the second pivot of the pair, 1 - 1 * 1 / 1, is zero
     with pytest.raises(CoreError):
         solve_complex_symmetric([1.0, 1.0, 1.0], [0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2)
+
+
+def test_symmetric_solver_refuses_a_pivot_zeroed_by_a_whole_block():
+    # the 5 x 5 identity with a_04 = a_40 = 1 is singular: once the first block of four pivots has
+    # updated row 4, its pivot is 1 - 1 * 1 / 1 = 0 (by hand)
+    ar = [1.0, 0.0, 0.0, 0.0, 1.0, 1.0, 0.0, 0.0, 0.0, 1.0, 0.0, 0.0, 1.0, 0.0, 1.0]
+    with pytest.raises(CoreError):
+        solve_complex_symmetric(ar, [0.0] * 15, [1.0] * 5, [0.0] * 5, 5)

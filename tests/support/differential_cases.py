@@ -340,7 +340,7 @@ def filament_cases():
     cases.append((cl, "solve_complex_symmetric", [[2.0, 0.5, 3.0], [1.0, -0.3, 2.0], [1.0, 2.0], [0.0, 1.0], 2]))
     cases.append((cl, "solve_complex_symmetric", [[0.0, 0.0, 0.0], [0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
     cases.append((cl, "solve_complex_symmetric", [[1.0, 1.0, 1.0], [0.0, 0.0, 0.0], [1.0, 2.0], [0.0, 1.0], 2]))
-    # n = 5: two pairs of pivots and a last one alone (a 1 / (1 + |i - j|) kernel, diagonal 2 + k / 2)
+    # n = 5: a block of four pivots and a last one alone (a 1 / (1 + |i - j|) kernel, diagonal 2 + k / 2)
     sym_r = []
     sym_i = []
     for i in range(5):
@@ -348,6 +348,15 @@ def filament_cases():
             sym_r.append(2.0 + 0.5 * i if i == j else 0.1 / (1 + j - i))
             sym_i.append(3.0 if i == j else 1.0 / (1 + j - i))
     cases.append((cl, "solve_complex_symmetric", [sym_r, sym_i, [1.0, 0.0, 2.0, 1.0, 1.0], [0.0, 1.0, 0.0, 0.5, 0.0], 5]))
+    # n = 10: two blocks of four (the second updated by the first) and a last block of two; same kernel
+    sym_r = []
+    sym_i = []
+    for i in range(10):
+        for j in range(i, 10):
+            sym_r.append(2.0 + 0.5 * i if i == j else 0.1 / (1 + j - i))
+            sym_i.append(3.0 if i == j else 1.0 / (1 + j - i))
+    rhs = [1.0, 0.0, 2.0, 1.0, 1.0, -1.0, 0.5, 0.0, 3.0, 1.0]
+    cases.append((cl, "solve_complex_symmetric", [sym_r, sym_i, rhs, [0.0, 1.0, 0.0, 0.5, 0.0, 0.0, 1.0, 2.0, 0.0, -0.5], 10]))
     for ij in ([0, 0, 5], [1, 3, 5], [4, 4, 5]):
         cases.append((cl, "packed_index", ij))
     cases.append((cl, "back_substitute", [[2.0, 1.0, 0.0, 1.0], [0.0, 0.5, 0.0, 1.0], [3.0, 1.0], [0.0, 1.0], [0, 2]]))

@@ -9,7 +9,7 @@ solver's estimated relative change of its last refinement step [-] (settled belo
 or not refined). SOLVER_DIGEST: bar_table.solver_digest() of the solver code that made them.
 """
 
-SOLVER_DIGEST = "058d990922f3b5490c873ad658b10caad809d4030b7756a3dc911a26a9c88b19"
+SOLVER_DIGEST = "9f15e972689ef6c0079c107f06563a292196aa72317485d3b8b39028205125d4"
 STEPS_PER_OCTAVE = 4
 FIRST_U = 0
 LAST_U = 28

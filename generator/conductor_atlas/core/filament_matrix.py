@@ -11,7 +11,7 @@ Pure Python in the Transcrypt subset; a mesh as core.filament_mesh.filament_mesh
 
 import math
 
-from conductor_atlas.core.complex_linear import packed_index, solve_complex_symmetric
+from conductor_atlas.core.complex_linear import solve_complex_symmetric
 from conductor_atlas.core.constants import MU_0
 from conductor_atlas.core.filament_inductance import FAR_FIELD_RATIO, corner_term
 from conductor_atlas.core.filament_mesh import mirror_images
@@ -65,32 +65,114 @@ def _lower_pair(p, q, n, mirrored):
     return p * n + q
 
 
-def _table_row(rows, template, key):
-    # the table row of an x key, made (a copy of the unset row) at its first use: the near pairs
-    # touch few x keys (122 of 650 for a 100 x 10 mm quarter at 400 Hz, level 3), and growing a
-    # table of them all (118,300 entries there) took a third of the assembly's time in node
-    row = rows[key]
-    if row is None:
-        row = template[:]
-        rows[key] = row
-    return row
+def _near_sum(table, kx, ky):
+    # sum_a sum_b s_a s_b G(u_a, v_b) of a near pair: the four x edge pairs at kx + x_steps[a], the
+    # four y edge pairs at ky + y_steps[b] (see _lower_pair), signs +, -, -, + in
+    # rectangle_log_gmd_exact's order (added in the order of the unrolled sum it replaced: the same
+    # bits). table: [G rows, unset row, x keys, x values, y keys, y values, x_steps, y_steps, signs,
+    # x edge count, y edge count] (_edge_differences' keys and values). G is kept in a row per x key,
+    # made (a copy of the unset row, 1e300) at its first use, an entry per y key, computed at its
+    # first use: the near pairs touch few x keys (122 of 650 for a 100 x 10 mm quarter at 400 Hz,
+    # level 3), and a table of them all (118,300 entries there) took a third of the assembly's time
+    # in node. One call per near pair: in node its 16 lookups cost less than four calls of four.
+    rows = table[0]
+    x_keys = table[2]
+    x_values = table[3]
+    y_keys = table[4]
+    y_values = table[5]
+    x_steps = table[6]
+    y_steps = table[7]
+    signs = table[8]
+    total = 0.0
+    for a in range(4):
+        kxa = kx + x_steps[a]
+        row = rows[x_keys[kxa]]
+        if row is None:
+            row = table[1][:]
+            rows[x_keys[kxa]] = row
+        part = 0.0
+        for b in range(4):
+            kyb = ky + y_steps[b]
+            g = row[y_keys[kyb]]
+            if g > 1e299:
+                g = corner_term(x_values[kxa], y_values[kyb])
+                row[y_keys[kyb]] = g
+            part += signs[b] * g
+        total += signs[a] * part
+    return total
 
 
-def _corner(row, at, u, v):
-    # G(u, v) from the table row, computed at its first use (1e300: not yet)
-    g = row[at]
-    if g > 1e299:
-        g = corner_term(u, v)
-        row[at] = g
-    return g
-
-
-def _corner_row(row, u, v_keys, v_values, k, ny):
-    # G(u, v1) - G(u, v2) - G(u, v3) + G(u, v4) over the four y edge pairs from index k
-    return (_corner(row, v_keys[k + ny], u, v_values[k + ny])
-            - _corner(row, v_keys[k], u, v_values[k])
-            - _corner(row, v_keys[k + ny + 1], u, v_values[k + ny + 1])
-            + _corner(row, v_keys[k + 1], u, v_values[k + 1]))
+def _row_logs(logs, i, cells, images, table):
+    # appends to logs, for j = i .. n - 1, the sum over the images of (image current sign) ln g of
+    # filaments i and j; cells: [x, y, w, h, w^2, h^2, largest side, x edge index, y edge index] of
+    # every filament (flat lists). Most pairs are far: the far branch is the inner loop, written with
+    # plain floats (no call, no list made per pair)
+    xs = cells[0]
+    ys = cells[1]
+    ws = cells[2]
+    hs = cells[3]
+    w2s = cells[4]
+    h2s = cells[5]
+    sides = cells[6]
+    xi = cells[7]
+    yi = cells[8]
+    n = len(xs)
+    count = len(images)
+    xa = xs[i]
+    ya = ys[i]
+    wa2 = w2s[i]
+    ha2 = h2s[i]
+    far2 = FAR_FIELD_RATIO * FAR_FIELD_RATIO
+    for j in range(i, n):
+        s = sides[i]
+        if sides[j] > s:
+            s = sides[j]
+        limit = far2 * s * s
+        near = 0.0
+        far = 0
+        # far images: the product of their D^2 (signed powers), and the sums of the signed
+        # derivative factors of far_field_correction, (dy^2 - dx^2) / D^4 and
+        # (dx^4 - 6 dx^2 dy^2 + dy^4) / D^8
+        product = 1.0
+        second = 0.0
+        fourth = 0.0
+        for k in range(count):
+            img = images[k]
+            sign = img[2]
+            dx = img[0] * xs[j] - xa
+            dy = img[1] * ys[j] - ya
+            dx2 = dx * dx
+            dy2 = dy * dy
+            d2 = dx2 + dy2
+            if d2 > limit:
+                far += 1
+                q = 1.0 / (d2 * d2)
+                if sign > 0.0:
+                    product *= d2
+                else:
+                    product /= d2
+                second += sign * (dy2 - dx2) * q
+                fourth += sign * (dx2 * dx2 - 6.0 * dx2 * dy2 + dy2 * dy2) * q * q
+            else:
+                # edge pairs in rectangle_log_gmd_exact's order (upper - lower, lower - lower,
+                # upper - upper, lower - upper; signs +, -, -, +)
+                kx = _lower_pair(xi[i], xi[j], table[9], img[0] < 0.0)
+                ky = _lower_pair(yi[i], yi[j], table[10], img[1] < 0.0)
+                near += sign * _near_sum(table, kx, ky)
+        m = 0.0
+        if far < count:
+            m = near / (ws[i] * hs[i] * ws[j] * hs[j])
+        if far > 0:
+            # far_field_correction's moments of the pair (the same for every image)
+            wb2 = w2s[j]
+            hb2 = h2s[j]
+            m2x = (wa2 + wb2) / 12.0
+            m2y = (ha2 + hb2) / 12.0
+            m4x = (wa2 * wa2 + wb2 * wb2) / 80.0 + wa2 * wb2 / 24.0
+            m4y = (ha2 * ha2 + hb2 * hb2) / 80.0 + ha2 * hb2 / 24.0
+            m += (0.5 * _log(product) + 0.5 * second * (m2x - m2y)
+                  - 0.25 * fourth * (m4x - 6.0 * m2x * m2y + m4y))
+        logs.append(m)
 
 
 def filament_log_gmds(mesh, sym_x, sym_y):
@@ -134,110 +216,53 @@ def filament_log_gmds(mesh, sym_x, sym_y):
     fils = mesh[0]
     n = len(fils)
     images = mirror_images(sym_x, sym_y)
-    count = len(images)
     nx = len(mesh[1])
     ny = len(mesh[2])
     xd = _edge_differences(mesh[1])
     yd = _edge_differences(mesh[2])
-    x_keys = xd[0]
-    x_values = xd[1]
-    y_keys = yd[0]
-    y_values = yd[1]
     # the table of G: a row per x key (made at its first use), an entry per y key
-    template = []
+    unset = []
     for k in range(ny * (ny + 1)):
-        template.append(1e300)
+        unset.append(1e300)
     rows = []
     for k in range(nx * (nx + 1)):
         rows.append(None)
+    table = [rows, unset, xd[0], xd[1], yd[0], yd[1], [nx, 0, nx + 1, 1], [ny, 0, ny + 1, 1],
+             [1.0, -1.0, -1.0, 1.0], nx, ny]
     # the filaments' numbers as flat lists: centre, sides, squared sides, largest side, edge indices
-    xs = []
-    ys = []
-    ws = []
-    hs = []
-    w2s = []
-    h2s = []
-    sides = []
-    xi = []
-    yi = []
+    cells = [[], [], [], [], [], [], [], [], []]
     for a in fils:
-        xs.append(a[0])
-        ys.append(a[1])
-        ws.append(a[2])
-        hs.append(a[3])
-        w2s.append(a[2] * a[2])
-        h2s.append(a[3] * a[3])
         side = a[2]
         if a[3] > side:
             side = a[3]
-        sides.append(side)
-        xi.append(a[6])
-        yi.append(a[7])
-    far2 = FAR_FIELD_RATIO * FAR_FIELD_RATIO
+        numbers = [a[0], a[1], a[2], a[3], a[2] * a[2], a[3] * a[3], side, a[6], a[7]]
+        for k in range(9):
+            cells[k].append(numbers[k])
     logs = []
     for i in range(n):
-        xa = xs[i]
-        ya = ys[i]
-        wa2 = w2s[i]
-        ha2 = h2s[i]
-        for j in range(i, n):
-            s = sides[i]
-            if sides[j] > s:
-                s = sides[j]
-            limit = far2 * s * s
-            near = 0.0
-            far = 0
-            # far images: the product of their D^2 (signed powers), and the sums of the signed
-            # derivative factors of far_field_correction, (dy^2 - dx^2) / D^4 and
-            # (dx^4 - 6 dx^2 dy^2 + dy^4) / D^8
-            product = 1.0
-            second = 0.0
-            fourth = 0.0
-            for k in range(count):
-                img = images[k]
-                sign = img[2]
-                dx = img[0] * xs[j] - xa
-                dy = img[1] * ys[j] - ya
-                dx2 = dx * dx
-                dy2 = dy * dy
-                d2 = dx2 + dy2
-                if d2 > limit:
-                    far += 1
-                    q = 1.0 / (d2 * d2)
-                    if sign > 0.0:
-                        product *= d2
-                    else:
-                        product /= d2
-                    second += sign * (dy2 - dx2) * q
-                    fourth += sign * (dx2 * dx2 - 6.0 * dx2 * dy2 + dy2 * dy2) * q * q
-                    continue
-                # edge pairs in rectangle_log_gmd_exact's order (upper - lower, lower - lower,
-                # upper - upper, lower - upper; signs +, -, -, +)
-                kx = _lower_pair(xi[i], xi[j], nx, img[0] < 0.0)
-                ky = _lower_pair(yi[i], yi[j], ny, img[1] < 0.0)
-                near += sign * (_corner_row(_table_row(rows, template, x_keys[kx + nx]), x_values[kx + nx],
-                                            y_keys, y_values, ky, ny)
-                                - _corner_row(_table_row(rows, template, x_keys[kx]), x_values[kx],
-                                              y_keys, y_values, ky, ny)
-                                - _corner_row(_table_row(rows, template, x_keys[kx + nx + 1]), x_values[kx + nx + 1],
-                                              y_keys, y_values, ky, ny)
-                                + _corner_row(_table_row(rows, template, x_keys[kx + 1]), x_values[kx + 1],
-                                              y_keys, y_values, ky, ny))
-            m = 0.0
-            if far < count:
-                m = near / (ws[i] * hs[i] * ws[j] * hs[j])
-            if far > 0:
-                # far_field_correction's moments of the pair (the same for every image)
-                wb2 = w2s[j]
-                hb2 = h2s[j]
-                m2x = (wa2 + wb2) / 12.0
-                m2y = (ha2 + hb2) / 12.0
-                m4x = (wa2 * wa2 + wb2 * wb2) / 80.0 + wa2 * wb2 / 24.0
-                m4y = (ha2 * ha2 + hb2 * hb2) / 80.0 + ha2 * hb2 / 24.0
-                m += (0.5 * _log(product) + 0.5 * second * (m2x - m2y)
-                      - 0.25 * fourth * (m4x - 6.0 * m2x * m2y + m4y))
-            logs.append(m)
+        _row_logs(logs, i, cells, images, table)
     return logs
+
+
+def _impedances(fils, logs, omega_l):
+    # [real, imaginary] parts of R + j w L, packed as logs: R_ii = rho / a_i on the diagonal, 0 off it;
+    # w L_ij = -omega_l logs_ij (omega_l = w mu_0 / (2 pi)), written over logs. A function of its own:
+    # the page runs it once per level, and a long loop in such a function ran in node's interpreter
+    # on every call
+    n = len(fils)
+    ar = logs[:]
+    at = 0
+    for i in range(n):
+        # row i of the packed triangle starts at its diagonal entry
+        a = fils[i]
+        ar[at] = a[5] / (a[2] * a[3])
+        logs[at] = -omega_l * logs[at]
+        at += 1
+        for j in range(i + 1, n):
+            ar[at] = 0.0
+            logs[at] = -omega_l * logs[at]
+            at += 1
+    return [ar, logs]
 
 
 def filament_currents(mesh, f, sym_x, sym_y):
@@ -269,22 +294,13 @@ def filament_currents(mesh, f, sym_x, sym_y):
     fils = mesh[0]
     n = len(fils)
     omega_l = 2.0 * _pi * f * MU_0 / (2.0 * _pi)  # w mu_0 / (2 pi)
-    ai = filament_log_gmds(mesh, sym_x, sym_y)
-    size = len(ai)
-    for k in range(size):
-        ai[k] = -omega_l * ai[k]
-    # the real part: a copy of the imaginary one, cleared (a slice is one copy in the transpiled
-    # code; a list grown entry by entry costs several times more)
-    ar = ai[:]
-    for k in range(size):
-        ar[k] = 0.0
-    for i in range(n):
-        a = fils[i]
-        ar[packed_index(i, i, n)] = a[5] / (a[2] * a[3])
+    system = _impedances(fils, filament_log_gmds(mesh, sym_x, sym_y), omega_l)
     br = []
     bi = []
     for i in range(n):
         br.append(1.0)
         bi.append(0.0)
+    ar = system[0]
+    ai = system[1]
     return solve_complex_symmetric(ar, ai, br, bi, n)
 # __pragma__ ('kwargs')
