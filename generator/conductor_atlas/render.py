@@ -113,15 +113,14 @@ class Renderer:
         out = RenderedPages()
         m = view.material
         base = f"materials/{m.id}"
-        # the record's sources and those the derived tables cite (ASTM B258 for the AWG sizes, ...)
-        keys = set(m.source_keys()) | {k for table in view.tables for k in table.sources if k in dataset.sources}
-        used = [dataset.sources[k] for k in sorted(keys)]
         value_statuses = statuses(dataset, m, dataset.verification or EMPTY_RECORD)
         cite_sources = {}
         for table in view.tables:
             for key in table.sources:
                 if key not in cite_sources and key in dataset.sources:
                     cite_sources[key] = source_with_locators(dataset.sources[key], m)
+        # the record's sources and those the derived tables cite (ASTM B258 for the AWG sizes, ...)
+        used = [dataset.sources[k] for k in sorted(set(m.source_keys()) | set(cite_sources))]
         catalogue = calc_catalogue([view.calc], [m])
         charts = [{"id": c.id, "caption": c.caption, "svg": Markup(c.svg)} for c in material_charts(view)]
         self.page(
