@@ -6,7 +6,7 @@ import pytest
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core.geometry import (awg_area, awg_diameter, awg_number, next_awg, next_metric_size,
-                                           parse_size)
+                                           parse_size, size_reading_note)
 
 INCH = 0.0254
 
@@ -86,3 +86,32 @@ def test_next_standard_sizes():
     assert next_awg(5.0e-6) == 10
     assert next_awg(100e-6) == -3   # 4/0 = 107.2 mm²
     assert next_awg(120e-6) == -99  # larger than 4/0: kcmil sizes or parallel conductors
+
+
+# "ga" is read as AWG, which is what US wire catalogues mean by it; a British (SWG, BS 3737) or
+# sheet-metal gauge of the same number is another diameter, so the answer says how it read the text.
+@pytest.mark.parametrize("text", ["10 ga", "GA 10", "#4/0 ga"])
+def test_ga_is_read_as_awg_and_says_so(text):
+    note = size_reading_note(text, parse_size(text), "size")
+    assert note.startswith("size: “" + text + "” is read as ")
+    assert "AWG" in note and "ASTM B258" in note and "SWG" in note
+
+
+def test_ga_note_gives_the_awg_diameter():
+    # ASTM B258-18 Table 1: 10 AWG is 0.1019 in = 2.588 mm
+    assert "ø 2.588 mm" in size_reading_note("10 ga", parse_size("10 ga"), "size")
+
+
+@pytest.mark.parametrize("text", ["10 AWG", "awg 10", "#10", "4/0", "2.5 mm²", "d 1.6 mm", "40 x 5 mm",
+                                  "2500 mm²", "200 x 20 mm"])
+def test_plain_sizes_need_no_reading_note(text):
+    # 2500 mm² is the largest IEC 60228 size (Table 1/2); 200 x 20 mm a large busbar (common practice,
+    # no source): neither is beyond a real conductor
+    assert size_reading_note(text, parse_size(text), "size") == ""
+
+
+@pytest.mark.parametrize("text", ["1e9 mm²", "2 m²", "d 1 m", "1000 x 200 mm"])
+def test_a_cross_section_beyond_any_conductor_is_questioned(text):
+    # above 100 000 mm² (0.1 m²): forty times the largest IEC 60228 size (2500 mm², Table 1/2)
+    note = size_reading_note(text, parse_size(text), "size")
+    assert note.startswith("size: ") and "check the unit" in note and "2500 mm²" in note

@@ -122,6 +122,8 @@ def calculator_cases():
         {"length": "", "size": "", "temperature": "", "current": ""},
         {"length": "1e308 m", "size": "1e-300 mm2"},
         {"length": "-5 m", "size": "d 1.6 mm", "current": "-3 A"},
+        {"length": "3 m", "size": "10 ga"},  # read as AWG, and the answer says so
+        {"length": "3 m", "size": "2 m2"},  # beyond any conductor: the answer asks about the unit
         {"length": "12 m", "size": "0.5 mm2", "temperature": "-250 °C"},
         {"length": "12 m", "size": "0.5 mm2", "temperature": "4.2 K", "model": "bloch-gruneisen"},
         {"length": "12 m", "size": "0.5 mm2", "temperature": "77 K", "model": "table"},

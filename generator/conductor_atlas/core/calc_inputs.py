@@ -4,7 +4,7 @@ its fields and reports every problem at once (see core.outcome for the record th
 """
 
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.geometry import parse_size
+from conductor_atlas.core.geometry import parse_size, size_reading_note
 from conductor_atlas.core.lookup import find_material, trade_word_note
 from conductor_atlas.core.outcome import add_error, add_material_used, add_warning
 from conductor_atlas.core.typed_text import point_reading_note, portable_text
@@ -98,7 +98,25 @@ def read_size(outcome, inputs, field):
         add_error(outcome, field, problem.message)
         return None
     note_point_reading(outcome, text, field)
+    note_size_reading(outcome, text, size, field)
     return size
+
+
+# The last size text note_size_reading read for each field and the note it gave: [text, note] (as
+# LAST_NOTE, speed only).
+LAST_SIZE_NOTE = {}
+
+
+def note_size_reading(outcome, text, size, field):
+    """Say how a size was read when a reader could take it otherwise: geometry.size_reading_note
+    ("10 ga" read as AWG, a cross-section beyond any conductor)."""
+    if field in LAST_SIZE_NOTE and LAST_SIZE_NOTE[field][0] == text:
+        note = LAST_SIZE_NOTE[field][1]
+    else:
+        note = size_reading_note(text, size, field)
+        LAST_SIZE_NOTE[field] = [text, note]
+    if len(note) > 0:
+        add_warning(outcome, note)
 
 
 def read_material(outcome, inputs, catalogue, field):

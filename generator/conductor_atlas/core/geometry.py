@@ -398,6 +398,42 @@ def size_from_text(text, field):
     return size_record("area", area, compact, diameter_from_area(area), 0.0, 0.0)
 
 
+# Above this cross-section [m^2] (100 000 mm², forty times the largest IEC 60228 size) a size is
+# beyond any cable or busbar: most likely a unit typed wrong (m² for mm²), so the answer asks.
+LARGEST_PLAUSIBLE_AREA = 0.1
+
+
+# __pragma__ ('nokwargs')
+def size_reading_note(text, size, field):
+    """A note on how the size text ``text`` (read by parse_size as ``size``) was read, shown with
+    the results; "" when there is nothing to say:
+
+    - a gauge written "ga" is read as AWG (what US wire catalogues mean by it); a British (SWG) or
+      sheet-metal gauge of the same number is another diameter, so the note says which was used;
+    - a cross-section above 100 000 mm² (LARGEST_PLAUSIBLE_AREA) is beyond any real conductor.
+
+    Examples
+    --------
+    10 AWG is 0.1019 in = 2.588 mm (ASTM B258-18, Table 1):
+
+    >>> note = size_reading_note("10 ga", parse_size("10 ga"), "size")
+    >>> note[:25], note[note.find("("):note.find(")") + 1]
+    ('size: “10 ga” is read as ', '(ASTM B258, ø 2.588 mm)')
+    >>> size_reading_note("10 AWG", parse_size("10 AWG"), "size")
+    ''
+    """
+    compact = normalise_text(text).strip()
+    if awg_gauge_text(compact) is not None and compact.lower().find("awg") < 0:
+        return (field + ": “" + compact + "” is read as " + size["label"] + " (ASTM B258, ø "
+                + format_number(size["diameter"] * 1e3, 4) + " mm); a British (SWG) or sheet-metal gauge of "
+                "the same number is another size: for one of those, type its diameter or thickness in mm")
+    if size["area"] > LARGEST_PLAUSIBLE_AREA:
+        return (field + ": " + format_number(size["area"] * 1e6, 4) + " mm² is far beyond any cable or "
+                "busbar (IEC 60228 sizes end at 2500 mm²): check the unit")
+    return ""
+# __pragma__ ('kwargs')
+
+
 def next_metric_size(area):
     """Smallest IEC 60228 nominal size (mm², as a float) whose nominal area is >= area [m^2].
 
