@@ -115,3 +115,11 @@ def test_a_cross_section_beyond_any_conductor_is_questioned(text):
     # above 100 000 mm² (0.1 m²): forty times the largest IEC 60228 size (2500 mm², Table 1/2)
     note = size_reading_note(text, parse_size(text), "size")
     assert note.startswith("size: ") and "check the unit" in note and "2500 mm²" in note
+
+
+def test_measured_check_says_how_it_read_ga(catalogue):
+    # the measured-check calculator reads its size without read_size; it must give the same note
+    from conductor_atlas.core.calc_measured_check import calculate
+    outcome = calculate({"material": "IACS", "resistance": "0.53 ohm", "length": "100 m", "size": "10 ga"},
+                        catalogue)
+    assert any("read as 10 AWG" in w for w in outcome["warnings"])

@@ -236,7 +236,7 @@ def new_calculator_cases(catalogue):
     for material in ("IACS", "tinned copper", "1350", "copper-hard-drawn", "6101", "stainless-304", "Pt385", "xx", ""):
         for extra in ({}, {"conductor_class": "1"}, {"conductor_class": "5", "size": "95 mm2", "resistance": "20 mohm"},
                       {"conductor_class": "6", "size": "300 mm2"}, {"conductor_class": "class 2", "size": "3 mm2"},
-                      {"size": "12 AWG", "resistance": "0.53 ohm"}, {"size": "d 1.6 mm"}, {"size": "40 x 5 mm"},
+                      {"size": "12 AWG", "resistance": "0.53 ohm"}, {"size": "d 1.6 mm"}, {"size": "10 ga", "resistance": "0.53 ohm"}, {"size": "40 x 5 mm"},
                       {"conductor_class": ""}, {"conductor_class": "4"}, {"temperature": "45 °C", "length": "0.5 m"},
                       {"temperature": "-300 °C"}, {"resistance": "-1 ohm", "length": "0 m"},
                       {"resistance": "1e308 ohm", "length": "1e-300 m"}, {"size": "10 mm2", "temperature": "4.2 K",

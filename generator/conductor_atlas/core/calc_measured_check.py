@@ -6,7 +6,8 @@ from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (keyed_record, add_error, add_result, add_sources, add_warning, check_finite_results,
                                           has_errors, new_outcome)
-from conductor_atlas.core.calc_inputs import field_text, note_point_reading, read_quantity, require_positive
+from conductor_atlas.core.calc_inputs import (field_text, note_point_reading, note_size_reading, read_quantity,
+                                             require_positive)
 from conductor_atlas.core.calc_common import material_at_temperature, material_resistivity
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
@@ -161,6 +162,7 @@ def calculate(inputs, catalogue):
     try:
         size = parse_size(field_text(inputs, "size"), "size")
         note_point_reading(outcome, field_text(inputs, "size"), "size")
+        note_size_reading(outcome, field_text(inputs, "size"), size, "size")
     except CoreError as problem:
         add_error(outcome, "size", problem.message)
     klass = read_class(outcome, inputs)
