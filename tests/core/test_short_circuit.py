@@ -124,3 +124,17 @@ def test_a_conductor_grade_fuses_at_its_own_solidus():
     out = run(size="10 mm2", current="200 kA", duration="1 s", final="")
     assert "1065.0 °C (its melting point)" in out["errors"]["current"]
     assert shipped_catalogue()["materials"]["copper-annealed"]["melting_point"] == pytest.approx(1065.0 + 273.15)
+
+
+def test_a_longest_time_beyond_the_adiabatic_range_says_so():
+    """100 A in 95 mm² copper, 90 -> 250 °C: IEC 60949's t = K² S² ln((θf + β)/(θi + β)) / I² with
+    K = 226, β = 234.5 gives 18.48 ks = 5.13 h by hand, far beyond the adiabatic range; before, the
+    answer showed "18.28 ks" with no word that heat lost meanwhile makes the real time longer."""
+    out = run(current="100 A", duration="")
+    by_hand = 226.0 ** 2 * 95.0 ** 2 * math.log((250 + 234.5) / (90 + 234.5)) / 100.0 ** 2
+    assert value(out, "max_time_iec") == pytest.approx(by_hand, rel=1e-9)
+    assert "(5.08 h)" in out["results"]["max_time"]["text"]  # the heat balance's 18.28 ks
+    assert any("longest time" in w and "beyond 5 s" in w for w in out["warnings"]), out["warnings"]
+    short = run(current="12 kA", duration="")  # 0.294 s: inside the range, no such note
+    assert not any("beyond 5 s" in w for w in short["warnings"])
+    assert "h)" not in short["results"]["max_time"]["text"]

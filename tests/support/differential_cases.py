@@ -248,7 +248,8 @@ def new_calculator_cases(catalogue):
         for extra in ({}, {"size": ""}, {"duration": ""}, {"final": ""}, {"final": "", "size": "1 mm2"},
                       {"duration": "10 s", "final": "160 °C"}, {"initial": "300 °C"}, {"current": "0 A"},
                       {"duration": "200 ms", "size": "4/0 AWG", "final": ""}, {"size": "", "final": ""},
-                      {"size": "60 x 10 mm", "current": "40 kA"}, {"model": "table", "initial": "20 °C"}):
+                      {"size": "60 x 10 mm", "current": "40 kA"}, {"model": "table", "initial": "20 °C"},
+                      {"duration": "", "current": "100 A"}):
             add("short_circuit", "", {**fault, "material": material, **extra})
     # answers with ranges (core.ranges): every ranged material through several calculators
     for material in ("copper-hard-drawn", "copper-tinned", "aluminium-6101", "fe-cr-al"):

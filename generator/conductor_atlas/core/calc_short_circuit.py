@@ -321,12 +321,26 @@ def compute(outcome, m, model, current, duration, size, t_i, t_f, cv, cap, iec):
                            + " mm² (the next nominal size up; check its real resistance and the cable standard)")
         if size is not None:
             t_max = g * size["area"] * size["area"] / (current * current)
-            add_result(outcome, "max_time", t_max, "s", format_si(t_max, "s", 4))
+            add_result(outcome, "max_time", t_max, "s", time_text(t_max))
             if iec is not None:
                 t_iec = sc.iec60949_max_time(current, size["area"], iec[0], iec[1], t_i, t_f)
-                add_result(outcome, "max_time_iec", t_iec, "s", format_si(t_iec, "s", 4) + "; the heat balance is "
+                add_result(outcome, "max_time_iec", t_iec, "s", time_text(t_iec) + "; the heat balance is "
                            + difference_text(t_max, t_iec) + " from it")
+            if t_max > ADIABATIC_LIMIT:
+                add_warning(outcome, "the longest time, " + time_text(t_max) + ", is beyond 5 s, where the heat "
+                            "balance is no longer adiabatic (IEC 60949's limit for the adiabatic method, from "
+                            "memory): heat lost to the surroundings meanwhile lets the real conductor carry the "
+                            "current longer than shown")
     return worst
+
+
+def time_text(seconds):
+    """A duration [s] in SI prefixes, with hours beside it from one hour up ("18.28 ks (5.08 h)"): a
+    kilosecond is not how anyone reads a long time."""
+    text = format_si(seconds, "s", 4)
+    if seconds >= 3600.0:
+        text = text + " (" + format_number(seconds / 3600.0, 3) + " h)"
+    return text
 
 
 def limit_name(m):
