@@ -44,3 +44,12 @@ def test_no_coefficient_claimed_without_a_temperature_model(catalogue):
 def test_bad_temperature_names_the_field(catalogue):
     out = calculate_resistivity({"material": "Cu", "temperature": "5 kg"}, catalogue)
     assert "temperature" in out["errors"] and out["results"] == {}
+
+
+def test_linear_model_far_below_its_span_says_what_to_type(catalogue):
+    # IEC 60028's α = 0.00393 /K puts copper's linear ρ at zero near −234.5 °C, so at 4 K it has none;
+    # before, the refusal named neither the model's span nor the models that do reach 4 K
+    out = calculate_resistivity({"material": "Cu", "temperature": "4 K", "model": "linear"},
+                                catalogue)
+    message = out["errors"]["temperature"]
+    assert "holds from −50.0 °C" in message and "choose the model table or bloch-gruneisen" in message

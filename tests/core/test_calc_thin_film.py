@@ -127,3 +127,11 @@ def test_a_film_a_few_atomic_layers_thick_is_cautioned(catalogue, thickness, cau
     out = calculate_thin_film({"material": "Cu", "thickness": thickness}, catalogue)
     assert out["errors"] == {}
     assert any("few atomic layers" in w for w in out["warnings"]) == cautioned
+
+
+def test_a_film_with_only_the_linear_model_gives_its_span_at_4_k(catalogue):
+    # film-copper carries only a temperature coefficient: at 4 K the refusal gives the span to type in
+    out = calculate_thin_film({"material": "film-copper", "thickness": "20 nm", "temperature": "4 K"}, catalogue)
+    message = out["errors"]["temperature"]
+    assert "holds from −50.0 °C (223.15 K) to 200.0 °C (473.15 K)" in message
+    assert "enter a temperature in that span" in message

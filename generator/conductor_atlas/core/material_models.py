@@ -304,6 +304,8 @@ def model_rho(m, t, key, model):
     if key == "linear":
         if not has_linear(m):
             raise CoreError("no temperature coefficient is on record for " + m["name"], "model")
+        if not (1.0 + m["alpha"] * (t - m["t_ref"]) > 0):
+            raise CoreError(linear_floor_message(m, t), "temperature")
         return dc.resistivity_linear(t, m["rho_ref"], m["alpha"], m["t_ref"])
     if key == "table":
         if not has_table(m):
@@ -346,6 +348,29 @@ def model_rho(m, t, key, model):
 
 
 # __pragma__ ('kwargs')
+
+
+def linear_floor_message(m, t):
+    """Why the linear model of m gives no resistivity at t [K] (1 + α (t − t_ref) ≤ 0, far below its
+    span) and what to type instead: another model on record that reaches there, or a temperature in
+    the linear model's span.
+
+    Examples
+    --------
+    >>> film = {"name": "a film", "rho_ref": 1.68e-8, "alpha": 0.0039, "t_ref": 293.15, "valid_from": 223.15,
+    ...         "valid_to": 473.15, "cvd_a": 0.0, "table_t": [], "bg_theta": 0.0, "mt_t": [], "cl_t": []}
+    >>> linear_floor_message(film, 4.0).endswith("no other ρ(T) model is on record for it: enter a temperature in that span")
+    True
+    """
+    text = ("the linear model of " + m["name"] + " gives no positive resistivity at " + temperature_text(t)
+            + " (it holds from " + temperature_span_text(m["valid_from"], m["valid_to"]) + ")")
+    others = []
+    for key in available_models(m):
+        if key != "linear":
+            others.append(key)
+    if len(others) > 0:
+        return text + ": choose the model " + " or ".join(others) + " for this temperature"
+    return text + ", and no other ρ(T) model is on record for it: enter a temperature in that span"
 
 
 def model_warnings(m, t, key):
