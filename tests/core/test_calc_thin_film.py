@@ -135,3 +135,12 @@ def test_a_film_with_only_the_linear_model_gives_its_span_at_4_k(catalogue):
     message = out["errors"]["temperature"]
     assert "holds from −50.0 °C (223.15 K) to 200.0 °C (473.15 K)" in message
     assert "enter a temperature in that span" in message
+
+
+def test_a_grain_smaller_than_an_atomic_layer_is_questioned(catalogue):
+    # copper's (111) layer spacing is 0.209 nm (a = 0.3615 nm, Kittel ch. 1): a 0.1 nm grain is no grain
+    fields = {"material": "film-copper", "thickness": "20 nm", "reflection": "0.3"}
+    small = calculate_thin_film({**fields, "grain_size": "0.1 nm"}, catalogue)
+    assert any("smaller than one atomic layer" in w and "check the unit" in w for w in small["warnings"])
+    usual = calculate_thin_film({**fields, "grain_size": "30 nm"}, catalogue)
+    assert not any("atomic layer" in w for w in usual["warnings"])

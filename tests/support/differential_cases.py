@@ -197,7 +197,8 @@ def new_calculator_cases(catalogue):
                       {"thickness": "1 um", "specularity": "50 %", "temperature": "77 K"},
                       {"thickness": "20 nm", "specularity": "1"}, {"thickness": "-1 nm"}, {"thickness": ""},
                       {"thickness": "20 nm", "mean_free_path": "10 nm", "grain_size": "5 nm"},
-                      {"thickness": "1e-300 m"}, {"thickness": "1e300 m"}):
+                      {"thickness": "1e-300 m"}, {"thickness": "1e300 m"},
+                      {"thickness": "20 nm", "reflection": "0.9", "grain_size": "0.1 nm"}):
             add("thin_film", "", {"material": material, **extra})
     for material, k in (("IACS", ""), ("Cu", ""), ("1350", ""), ("Al", ""), ("Ag", ""), ("cu-ni-55-45", ""),
                         ("steel-low-carbon", ""), ("", "234.5"), ("", "-225 °C"), ("", "234.5 K"), ("", "20 °C"),

@@ -155,7 +155,9 @@ def calculate(inputs, catalogue):
     grain = None
     if len(field_text(inputs, "grain_size")) > 0:
         grain = read_quantity(outcome, inputs, "grain_size", "length", True)
-        require_positive(outcome, "grain_size", grain, "grain size")
+        if require_positive(outcome, "grain_size", grain, "grain size") and grain < ONE_LAYER:
+            add_warning(outcome, "a grain of " + format_si(grain, "m", 3) + " is smaller than one atomic layer "
+                        "(about 0.2 nm, as for the thickness): no crystal grain is that small; check the unit")
     opening = material_at_temperature(outcome, inputs, catalogue)
     if opening is None:
         return outcome
