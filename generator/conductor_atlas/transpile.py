@@ -26,6 +26,7 @@ from conductor_atlas.paths import CACHE_DIR, CORE_DIR, PACKAGE_DIR
 FLAGS = ["-b", "-n", "-k"]
 KEEP_TRANSPILED = 3  # older transpiled cores kept besides the current one (0.5 MB each)
 ENTRY = CORE_DIR / "web.py"
+LAUNCHER = PACKAGE_DIR / "transcrypt_launch.py"
 CORE_PACKAGE = "conductor_atlas.core"
 RUNTIME_FILES = ["org.transcrypt.__runtime__.js", "math.js"]
 RE_FILES = ["re.js", "re.translate.js"]  # Transcrypt writes these only when a shipped module imports re
@@ -89,6 +90,7 @@ def core_hash() -> str:
     digest = hashlib.sha256()
     digest.update(transcrypt_version().encode())
     digest.update(" ".join(FLAGS).encode())
+    digest.update(LAUNCHER.read_bytes())  # what it changes in Transcrypt's output (math without keywords)
     for path in sorted(CORE_DIR.glob("*.py")):
         digest.update(path.name.encode())
         digest.update(path.read_bytes())

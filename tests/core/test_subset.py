@@ -64,6 +64,18 @@ def test_checker_flags_keywords_into_a_nokwargs_region():
     assert "default argument" in violations("# __pragma__ ('nokwargs')\ndef f(a=1):\n    return a\n", "p.py")[0]
 
 
+@pytest.mark.parametrize("code, where", [
+    ("import math\ny = math.log(x, base=2.0)\n", "2: keyword argument to math.log"),
+    ("import math\n_log = math.log\ny = _log(x, base=2.0)\n", "3: keyword argument to _log"),
+    ("from math import log\ny = log(x=3.0)\n", "2: keyword argument to log"),
+])
+def test_checker_flags_keywords_to_math(code, where):
+    # Transcrypt's math is compiled without keyword arguments (transcrypt_launch): JS would ignore them
+    assert violations(code, "probe.py") == [f"probe.py:{where}: Transcrypt's math is compiled without keyword "
+                                            "arguments, JS ignores it"]
+    assert violations("import math\n_log = math.log\ny = math.log(x, 2.0) + _log(x)\n", "probe.py") == []
+
+
 def test_checker_flags_loops_in_a_jsiter_region():
     code = "# __pragma__ ('jsiter')\ndef f(xs):\n    return {'n': len(xs), 'a': 1 in xs}\n# __pragma__ ('nojsiter')\n"
     assert violations(code, "probe.py") == ["probe.py:3: 'in' in a jsiter region tests JS keys, not Python items"]

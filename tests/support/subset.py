@@ -278,8 +278,36 @@ def imported_keyword_calls(sources: dict[str, str]) -> list[str]:
     return found
 
 
+def math_keyword_violations(tree: ast.AST, filename: str) -> list[str]:
+    """Transcrypt's math module is compiled without keyword arguments (conductor_atlas.transcrypt_launch):
+    no call of ``math.f``, of a name imported from math or of a module-level name bound to ``math.f``
+    may pass a keyword (JS would ignore it)."""
+    bound = set()
+    for node in getattr(tree, "body", []):
+        if isinstance(node, ast.ImportFrom) and node.module == "math":
+            bound |= {alias.asname or alias.name for alias in node.names}
+        elif (isinstance(node, ast.Assign) and isinstance(node.value, ast.Attribute)
+              and isinstance(node.value.value, ast.Name) and node.value.value.id == "math"):
+            bound |= {target.id for target in node.targets if isinstance(target, ast.Name)}
+    found = []
+    for node in ast.walk(tree):
+        if not isinstance(node, ast.Call) or not node.keywords:
+            continue
+        func = node.func
+        if isinstance(func, ast.Attribute) and isinstance(func.value, ast.Name) and func.value.id == "math":
+            name = "math." + func.attr
+        elif isinstance(func, ast.Name) and func.id in bound:
+            name = func.id
+        else:
+            continue
+        found.append(f"{filename}:{node.lineno}: keyword argument to {name}: Transcrypt's math is compiled "
+                     "without keyword arguments, JS ignores it")
+    return found
+
+
 def violations(source: str, filename: str) -> list[str]:
     checker = SubsetChecker(filename)
     tree = ast.parse(source, filename=filename)
     checker.visit(tree)
-    return checker.found + nokwargs_violations(tree, source, filename) + jsiter_violations(tree, source, filename)
+    return (checker.found + nokwargs_violations(tree, source, filename) + jsiter_violations(tree, source, filename)
+            + math_keyword_violations(tree, filename))
