@@ -138,3 +138,32 @@ def test_a_longest_time_beyond_the_adiabatic_range_says_so():
     short = run(current="12 kA", duration="")  # 0.294 s: inside the range, no such note
     assert not any("beyond 5 s" in w for w in short["warnings"])
     assert "h)" not in short["results"]["max_time"]["text"]
+
+
+@pytest.mark.parametrize("model", ["auto", "linear", "table", "bloch-gruneisen"])
+def test_the_integral_without_lists_is_the_listed_one_to_the_bit(model):
+    # calc_short_circuit.heat_integral_of sums Simpson's terms as it goes instead of building the
+    # temperature and ρ lists: the same floats in the same order, so equality is exact (no tolerance);
+    # the spans reach each material's solidus, across the auto model's switch from linear to table
+    from conductor_atlas.core.calc_short_circuit import heat_integral_of, resistivities
+    from conductor_atlas.core.errors import CoreError
+
+    def listed(m, lo, hi, cv):
+        return sc.heat_integral(resistivities(m, sc.integration_points(lo, hi), model), lo, hi, cv)
+
+    compared = 0
+    for m in shipped_catalogue()["materials"].values():
+        if not (m["specific_heat"] > 0 and m["density"] > 0):
+            continue
+        cv = m["density"] * m["specific_heat"]
+        for lo, hi in [(293.15, 523.15), (363.15, m["melting_point"] if m["melting_point"] > 400 else 1000.0)]:
+            try:
+                expected = listed(m, lo, hi, cv)
+            except CoreError as problem:
+                with pytest.raises(CoreError) as raised:
+                    heat_integral_of(m, model, lo, hi, cv)
+                assert (raised.value.field, raised.value.message) == (problem.field, problem.message)
+                continue
+            assert heat_integral_of(m, model, lo, hi, cv) == expected
+            compared += 1
+    assert compared >= 20  # the shipped data have about forty metals with a specific heat

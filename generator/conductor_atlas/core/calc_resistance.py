@@ -5,7 +5,7 @@ from conductor_atlas.core.numfmt import format_number, format_si, temperature_te
 from conductor_atlas.core.outcome import (add_error, add_result, add_sources, add_warning, check_finite_results,
                                           new_outcome)
 from conductor_atlas.core.geometry import area_text
-from conductor_atlas.core.calc_inputs import read_quantity, read_size, require_positive
+from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size, require_positive
 from conductor_atlas.core.calc_common import frequency_beyond_dc_conductivity, material_at_temperature, warn_if_fusing
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 from conductor_atlas.core.ac_part import mark_pending, part_function
@@ -133,8 +133,8 @@ def needs_live_solver(inputs, catalogue):
     False
     """
     live_solver_for = part_function("resistance-live-solver")
-    if live_solver_for is None:
-        return False
+    if live_solver_for is None or len(field_text(inputs, "frequency")) == 0:
+        return False  # no AC part, or no frequency: most keystrokes stop here, before any record is made
     scratch = new_outcome(NAME, inputs)
     f = read_quantity(scratch, inputs, "frequency", "frequency", False)
     if f is None or not (f > 0):
