@@ -20,6 +20,7 @@ class CoreError(Exception):
         return "CoreError: " + self.message
 
 
+# __pragma__ ('nokwargs')
 def check_positive(x, field, what):
     """Raise CoreError(field) unless x is a finite number above 0 (NaN and ±∞ are refused too).
 
@@ -34,3 +35,4 @@ def check_positive(x, field, what):
     """
     if not (x - x == 0) or x <= 0.0:
         raise CoreError(what + " must be a finite number above 0", field)
+# __pragma__ ('kwargs')

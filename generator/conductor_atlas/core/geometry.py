@@ -431,7 +431,6 @@ def size_reading_note(text, size, field):
         return (field + ": " + format_number(size["area"] * 1e6, 4) + " mm² is far beyond any cable or "
                 "busbar (IEC 60228 sizes end at 2500 mm²): check the unit")
     return ""
-# __pragma__ ('kwargs')
 
 
 def next_metric_size(area):

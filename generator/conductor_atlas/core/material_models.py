@@ -36,9 +36,10 @@ MODEL_FIELD_INFO = ["Temperature model", "auto, linear, table, bloch-gruneisen, 
                     "(any case; the models of the chosen material are listed when another is typed)"]
 
 
-# Functions from here to the next "kwargs" pragma run for every temperature of an integral (the
-# short-circuit heat balance evaluates ρ at 65 points per integral): Transcrypt gives them no
-# keyword-argument prologue. Call them with positional arguments only (tests/core/test_subset.py).
+# Every function from here on has no keyword-argument prologue in its JS (none has a default
+# argument): the ρ of an integral's every temperature (the short-circuit heat balance evaluates ρ
+# at 65 points per integral) and resistivity_at, which each calculator update calls a few times.
+# Call them with positional arguments only (tests/core/test_subset.py).
 # __pragma__ ('nokwargs')
 def has_linear(m):
     return m["alpha"] != 0
@@ -101,7 +102,6 @@ def in_cvd_range(t):
     return t >= 73.15 and t <= 1123.15
 
 
-# __pragma__ ('kwargs')
 
 
 def available_models(m):
@@ -166,7 +166,6 @@ def cvd_ratio(m, t):
 
 
 # (positional arguments only, as above)
-# __pragma__ ('nokwargs')
 def choose_model(m, t):
     """The model "auto" uses at temperature t [K].
 
@@ -200,7 +199,6 @@ def choose_model(m, t):
     return "reference"
 
 
-# __pragma__ ('kwargs')
 
 
 def resistivity_or_none(m, t):
@@ -242,7 +240,6 @@ def within_model(found):
 
 
 # (positional arguments only, as above)
-# __pragma__ ('nokwargs')
 def model_key(m, t, model):
     """The model key ``model`` stands for at temperature t [K]: "auto" (or empty) is choose_model's pick.
 
@@ -347,7 +344,6 @@ def model_rho(m, t, key, model):
     raise CoreError(model_choice_message(m, model), "model")
 
 
-# __pragma__ ('kwargs')
 
 
 def linear_floor_message(m, t):
@@ -489,3 +485,4 @@ def local_temperature_coefficient(m, t, model):
             warnings.append(w)
     alpha = (above["rho"] - below["rho"]) / (2.0 * COEFFICIENT_STEP) / here["rho"]
     return [alpha, warnings]
+# __pragma__ ('kwargs')
