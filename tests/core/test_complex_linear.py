@@ -37,8 +37,10 @@ def test_packed_index_counts_the_upper_triangle_row_by_row():
 
 
 # every remainder of n / 4: the elimination takes its pivots four at a time (the last block holds
-# n % 4 of them when that is not 0)
-@pytest.mark.parametrize("n, seed", [(1, 0), (2, 4), (5, 6), (6, 7), (7, 1), (8, 5), (60, 2), (150, 3)])
+# n % 4 of them when that is not 0); the rows after a block go two at a time, an odd one alone (n = 5:
+# one row after the first block, 11: seven, 13: nine and five)
+@pytest.mark.parametrize("n, seed", [(1, 0), (2, 4), (5, 6), (6, 7), (7, 1), (8, 5), (11, 8), (13, 9), (60, 2),
+                                     (150, 3)])
 def test_symmetric_solver_matches_lapack(n, seed):
     # tolerance 1e-12 relative to the largest component: LDL^T without pivoting on this class has a
     # growth factor below 3 (Higham 1998), measured error 1.5e-14 at n = 120

@@ -361,6 +361,16 @@ def filament_cases():
             sym_i.append(3.0 if i == j else 1.0 / (1 + j - i))
     rhs = [1.0, 0.0, 2.0, 1.0, 1.0, -1.0, 0.5, 0.0, 3.0, 1.0]
     cases.append((cl, "solve_complex_symmetric", [sym_r, sym_i, rhs, [0.0, 1.0, 0.0, 0.5, 0.0, 0.0, 1.0, 2.0, 0.0, -0.5], 10]))
+    # n = 11: the rows after a block go two at a time, an odd one alone (7 rows after the first block:
+    # three pairs and one; 3 after the second: a pair and one), then a last block of three; same kernel
+    sym_r = []
+    sym_i = []
+    for i in range(11):
+        for j in range(i, 11):
+            sym_r.append(2.0 + 0.5 * i if i == j else 0.1 / (1 + j - i))
+            sym_i.append(3.0 if i == j else 1.0 / (1 + j - i))
+    rhs = [1.0, 0.0, 2.0, 1.0, 1.0, -1.0, 0.5, 0.0, 3.0, 1.0, -2.0]
+    cases.append((cl, "solve_complex_symmetric", [sym_r, sym_i, rhs, [0.0, 1.0, 0.0, 0.5, 0.0, 0.0, 1.0, 2.0, 0.0, -0.5, 1.0], 11]))
     for ij in ([0, 0, 5], [1, 3, 5], [4, 4, 5]):
         cases.append((cl, "packed_index", ij))
     cases.append((cl, "back_substitute", [[2.0, 1.0, 0.0, 1.0], [0.0, 0.5, 0.0, 1.0], [3.0, 1.0], [0.0, 1.0], [0, 2]]))

@@ -9,7 +9,7 @@ solver's estimated relative change of its last refinement step [-] (settled belo
 or not refined). SOLVER_DIGEST: bar_table.solver_digest() of the solver code that made them.
 """
 
-SOLVER_DIGEST = "9f15e972689ef6c0079c107f06563a292196aa72317485d3b8b39028205125d4"
+SOLVER_DIGEST = "3d6847d054795f96e551e237f2875ec2d58348b0980277a7b10cdd5853b04b47"
 STEPS_PER_OCTAVE = 4
 FIRST_U = 0
 LAST_U = 28

@@ -69,7 +69,8 @@ def _near_sum(table, kx, ky):
     # sum_a sum_b s_a s_b G(u_a, v_b) of a near pair: the four x edge pairs at kx + x_steps[a], the
     # four y edge pairs at ky + y_steps[b] (see _lower_pair), signs +, -, -, + in
     # rectangle_log_gmd_exact's order (added in the order of the unrolled sum it replaced: the same
-    # bits). table: [G rows, unset row, x keys, x values, y keys, y values, x_steps, y_steps, signs,
+    # bits). The y keys are looked up once per pair, the sum over b written out (in node 5 % less
+    # assembly time than a loop over y_steps). table: [G rows, unset row, x keys, x values, y keys, y values, x_steps, y_steps, signs,
     # x edge count, y edge count] (_edge_differences' keys and values). G is kept in a row per x key,
     # made (a copy of the unset row, 1e300) at its first use, an entry per y key, computed at its
     # first use: the near pairs touch few x keys (122 of 650 for a 100 x 10 mm quarter at 400 Hz,
@@ -81,8 +82,16 @@ def _near_sum(table, kx, ky):
     y_keys = table[4]
     y_values = table[5]
     x_steps = table[6]
-    y_steps = table[7]
     signs = table[8]
+    # the four y edge pairs (y_steps: ny, 0, ny + 1, 1), the same for the four x edge pairs
+    ny = table[10]
+    ky0 = ky + ny
+    ky2 = ky + ny + 1
+    ky3 = ky + 1
+    y0 = y_keys[ky0]
+    y1 = y_keys[ky]
+    y2 = y_keys[ky2]
+    y3 = y_keys[ky3]
     total = 0.0
     for a in range(4):
         kxa = kx + x_steps[a]
@@ -90,14 +99,24 @@ def _near_sum(table, kx, ky):
         if row is None:
             row = table[1][:]
             rows[x_keys[kxa]] = row
-        part = 0.0
-        for b in range(4):
-            kyb = ky + y_steps[b]
-            g = row[y_keys[kyb]]
-            if g > 1e299:
-                g = corner_term(x_values[kxa], y_values[kyb])
-                row[y_keys[kyb]] = g
-            part += signs[b] * g
+        g0 = row[y0]
+        if g0 > 1e299:
+            g0 = corner_term(x_values[kxa], y_values[ky0])
+            row[y0] = g0
+        g1 = row[y1]
+        if g1 > 1e299:
+            g1 = corner_term(x_values[kxa], y_values[ky])
+            row[y1] = g1
+        g2 = row[y2]
+        if g2 > 1e299:
+            g2 = corner_term(x_values[kxa], y_values[ky2])
+            row[y2] = g2
+        g3 = row[y3]
+        if g3 > 1e299:
+            g3 = corner_term(x_values[kxa], y_values[ky3])
+            row[y3] = g3
+        # signs +, -, -, +: the bits of adding s_b G one after the other from 0
+        part = g0 - g1 - g2 + g3
         total += signs[a] * part
     return total
 
