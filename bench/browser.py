@@ -8,8 +8,8 @@
 - calculator update: in the page, performance.now() from dispatching an input event on a number
   field to the moment a result's data-value has changed and the page's style and layout are up to
   date (read back at once; painting left out), CPU throttled ×4 (Emulation domain); the floor is a
-  form added to a calculator page whose handler only copies the input into a data-value, timed by
-  the same code. The field changed is the form's first number field (not a material name), and
+  form added to the same calculator's page whose handler only copies the input into a data-value,
+  timed by the same code on a fresh page of its own, alternating with the calculator's pages. The field changed is the form's first number field (not a material name), and
   its second value is what a person would type, about 10 % more (CALC_TIMER says why it never has
   three digits after a point).
 - search: the same for the header search box, once its index is loaded.
@@ -255,22 +255,32 @@ def throttled_page(browser, url: str):
 
 
 def calculator_times(browser, base: str, names: list[str], rounds: int, reps: int = 1) -> dict:
-    """Per calculator: the median over ``reps`` fresh pages of each page's median update time."""
+    """Per calculator: the median over ``reps`` fresh pages of each page's median update time, and the
+    floor timed on the same calculator's page, a fresh page per rep alternating with the calculator's
+    (FLOOR_FORM: the same DOM to lay out, and a change of the machine's load moves both alike)."""
     out = {}
     for name in names:
-        runs, field, error = [], None, None
+        runs, floors, field, error = [], [], None, None
+        url = f"{base}/calculators/{name}/index.html"
         for _ in range(max(1, reps)):
-            context, page = throttled_page(browser, f"{base}/calculators/{name}/index.html")
+            context, page = throttled_page(browser, url)
+            page.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
+            page.evaluate(FLOOR_FORM)
+            floor = page.evaluate(CALC_TIMER, {"name": "bench-floor", "rounds": rounds})
+            context.close()
+            context, page = throttled_page(browser, url)
             page.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
             result = page.evaluate(CALC_TIMER, {"name": name, "rounds": rounds})
             context.close()
-            if "error" in result:
-                error = result["error"]
+            if "error" in result or "error" in floor:
+                error = result.get("error") or floor.get("error")
                 break
             field = result["field"]
             runs.append(statistics.median(result["samples"]))
+            floors.append(statistics.median(floor["samples"]))
         out[name] = {"error": error} if error else {"field": field, "median_ms": statistics.median(runs),
-                                                     "runs_ms": runs}
+                                                     "runs_ms": runs, "floor_ms": statistics.median(floors),
+                                                     "floor_runs_ms": floors}
     return out
 
 
