@@ -128,11 +128,7 @@ def heat_integral_of(m, model, lo, hi, cv):
     total = 0.0
     positive = True
     for i in range(n + 1):
-        w = 2.0
-        if i == 0 or i == n:
-            w = 1.0
-        elif i % 2 == 1:
-            w = 4.0
+        w = sc.simpson_weight(i, n)
         rho = resistivity_value(m, lo + h * i, model)
         if rho > 0:
             total += w / rho

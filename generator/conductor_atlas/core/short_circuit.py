@@ -155,16 +155,25 @@ def heat_integral(rho_values, theta_lo, theta_hi, volumetric_heat):
     h = (theta_hi - theta_lo) / n
     total = 0.0
     for i in range(n + 1):
-        w = 2.0
-        if i == 0 or i == n:
-            w = 1.0
-        elif i % 2 == 1:
-            w = 4.0
+        w = simpson_weight(i, n)
         rho = rho_values[i]
         if not (rho > 0):
             raise CoreError("the resistivity model gives no positive value in this temperature span", "final")
         total += w / rho
     return volumetric_heat * total * h / 3.0
+
+
+def simpson_weight(i, n):
+    """Simpson's weight of point i of n panels (n even): 1 at the ends, 4 at odd points, 2 between.
+
+    >>> [simpson_weight(i, 4) for i in range(5)]
+    [1.0, 4.0, 2.0, 4.0, 1.0]
+    """
+    if i == 0 or i == n:
+        return 1.0
+    if i % 2 == 1:
+        return 4.0
+    return 2.0
 
 
 def integration_points(theta_lo, theta_hi):
