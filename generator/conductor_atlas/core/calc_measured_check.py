@@ -2,12 +2,10 @@
 
 from conductor_atlas.core import conformance as cf
 from conductor_atlas.core.errors import CoreError
-from conductor_atlas.core.geometry import parse_size
 from conductor_atlas.core.numfmt import format_fixed, format_number, format_si, temperature_text
 from conductor_atlas.core.outcome import (keyed_record, add_error, add_result, add_sources, add_warning, check_finite_results,
                                           has_errors, new_outcome)
-from conductor_atlas.core.calc_inputs import (field_text, note_point_reading, note_size_reading, read_quantity,
-                                             require_positive)
+from conductor_atlas.core.calc_inputs import field_text, read_quantity, read_size, require_positive
 from conductor_atlas.core.calc_common import material_at_temperature, material_resistivity
 from conductor_atlas.core.material_models import MODEL_FIELD_INFO
 
@@ -158,13 +156,7 @@ def calculate(inputs, catalogue):
     require_positive(outcome, "resistance", r_t, "the measured resistance")
     sample = read_quantity(outcome, inputs, "length", "length", True)
     require_positive(outcome, "length", sample, "the sample length")
-    size = None
-    try:
-        size = parse_size(field_text(inputs, "size"), "size")
-        note_point_reading(outcome, field_text(inputs, "size"), "size")
-        note_size_reading(outcome, field_text(inputs, "size"), size, "size")
-    except CoreError as problem:
-        add_error(outcome, "size", problem.message)
+    size = read_size(outcome, inputs, "size")
     klass = read_class(outcome, inputs)
     opening = material_at_temperature(outcome, inputs, catalogue)
     if opening is None:
