@@ -399,7 +399,8 @@ def size_from_text(text, field):
 
 
 # Above this cross-section [m^2] (100 000 mm², forty times the largest IEC 60228 size) a size is
-# beyond any cable or busbar: most likely a unit typed wrong (m² for mm²), so the answer asks.
+# beyond any cable or busbar: most likely a unit typed wrong (m² for mm²), so the answer asks. Our
+# bound (no source): the largest IEC 60228 size, 2500 mm², is from Table 1/2.
 LARGEST_PLAUSIBLE_AREA = 0.1
 
 
