@@ -10,8 +10,11 @@
   date (read back at once; painting left out), CPU throttled ×4 (Emulation domain); the floor is a
   form added to the same calculator's page whose handler only copies the input into a data-value,
   timed by the same code on a fresh page of its own, alternating with the calculator's pages. The field changed is the form's first number field (not a material name), and
-  its second value is what a person would type, about 10 % more (CALC_TIMER says why it never has
-  three digits after a point).
+  its second value is what a person would type, about 10 % more (SECOND_VALUE says why it never has
+  three digits after a point). Beside it, the same-writes floor: the texts and data-values that
+  update writes, replayed on a copy of the section by a handler with no core and no glue
+  (REPLAY_FORM), so the calculator's figure can be read as layout that any page showing those
+  results pays, plus what the core and glue add.
 - search: the same for the header search box, once its index is loaded.
 - first contentful paint of a material page, fresh browser context, CPU throttled ×4.
 """
@@ -31,13 +34,28 @@ CHROMIUM_ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-
                  "--disable-background-networking", "--disable-component-update", "--disable-sync"]
 THROTTLE = 4
 
+# The second value of a number field is what a person would type: about 10 % more, to three
+# significant digits ("100 m" -> "110 m", "0.736 ohm" -> "0.81 ohm", "20 °C" -> "22 °C"). Never three
+# digits after a point ("110.001 m"): the page notes how it read such a number ("read with a decimal
+# point as 110.001; for 110001 write 110001"), so the note would come and go each round and the
+# figure would time the warning list, not an update. Shared by CALC_TIMER and REPLAY_FORM.
+SECOND_VALUE = r"""
+const secondValue = (original) => {
+  const match = original.trim().match(/^(\d+(?:\.\d+)?)(.*)$/);
+  const value = parseFloat(match[1]);
+  let number = String(Number((value * 1.1).toPrecision(3)));
+  if (/\.\d{3}$/.test(number)) number = String(Number((value * 1.1).toPrecision(2)));
+  if (Number(number) === value) number = String(value + 1);
+  return number + match[2];
+};
+"""
+
 # Runs in the page: change a number field of the form back and forth, time each update from
 # dispatching the input event until a result's data-value has changed AND the page's style and
 # layout are up to date (read back at once, as the next frame would have to compute them before
 # showing anything; painting is left out). The floor (FLOOR_FORM) is timed by this same function.
 CALC_TIMER = """
-async ({name, rounds}) => {
-  const form = document.querySelector(`form[data-calculator="${name}"]`);
+async ({name, rounds}) => {""" + SECOND_VALUE + """  const form = document.querySelector(`form[data-calculator="${name}"]`);
   if (!form) return {error: 'no form for ' + name};
   const section = form.closest('section');
   const cells = Array.from(section.querySelectorAll('[data-result]'));
@@ -56,17 +74,7 @@ async ({name, rounds}) => {
     .filter((input) => !input.hasAttribute('list') && /^\\d/.test(input.value.trim()));
   for (const input of candidates) {
     const original = input.value;
-    const match = original.trim().match(/^(\\d+(?:\\.\\d+)?)(.*)$/);
-    // The second value is what a person would type: about 10 % more, to three significant digits
-    // ("100 m" -> "110 m", "0.736 ohm" -> "0.81 ohm", "20 °C" -> "22 °C"). Never three digits after
-    // a point ("110.001 m"): the page notes how it read such a number ("read with a decimal point as
-    // 110.001; for 110001 write 110001"), so the note would come and go each round and the figure
-    // would time the warning list, not an update.
-    const value = parseFloat(match[1]);
-    let number = String(Number((value * 1.1).toPrecision(3)));
-    if (/\\.\\d{3}$/.test(number)) number = String(Number((value * 1.1).toPrecision(2)));
-    if (Number(number) === value) number = String(value + 1);
-    const other = number + match[2];
+    const other = secondValue(original);
     const samples = [];
     for (let i = 0; i < rounds; i++) {
       const before = snapshot();
@@ -107,6 +115,69 @@ FLOOR_FORM = """
 }
 """
 
+
+# Runs in the page: the same-writes floor. The calculator's section is put through one real update to
+# ``field``'s second value and back, recording every text of the section and each result's
+# data-value in both states; then a copy of the section without the calculator's listeners (a
+# cloned node carries none) takes its place, and its input handler only writes the recorded texts
+# and data-values that differ, as the page glue does (a text node's characters set in place). So it
+# lays out exactly the texts a calculator update lays out, with no core and no glue; timed by
+# CALC_TIMER like a calculator.
+REPLAY_FORM = """
+async ({name, field}) => {""" + SECOND_VALUE + """  const form = document.querySelector(`form[data-calculator="${name}"]`);
+  if (!form) return {error: 'no form for ' + name};
+  const section = form.closest('section');
+  const input = form.querySelector(`[name="${field}"]`);
+  const texts = (root) => {
+    const walker = document.createTreeWalker(root, NodeFilter.SHOW_TEXT);
+    const out = [];
+    while (walker.nextNode()) out.push(walker.currentNode);
+    return out;
+  };
+  const cellsOf = (root) => Array.from(root.querySelectorAll('[data-result]'));
+  const record = () => ({texts: texts(section).map((node) => node.data),
+                         values: cellsOf(section).map((cell) => cell.dataset.value)});
+  const settle = async (before) => {
+    const deadline = performance.now() + 2000;
+    while (performance.now() < deadline && JSON.stringify(record()) === before) {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+    }
+  };
+  const original = input.value;
+  const other = secondValue(original);
+  const first = record();
+  input.value = other;
+  input.dispatchEvent(new Event('input', {bubbles: true}));
+  await settle(JSON.stringify(first));
+  const second = record();
+  input.value = original;
+  input.dispatchEvent(new Event('input', {bubbles: true}));
+  await settle(JSON.stringify(second));
+  if (first.texts.length !== second.texts.length || JSON.stringify(record()) !== JSON.stringify(first)) {
+    return {error: 'the update to ' + field + ' does not give back the same page parts, so it cannot be replayed'};
+  }
+  const copy = section.cloneNode(true);
+  section.replaceWith(copy);
+  const copyForm = copy.querySelector('form');
+  copyForm.dataset.calculator = 'bench-replay';
+  const copyInput = copyForm.querySelector(`[name="${field}"]`);
+  const copyTexts = texts(copy);
+  const copyCells = cellsOf(copy);
+  copyForm.addEventListener('input', (event) => {
+    if (event.target !== copyInput) return;
+    const state = copyInput.value === other ? second : first;
+    for (let i = 0; i < copyTexts.length; i++) {
+      if (copyTexts[i].data !== state.texts[i]) copyTexts[i].data = state.texts[i];
+    }
+    for (let i = 0; i < copyCells.length; i++) {
+      const value = state.values[i];
+      if (copyCells[i].dataset.value === value) continue;
+      if (value === undefined) delete copyCells[i].dataset.value; else copyCells[i].dataset.value = value;
+    }
+  });
+  return {field};
+}
+"""
 
 def floor_times(browser, base: str, page_path: str, rounds: int, reps: int = 1) -> dict:
     """The floor on ``page_path`` (same page, CSS and throttling as a calculator): median over ``reps``
@@ -257,10 +328,12 @@ def throttled_page(browser, url: str):
 def calculator_times(browser, base: str, names: list[str], rounds: int, reps: int = 1) -> dict:
     """Per calculator: the median over ``reps`` fresh pages of each page's median update time, and the
     floor timed on the same calculator's page, a fresh page per rep alternating with the calculator's
-    (FLOOR_FORM: the same DOM to lay out, and a change of the machine's load moves both alike)."""
+    (FLOOR_FORM: the same DOM to lay out, and a change of the machine's load moves both alike); and
+    the same-writes floor (REPLAY_FORM: the texts and data-values one update writes, with no core and
+    no glue), a third fresh page per rep."""
     out = {}
     for name in names:
-        runs, floors, field, error = [], [], None, None
+        runs, floors, replays, field, error, replay_error = [], [], [], None, None, None
         url = f"{base}/calculators/{name}/index.html"
         for _ in range(max(1, reps)):
             context, page = throttled_page(browser, url)
@@ -276,11 +349,23 @@ def calculator_times(browser, base: str, names: list[str], rounds: int, reps: in
                 error = result.get("error") or floor.get("error")
                 break
             field = result["field"]
+            context, page = throttled_page(browser, url)
+            page.wait_for_selector("html.calc-ready", state="attached", timeout=60000)
+            replay = page.evaluate(REPLAY_FORM, {"name": name, "field": field})
+            if "error" not in replay:
+                replay = page.evaluate(CALC_TIMER, {"name": "bench-replay", "rounds": rounds})
+            context.close()
             runs.append(statistics.median(result["samples"]))
             floors.append(statistics.median(floor["samples"]))
+            if "error" in replay:
+                replay_error = replay["error"]
+            else:
+                replays.append(statistics.median(replay["samples"]))
         out[name] = {"error": error} if error else {"field": field, "median_ms": statistics.median(runs),
                                                      "runs_ms": runs, "floor_ms": statistics.median(floors),
-                                                     "floor_runs_ms": floors}
+                                                     "floor_runs_ms": floors,
+                                                     "writes_ms": statistics.median(replays) if replays else None,
+                                                     "writes_runs_ms": replays, "writes_error": replay_error}
     return out
 
 

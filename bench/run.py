@@ -336,6 +336,14 @@ def figures(results: dict) -> list[dict]:
                     r["median_ms"] <= 2 * own, f"floor on this page {own:.2f} ms (× the shared floor: "
                     + (f"{r['median_ms'] / fl:.2f}" if fl else "none") + "); per run: " + ", ".join(f"{t:.2f}" for t in r["runs_ms"])
                     + "; floor per run: " + ", ".join(f"{t:.2f}" for t in r["floor_runs_ms"]))
+                writes = r.get("writes_ms")
+                if writes is not None:
+                    add("browser", f"same writes, no core ({name})", writes, "ms", own, None, None,
+                        f"the texts and data-values this update writes, replayed with no core and no glue; "
+                        f"the calculator is {r['median_ms'] / writes:.2f}× this; per run: "
+                        + ", ".join(f"{t:.2f}" for t in r["writes_runs_ms"]))
+                elif r.get("writes_error"):
+                    add("browser", f"same writes, no core ({name})", None, "ms", None, None, None, r["writes_error"])
         for label, r in br.get("bar_solver", {}).items():
             if "error" in r:
                 add("browser", f"bar solver: {label}", None, "ms", None, None, False, r["error"])

@@ -49,6 +49,9 @@ def test_quick_benchmark_runs_and_reports_every_figure(tmp_path):
     if browser:
         calculators = [row for row in data["figures"] if row["figure"].startswith("calculator ")]
         assert len(calculators) == 1 and calculators[0]["value"] is not None, calculators
+        # the same-writes floor replayed that calculator's texts on a copy of its section
+        writes = [row for row in data["figures"] if row["figure"].startswith("same writes, no core")]
+        assert len(writes) == 1 and writes[0]["value"] is not None, writes
         assert data["browser"]["weight"]["first"]["requests"] >= 3
 
 
