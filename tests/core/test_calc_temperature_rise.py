@@ -90,6 +90,38 @@ def test_typed_k(catalogue, k_text, k):
     assert out["material"] == ""
 
 
+def test_copper_k_kept_for_an_aluminium_winding_is_questioned(catalogue):
+    # k = 234.5 (copper) typed for EC aluminium 1350, whose k is 225 (IEEE Std 118, IEC 60034-1):
+    # the answer stays with the typed k, t2 = 1.25 * 254.5 - 234.5 = 83.625 °C, and the note gives the
+    # material's: 1.25 * 245 - 225 = 81.25 °C, 2.375 K lower (both by hand)
+    out = run(catalogue, material="1350", k="234.5")
+    assert value(out, "temperature_hot") == pytest.approx(83.625 + T0, rel=0, abs=1e-9)
+    notes = [w for w in out["warnings"] if "the k entered is not the k of" in w]
+    assert len(notes) == 1, out["warnings"]
+    assert "225 (IEEE Std 118, IEC 60034-1)" in notes[0]
+    assert "81.3 °C" in notes[0] and "2.4 K lower" in notes[0]
+
+
+def test_aluminium_k_typed_for_copper_says_higher(catalogue):
+    # k = 225 typed for copper (234.5): 81.25 °C typed against 83.625 °C, 2.4 K higher
+    notes = [w for w in run(catalogue, material="IACS", k="225")["warnings"] if "the k entered is not the k of" in w]
+    assert len(notes) == 1 and "83.6 °C" in notes[0] and "2.4 K higher" in notes[0], notes
+
+
+@pytest.mark.parametrize("material, k_text", [("IACS", "235"), ("IACS", "234.5"), ("1350", "225"), ("", "225")])
+def test_a_k_within_rounding_or_without_material_passes_quietly(catalogue, material, k_text):
+    # IEC 60034-1 rounds copper's 234.5 to 235 (0.2 %): no note; nor when no material is named
+    out = run(catalogue, material=material, k=k_text)
+    assert not any("the k entered is not the k of" in w for w in out["warnings"]), out["warnings"]
+
+
+def test_a_typed_k_far_from_another_materials_alpha_points_to_its_own_data(catalogue):
+    # silver: 1/α − t_ref = 1/0.0038 − 20 = 243.16 against a typed 100: no standard k to compare
+    # temperatures with, so the note says to leave k empty (the material's own ρ(T) is used then)
+    notes = [w for w in run(catalogue, material="Ag", k="100")["warnings"] if "the k entered is not the k of" in w]
+    assert len(notes) == 1 and "243.16" in notes[0] and "leave k empty" in notes[0], notes
+
+
 def test_resistance_alloy_warns(catalogue):
     out = run(catalogue, material="cu-ni-55-45", resistance_hot="10.01 ohm")
     assert any("changes little with temperature" in w for w in out["warnings"])

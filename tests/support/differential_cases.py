@@ -202,7 +202,8 @@ def new_calculator_cases(catalogue):
             add("thin_film", "", {"material": material, **extra})
     for material, k in (("IACS", ""), ("Cu", ""), ("1350", ""), ("Al", ""), ("Ag", ""), ("cu-ni-55-45", ""),
                         ("steel-low-carbon", ""), ("", "234.5"), ("", "-225 °C"), ("", "234.5 K"), ("", "20 °C"),
-                        ("", ""), ("", "abc"), ("", "0"), ("Cu", "235"), ("xx", "")):
+                        ("", ""), ("", "abc"), ("", "0"), ("Cu", "235"), ("xx", ""), ("1350", "234.5"),
+                        ("IACS", "225"), ("Ag", "100")):
         for r1, t1, r2, coolant in (("10 ohm", "20 °C", "12.5 ohm", ""), ("125 mohm", "25 °C", "160 mohm", "30 °C"),
                                     ("10 ohm", "20 °C", "1 ohm", ""), ("0 ohm", "", "-1 ohm", "abc")):
             add("temperature_rise", "", {"material": material, "k": k, "resistance_cold": r1, "temperature_cold": t1,

@@ -46,6 +46,11 @@ HIGHEST_MELTING_POINT = 3695.15
 # span where the linear R(T) behind the method is good for copper and aluminium (core.practice)
 LINEAR_FROM = ZERO_CELSIUS - 50.0
 LINEAR_TO = ZERO_CELSIUS + 200.0
+# a typed k more than this fraction away from the material's own k is questioned (our threshold, no
+# source: wider than IEC 60034-1's rounding of copper's 234.5 to 235, 0.2 %; copper's k against EC
+# aluminium's, 234.5 against 225, is 4 %)
+K_MISMATCH = 0.02
+STANDARD_K = "IEEE Std 118, IEC 60034-1"  # where copper's 234.5 and EC aluminium's 225 come from
 
 
 # __pragma__ ('nokwargs')
@@ -144,6 +149,53 @@ def material_k(outcome, m, catalogue):
     if m["alpha"] < 1e-3:
         add_warning(outcome, SMALL_CHANGE.replace("{name}", m["name"]))
     return k
+
+
+def material_k_value(m, catalogue):
+    """[k [K], where it comes from] that material m alone gives (what material_k uses, without its notes):
+    copper 234.5 and EC aluminium 225 from the standards (STANDARD_K), else 1/α − t_ref; None without a
+    positive α.
+
+    Examples
+    --------
+    >>> catalogue = {"aliases": {"cu": "copper-annealed"}}
+    >>> material_k_value({"id": "copper-annealed", "klass": "conductor-grade", "name": "annealed copper"}, catalogue)
+    [234.5, 'IEEE Std 118, IEC 60034-1']
+    >>> alloy = {"id": "copper-alloy-x", "klass": "copper-alloy", "name": "alloy X", "alpha": 0.0039, "t_ref": 293.15}
+    >>> round(material_k_value(alloy, catalogue)[0], 2)
+    236.41
+    """
+    if is_copper(m, catalogue):
+        return [practice.K_COPPER, STANDARD_K]
+    if is_ec_aluminium(m, catalogue):
+        return [practice.K_ALUMINIUM, STANDARD_K]
+    if not (m["alpha"] > 0):
+        return None
+    return [practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"]), "1/α − t_ref from its temperature coefficient"]
+
+
+def note_k_mismatch(outcome, k, m, catalogue, r1, t1, r2, t2):
+    """A typed k that is not the named material's (copper's 234.5 kept for an aluminium winding): say
+    so, with the material's k. For copper and EC aluminium, also the temperature their standard k
+    gives, t2 = (R2/R1)(k + t1) − k; for other materials, that leaving k empty uses their own ρ(T)
+    (what this calculator does then: their curve, or k from α). Differences up to K_MISMATCH pass
+    quietly (IEC 60034-1 rounds copper's 234.5 to 235)."""
+    own = material_k_value(m, catalogue)
+    if own is None or not (abs(k - own[0]) > K_MISMATCH * own[0]):
+        return
+    text = ("the k entered is not the k of " + m["name"] + ", which is " + format_number(own[0], 5)
+            + " (" + own[1] + ")")
+    if own[1] != STANDARD_K:
+        add_warning(outcome, text + "; leave k empty to use the material's own resistivity data")
+        return
+    try:
+        t2_own = practice.resistance_method_temperature(r1, t1, r2, own[0])
+    except CoreError:
+        t2_own = -1.0
+    if t2_own > 0 and t2_own - t2 == t2_own - t2 and abs(t2_own - t2) >= 0.05:
+        text = (text + ": with it the winding would be at " + celsius_text(t2_own) + ", "
+                + format_fixed(abs(t2_own - t2), 1) + " K " + ("higher" if t2_own > t2 else "lower"))
+    add_warning(outcome, text + "; check the winding's material and k")
 
 
 def add_temperatures(outcome, t1, t2, r1, r2, coolant, coolant_bad):
@@ -295,6 +347,8 @@ def calculate(inputs, catalogue):
                              "is good for copper and aluminium")
     if r2 < r1:
         add_warning(outcome, "R2 is below R1: the winding was colder at the second measurement")
+    if m is not None and len(field_text(inputs, "k")) > 0:
+        note_k_mismatch(outcome, k, m, catalogue, r1, t1, r2, t2)
     check_finite_results(outcome, "resistance_hot")
     return outcome
 # __pragma__ ('kwargs')
