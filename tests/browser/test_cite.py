@@ -38,6 +38,8 @@ def test_row_and_table_citations_over_http(browser, served_site, built_site):
     check_row_citation(text, edition_of(built_site), served_site)
     assert page.evaluate("navigator.clipboard.readText()") == text
     page.click("#resistivity-temperature button.cite[data-cite='table']")
+    # the output is written once the clipboard has taken the text (a promise): wait for the new text
+    page.wait_for_function("document.getElementById('cite-output').value.indexOf(' rows; columns') >= 0")
     table_text = page.eval_on_selector("#cite-output", "e => e.value")
     assert "rows; columns: Temperature [°C]" in table_text and table_text.endswith("#resistivity-temperature")
     # a 44 px touch target
