@@ -72,6 +72,18 @@ def test_safety_in_caution_and_every_outcome(catalogue):
         assert any("voltage drop only" in w and "ampacity" in w and "licensed practice" in w for w in out["warnings"])
 
 
+def test_a_size_far_below_the_current_is_questioned(catalogue):
+    # 30 % of 230 V = 69 V over 30 m at 16 A: A_min = 2 * 2.0629e-8 * 30 * 16 / 69 = 0.287 mm², next
+    # size 0.5 mm², and 16 A / 0.5 mm² = 32 A/mm² (by hand), over 13 A/mm² (1.5 mm² copper in PVC carrying
+    # 19.5 A, IEC 60364-5-52 Table B.52.4, from memory): the drop is met, the note questions the size
+    out = run(catalogue, max_drop="30 %")
+    assert value(out, "next_metric_size") == pytest.approx(0.5e-6, rel=1e-15, abs=0)
+    notes = [w for w in out["warnings"] if "current density at the metric size" in w]
+    assert len(notes) == 1 and "32 A/mm²" in notes[0] and "current-rating table" in notes[0], out["warnings"]
+    # the worked example above, 16 A in 4 mm² = 4 A/mm²: no note
+    assert not any("current density" in w for w in run(catalogue)["warnings"])
+
+
 def test_beyond_the_tables_warns(catalogue):
     out = run(catalogue, length="5 km", current="400 A")
     assert "next_metric_size" not in out["results"] and "next_awg" not in out["results"]

@@ -230,7 +230,7 @@ def new_calculator_cases(catalogue):
         for extra in ({}, {"max_drop": "6.9 V", "supply": ""}, {"conductors": "3-phase", "supply": "400 V"},
                       {"conductors": "1"}, {"conductors": "3"}, {"max_drop": "3"}, {"max_drop": "3 %", "supply": ""},
                       {"max_drop": "300 V"}, {"length": "20 km", "current": "400 A"}, {"length": "-3 m", "current": "0 A"},
-                      {"max_drop": "150 %"}, {"length": "1 mm", "current": "1 mA", "max_drop": "10 V"}):
+                      {"max_drop": "150 %"}, {"max_drop": "30 %"}, {"length": "1 mm", "current": "1 mA", "max_drop": "10 V"}):
             add("sizing", "", {"material": material, "length": "30 m", "current": "16 A", "max_drop": "3 %",
                                "supply": "230 V", "conductors": "2", "temperature": "70 °C", **extra})
     check = {"material": "IACS", "resistance": "0.736 ohm", "temperature": "23.5 °C", "length": "100 m",

@@ -48,6 +48,15 @@ CAUTION = ("Sizes for voltage drop only: not for current rating (ampacity and he
 SAFETY = ("sized for voltage drop only, not for current rating (ampacity, heating), short-circuit withstand or "
           "mechanical strength; installations follow the local electrical code and licensed practice")
 
+# [A/m²] a current density at the metric size above this is questioned: above what installed building
+# wiring carries (1.5 mm² copper in PVC, reference method C: 19.5 A, 13 A/mm², IEC 60364-5-52 Table
+# B.52.4, from memory; larger sizes carry less per mm²). The threshold itself is ours (no source).
+DENSITY_CAUTION = 15e6
+DENSITY_NOTE = ("is above what installed building wiring carries (about 13 A/mm² for 1.5 mm² copper in PVC, "
+                "IEC 60364-5-52 Table B.52.4, from memory; larger sizes carry less): the size that meets the drop "
+                "is likely too small for the current; check it against a current-rating table for the cable and "
+                "its installation")
+
 THREE_PHASE = ["3-phase", "3 phase", "3phase", "3ph", "3~", "three-phase", "three phase", "3-phase ac"]
 TWO_WIRE = ["2", "2-wire", "2 wire", "two-wire", "dc", "single-phase", "single phase", "1-phase", "1 phase"]
 ONE_WIRE = ["1", "1-wire", "total"]
@@ -193,6 +202,9 @@ def calculate(inputs, catalogue):
                        format_number(100.0 * u / supply, 3) + " %")
         add_result(outcome, "voltage_drop", u, "V", u_text)
         add_result(outcome, "power_loss", p, "W", format_si(p, "W", 4))
+        if current / area > DENSITY_CAUTION:
+            add_warning(outcome, "the current density at the metric size, " + format_number(current / area / 1e6, 3)
+                        + " A/mm², " + DENSITY_NOTE)
         warn_if_fusing(outcome, current, area)
     else:
         add_warning(outcome, "the minimum cross-section exceeds the largest IEC 60228 size (2500 mm²): split the run "
