@@ -33,13 +33,15 @@ def test_row_and_table_citations_over_http(browser, served_site, built_site):
     context.grant_permissions(["clipboard-read", "clipboard-write"], origin=served_site)
     page.goto(f"{served_site}/materials/copper-annealed/index.html", wait_until="load")
     page.click("#resistivity-temperature--t-20c button.cite")
-    page.wait_for_function("document.getElementById('cite-output') && document.getElementById('cite-output').value")
+    page.wait_for_function("() => document.getElementById('cite-output') && document.getElementById('cite-output').value")
     text = page.eval_on_selector("#cite-output", "e => e.value")
     check_row_citation(text, edition_of(built_site), served_site)
     assert page.evaluate("navigator.clipboard.readText()") == text
     page.click("#resistivity-temperature button.cite[data-cite='table']")
-    # the output is written once the clipboard has taken the text (a promise): wait for the new text
-    page.wait_for_function("document.getElementById('cite-output').value.indexOf(' rows; columns') >= 0")
+    # the output is written once the clipboard has taken the text (a promise): wait for the new text. A
+    # predicate as a function: the page's CSP (script-src 'self') refuses the eval that Playwright's
+    # polling of a bare expression needs, which only shows when the first check is not already true
+    page.wait_for_function("() => document.getElementById('cite-output').value.indexOf(' rows; columns') >= 0")
     table_text = page.eval_on_selector("#cite-output", "e => e.value")
     assert "rows; columns: Temperature [°C]" in table_text and table_text.endswith("#resistivity-temperature")
     # a 44 px touch target
@@ -54,7 +56,7 @@ def test_row_citation_from_a_copied_folder(browser, built_site):
     path = built_site / "materials" / "copper-annealed" / "index.html"
     page.goto(path.as_uri(), wait_until="load")
     page.click("#resistivity-temperature--t-20c button.cite")
-    page.wait_for_function("document.getElementById('cite-output') && document.getElementById('cite-output').value")
+    page.wait_for_function("() => document.getElementById('cite-output') && document.getElementById('cite-output').value")
     text = page.eval_on_selector("#cite-output", "e => e.value")
     check_row_citation(text, edition_of(built_site), "file://")
     assert page.errors == []
