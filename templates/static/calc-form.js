@@ -78,11 +78,28 @@ function writeQuery(form) {
   window.history.replaceState(null, '', window.location.pathname + search + window.location.hash);
 }
 
+// A field's label as the page shows it ("Cross-section"), or '' without one (a hidden field).
+function labelOf(input) {
+  const label = input.id ? document.querySelector('label[for="' + input.id + '"]') : null;
+  return label ? label.textContent.trim() : '';
+}
+
+// The core's notes about one field begin with the field's name, as the command line's options do
+// ("size: “10 ga” is read as 10 AWG …"); on the page the field is named by its label
+// ("Cross-section: “10 ga” is read as …"), the words the person sees above the field.
+function inFieldWords(view, text) {
+  const colon = text.indexOf(': ');
+  if (colon < 1) return text;
+  const name = text.slice(0, colon);
+  const field = view.fields.find((entry) => entry.visible && entry.name === name);
+  return field && field.label ? field.label + text.slice(colon) : text;
+}
+
 // The page parts one form writes, found once: a calculator update then only compares and writes.
 function viewOf(form) {
   const section = form.closest('section');
   const fields = fieldsOf(form).map((input) => ({
-    input, name: input.name, visible: input.type !== 'hidden',
+    input, name: input.name, visible: input.type !== 'hidden', label: labelOf(input),
     slot: document.getElementById(input.id + '-error'), message: null, shown: null, editing: false, timer: 0, due: 0}));
   // the key-result strip repeats some results (data-key-result): each mirrors its data-result cell
   const keyCells = Array.from(section.querySelectorAll('[data-key-result]'));
@@ -195,7 +212,7 @@ function show(view, outcome) {
   const problems = general.join(' · ');
   if (view.problemsNode && problems !== view.general) setText(view.problemsNode, problems);
   view.general = problems;
-  if (view.warningsNode) showList(view.warningsNode, view.warnings, outcome.warnings);
+  if (view.warningsNode) showList(view.warningsNode, view.warnings, outcome.warnings.map((text) => inFieldWords(view, text)));
   showMaterials(view, outcome.used || []);
   const model = outcome.model ? 'Model: ' + outcome.model : '';
   if (view.modelNode && model !== view.model) setText(view.modelNode, model);

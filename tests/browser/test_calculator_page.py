@@ -6,8 +6,10 @@ from urllib.parse import quote
 
 import pytest
 
+from conductor_atlas.core import calc_resistance
 from conductor_atlas.core.calculators import calculate
 from tests.browser.conftest import start_calculator
+from tests.support.outcomes import in_field_words
 
 pytestmark = pytest.mark.browser
 
@@ -131,6 +133,22 @@ def test_an_update_changes_texts_in_place_and_keeps_the_warnings_list_in_step(pa
         assert page.text_content("[data-result=resistance]") == expected["results"]["resistance"]["text"]
         assert page.evaluate("() => document.querySelector('[data-result=resistance]').firstChild === window.shownNode")
         items = page.eval_on_selector_all("#calc-resistance .calc-warnings li", "els => els.map((e) => e.textContent)")
-        assert items == expected["warnings"]
+        assert items == [in_field_words(text, calc_resistance) for text in expected["warnings"]]
         assert page.is_visible("#calc-resistance .calc-warnings") == bool(expected["warnings"])
+    assert page.errors == []
+
+
+@pytest.mark.parametrize("address, starts", [
+    # the core's note begins "size: “10 ga” is read as 10 AWG" (its field name, as the command line's --size)
+    ("calculators/resistance/index.html?size=10%20ga", "Cross-section: “10 ga” is read as 10 AWG"),
+    # and "resistance_cold: “1.500” is read with a decimal point as 1.5"
+    ("calculators/temperature-rise/index.html?resistance_cold=1.500%20ohm",
+     "Cold resistance R1: “1.500” is read with a decimal point as 1.5"),
+])
+def test_a_note_about_a_field_names_it_by_its_label(page, served_site, address, starts):
+    page.goto(f"{served_site}/{address}")
+    page.wait_for_selector("html.calc-ready", state="attached")
+    notes = page.eval_on_selector_all(".calc-warnings li", "els => els.map(e => e.textContent)")
+    assert any(note.startswith(starts) for note in notes), notes
+    assert not any(note.startswith(("size:", "resistance_cold:")) for note in notes), notes
     assert page.errors == []
