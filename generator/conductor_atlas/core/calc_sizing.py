@@ -4,6 +4,7 @@ import math
 
 from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
+from conductor_atlas.core.resistance import current_density
 from conductor_atlas.core.geometry import awg_area, awg_name, next_awg, next_metric_size
 from conductor_atlas.core.text_match import name_key
 from conductor_atlas.core.numfmt import format_number, format_si, temperature_text
@@ -202,8 +203,9 @@ def calculate(inputs, catalogue):
                        format_number(100.0 * u / supply, 3) + " %")
         add_result(outcome, "voltage_drop", u, "V", u_text)
         add_result(outcome, "power_loss", p, "W", format_si(p, "W", 4))
-        if current / area > DENSITY_CAUTION:
-            add_warning(outcome, "the current density at the metric size, " + format_number(current / area / 1e6, 3)
+        density = current_density(current, area)
+        if density > DENSITY_CAUTION:
+            add_warning(outcome, "the current density at the metric size, " + format_number(density / 1e6, 3)
                         + " A/mm², " + DENSITY_NOTE)
         warn_if_fusing(outcome, current, area)
     else:

@@ -4,7 +4,7 @@ from conductor_atlas.core.errors import CoreError
 from conductor_atlas.core import practice
 from conductor_atlas.core.celsius import ZERO_CELSIUS
 from conductor_atlas.core.text_match import name_key
-from conductor_atlas.core.numfmt import celsius_text, format_fixed, format_number, temperature_text
+from conductor_atlas.core.numfmt import celsius_text, format_fixed, format_number, is_finite, temperature_text
 from conductor_atlas.core.outcome import (keys_of, add_error, add_result, add_sources, add_warning, check_finite_results, has_errors,
                                           new_outcome)
 from conductor_atlas.core.calc_inputs import field_text, read_material, read_quantity, require_positive
@@ -127,21 +127,21 @@ def material_k(outcome, m, catalogue):
     >>> material_k(outcome, copper, catalogue), round(material_k(outcome, alloy, catalogue), 2)
     (234.5, 236.41)
     """
-    if is_copper(m, catalogue):
-        add_warning(outcome, "k = 234.5 for copper, as IEEE Std 118 and IEEE Std 112 use it; IEC 60034-1 rounds it "
-                             "to 235 (from memory); enter k to use another value")
-        add_sources(outcome, ["ieee118", "iec60034-1"])
-        return practice.K_COPPER
-    if is_ec_aluminium(m, catalogue):
-        add_warning(outcome, "k = 225 for EC aluminium, as IEEE Std 118, IEEE Std 112 and IEC 60034-1 use it (from "
-                             "memory); enter k to use another value")
-        add_sources(outcome, ["ieee118", "iec60034-1"])
-        return practice.K_ALUMINIUM
-    if not (m["alpha"] > 0):
+    own = material_k_value(m, catalogue)
+    if own is None:
         add_error(outcome, "material", "no positive temperature coefficient is on record for " + m["name"]
                   + "; enter k")
         return None
-    k = practice.inferred_zero_from_alpha(m["alpha"], m["t_ref"])
+    k = own[0]
+    if own[1] == STANDARD_K:
+        if is_copper(m, catalogue):
+            add_warning(outcome, "k = 234.5 for copper, as IEEE Std 118 and IEEE Std 112 use it; IEC 60034-1 rounds "
+                                 "it to 235 (from memory); enter k to use another value")
+        else:
+            add_warning(outcome, "k = 225 for EC aluminium, as IEEE Std 118, IEEE Std 112 and IEC 60034-1 use it "
+                                 "(from memory); enter k to use another value")
+        add_sources(outcome, ["ieee118", "iec60034-1"])
+        return k
     add_sources(outcome, [m["alpha_source"]])
     add_warning(outcome, "k = " + format_number(k, 4) + " from the temperature coefficient of " + m["name"] + " (α = "
                 + format_number(m["alpha"], 4) + " /K at " + celsius_text(m["t_ref"])
@@ -152,7 +152,7 @@ def material_k(outcome, m, catalogue):
 
 
 def material_k_value(m, catalogue):
-    """[k [K], where it comes from] that material m alone gives (what material_k uses, without its notes):
+    """[k [K], where it comes from] that material m alone gives (material_k adds its notes):
     copper 234.5 and EC aluminium 225 from the standards (STANDARD_K), else 1/α − t_ref; None without a
     positive α.
 
@@ -192,7 +192,7 @@ def note_k_mismatch(outcome, k, m, catalogue, r1, t1, r2, t2):
         t2_own = practice.resistance_method_temperature(r1, t1, r2, own[0])
     except CoreError:
         t2_own = -1.0
-    if t2_own > 0 and t2_own - t2 == t2_own - t2 and abs(t2_own - t2) >= 0.05:
+    if t2_own > 0 and is_finite(t2_own) and abs(t2_own - t2) >= 0.05:
         text = (text + ": with it the winding would be at " + celsius_text(t2_own) + ", "
                 + format_fixed(abs(t2_own - t2), 1) + " K " + ("higher" if t2_own > t2 else "lower"))
     add_warning(outcome, text + "; check the winding's material and k")
